@@ -1,0 +1,13 @@
+import { AppHeader } from "@/components/app-header";
+import { requirePageUser } from "@/lib/server/dal";
+
+export default async function AppLayout({ children }: { children: React.ReactNode }) {
+  // Layouts are not a safe place for access checks (pages check again); this only draws the header.
+  const user = await requirePageUser();
+  return (
+    <>
+      <AppHeader user={user} />
+      <main className="mx-auto flex max-w-6xl flex-col gap-6 px-4 py-6">{children}</main>
+    </>
+  );
+}

@@ -1,0 +1,38 @@
+import Image from "next/image";
+import Link from "next/link";
+import { signOutAction } from "@/lib/actions/auth";
+import type { CurrentUser } from "@/lib/server/dal";
+import { Badge } from "./ui/panel";
+
+export function AppHeader({ user }: { user: CurrentUser }) {
+  return (
+    <header className="no-print border-b border-paper-edge bg-paper/95">
+      <div className="mx-auto flex max-w-6xl items-center gap-6 px-4 py-2">
+        <Link href="/projects" className="flex items-center gap-2 font-semibold tracking-tight">
+          <Image src="/logo.svg" alt="" width={40} height={25} />
+          Axlewright
+        </Link>
+        <nav aria-label="Main" className="flex gap-4 text-sm">
+          <Link href="/projects" className="hover:underline">
+            Projects
+          </Link>
+          {user.role === "admin" ? (
+            <Link href="/admin/users" className="hover:underline">
+              People
+            </Link>
+          ) : null}
+        </nav>
+        <div className="ml-auto flex items-center gap-3 text-sm">
+          <span data-testid="current-user">
+            {user.name} <Badge>{user.role}</Badge>
+          </span>
+          <form action={signOutAction}>
+            <button type="submit" className="text-ink-soft hover:underline">
+              Sign out
+            </button>
+          </form>
+        </div>
+      </div>
+    </header>
+  );
+}

@@ -1,0 +1,73 @@
+import "server-only";
+import { desc, eq, inArray } from "drizzle-orm";
+import { alias } from "drizzle-orm/mysql-core";
+import { db } from "@/db";
+import { organisations, projectMembers, projects, type ProjectStatus } from "@/db/schema";
+import { audit } from "@/lib/server/audit";
+import type { CurrentUser } from "@/lib/server/dal";
+import { clientOrganisationId } from "./organisations";
+
+export interface ProjectSummary {
+  id: number;
+  name: string;
+  clientOrganisation: string | null;
+  site: string;
+  status: ProjectStatus;
+  updatedAt: string;
+}
+
+const clientOrg = alias(organisations, "client_org");
+
+function summaryQuery() {
+  return db
+    .select({
+      id: projects.id,
+      name: projects.name,
+      clientOrganisation: clientOrg.name,
+      site: projects.site,
+      status: projects.status,
+      updatedAt: projects.updatedAt,
+    })
+    .from(projects)
+    .leftJoin(clientOrg, eq(clientOrg.id, projects.clientOrganisationId));
+}
+
+const toSummary = (row: Awaited<ReturnType<typeof summaryQuery>>[number]): ProjectSummary => ({ ...row, updatedAt: row.updatedAt.toISOString() });
+
+/** Projects the user belongs to; every project for an admin. Newest change first. */
+export async function listVisibleProjects(user: CurrentUser): Promise<ProjectSummary[]> {
+  if (user.role === "admin") return (await summaryQuery().orderBy(desc(projects.updatedAt), desc(projects.id))).map(toSummary);
+  const memberOf = db.select({ id: projectMembers.projectId }).from(projectMembers).where(eq(projectMembers.userId, user.id));
+  return (await summaryQuery().where(inArray(projects.id, memberOf)).orderBy(desc(projects.updatedAt), desc(projects.id))).map(toSummary);
+}
+
+export async function getProjectSummary(projectId: number): Promise<ProjectSummary | null> {
+  const [row] = await summaryQuery().where(eq(projects.id, projectId)).limit(1);
+  return row ? toSummary(row) : null;
+}
+
+/** A new project; a fabricator who creates it becomes its fabricator member. */
+export async function createProject(actor: CurrentUser, input: { name: string; site: string; clientOrganisation: string }): Promise<number> {
+  return db.transaction(async (tx) => {
+    const orgId = await clientOrganisationId(tx, input.clientOrganisation);
+    const [res] = await tx.insert(projects).values({ name: input.name, site: input.site, clientOrganisationId: orgId, createdById: actor.id });
+    const projectId = res.insertId;
+    if (actor.role === "fabricator") await tx.insert(projectMembers).values({ projectId, userId: actor.id, role: "fabricator", addedById: actor.id });
+    await audit(tx, { actorId: actor.id, action: "create", entity: "projects", entityId: projectId, projectId, detail: { name: input.name } });
+    return projectId;
+  });
+}
+
+export async function updateProject(
+  actor: CurrentUser,
+  projectId: number,
+  input: { name?: string; site?: string; clientOrganisation?: string; status?: ProjectStatus },
+): Promise<void> {
+  await db.transaction(async (tx) => {
+    const { clientOrganisation, ...rest } = input;
+    const changes: Partial<typeof projects.$inferInsert> = { ...rest };
+    if (clientOrganisation !== undefined) changes.clientOrganisationId = await clientOrganisationId(tx, clientOrganisation);
+    await tx.update(projects).set(changes).where(eq(projects.id, projectId));
+    await audit(tx, { actorId: actor.id, action: "update", entity: "projects", entityId: projectId, projectId, detail: input });
+  });
+}

@@ -1,0 +1,119 @@
+// Tables of Axlewright. Later features (designs, revisions, sign-offs, cut plans, files, build-log
+// entries) hang off `projects` and `users` by foreign key and log into `audit_log`, so these tables
+// do not need reshaping when they arrive.
+import { relations } from "drizzle-orm";
+import {
+  boolean,
+  index,
+  int,
+  json,
+  mysqlEnum,
+  mysqlTable,
+  timestamp,
+  uniqueIndex,
+  varchar,
+} from "drizzle-orm/mysql-core";
+
+export const USER_ROLES = ["admin", "fabricator", "client", "installer"] as const;
+export type UserRole = (typeof USER_ROLES)[number];
+
+/** A person's part in one project (an admin needs no membership to see everything). */
+export const MEMBER_ROLES = ["fabricator", "client", "installer"] as const;
+export type MemberRole = (typeof MEMBER_ROLES)[number];
+
+export const PROJECT_STATUSES = ["design", "review", "approved", "cutting", "installing", "installed", "archived"] as const;
+export type ProjectStatus = (typeof PROJECT_STATUSES)[number];
+
+export const ORGANISATION_KINDS = ["shop", "client", "installer"] as const;
+
+export const organisations = mysqlTable("organisations", {
+  id: int("id").autoincrement().primaryKey(),
+  name: varchar("name", { length: 160 }).notNull().unique(),
+  kind: mysqlEnum("kind", ORGANISATION_KINDS).notNull(),
+  createdAt: timestamp("created_at").notNull().defaultNow(),
+});
+
+export const users = mysqlTable("users", {
+  id: int("id").autoincrement().primaryKey(),
+  email: varchar("email", { length: 254 }).notNull().unique(),
+  name: varchar("name", { length: 120 }).notNull(),
+  passwordHash: varchar("password_hash", { length: 255 }).notNull(),
+  role: mysqlEnum("role", USER_ROLES).notNull(),
+  active: boolean("active").notNull().default(true),
+  organisationId: int("organisation_id").references(() => organisations.id),
+  createdAt: timestamp("created_at").notNull().defaultNow(),
+  updatedAt: timestamp("updated_at").notNull().defaultNow().onUpdateNow(),
+});
+
+export const projects = mysqlTable("projects", {
+  id: int("id").autoincrement().primaryKey(),
+  name: varchar("name", { length: 160 }).notNull(),
+  clientOrganisationId: int("client_organisation_id").references(() => organisations.id),
+  site: varchar("site", { length: 200 }).notNull().default(""),
+  status: mysqlEnum("status", PROJECT_STATUSES).notNull().default("design"),
+  createdById: int("created_by_id").references(() => users.id),
+  createdAt: timestamp("created_at").notNull().defaultNow(),
+  updatedAt: timestamp("updated_at").notNull().defaultNow().onUpdateNow(),
+});
+
+export const projectMembers = mysqlTable(
+  "project_members",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    projectId: int("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    userId: int("user_id").notNull().references(() => users.id),
+    role: mysqlEnum("role", MEMBER_ROLES).notNull(),
+    addedById: int("added_by_id").references(() => users.id),
+    createdAt: timestamp("created_at").notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("project_members_project_user").on(t.projectId, t.userId), index("project_members_user").on(t.userId)],
+);
+
+/** Who did what to which record, when. `entity` names the table, so later tables log here too. */
+export const auditLog = mysqlTable(
+  "audit_log",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    actorId: int("actor_id").references(() => users.id),
+    action: varchar("action", { length: 64 }).notNull(),
+    entity: varchar("entity", { length: 64 }).notNull(),
+    entityId: varchar("entity_id", { length: 64 }).notNull(),
+    projectId: int("project_id").references(() => projects.id, { onDelete: "set null" }),
+    detail: json("detail").$type<Record<string, unknown>>(),
+    createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
+  },
+  (t) => [index("audit_log_entity").on(t.entity, t.entityId), index("audit_log_project").on(t.projectId)],
+);
+
+/** Sign-in attempts, kept in the database so the rate limit holds across several app instances. */
+export const signInAttempts = mysqlTable(
+  "sign_in_attempts",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    email: varchar("email", { length: 254 }).notNull(),
+    address: varchar("address", { length: 64 }).notNull(),
+    succeeded: boolean("succeeded").notNull(),
+    createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
+  },
+  (t) => [index("sign_in_attempts_email").on(t.email, t.createdAt), index("sign_in_attempts_address").on(t.address, t.createdAt)],
+);
+
+export const usersRelations = relations(users, ({ one, many }) => ({
+  organisation: one(organisations, { fields: [users.organisationId], references: [organisations.id] }),
+  memberships: many(projectMembers),
+}));
+
+export const projectsRelations = relations(projects, ({ one, many }) => ({
+  clientOrganisation: one(organisations, { fields: [projects.clientOrganisationId], references: [organisations.id] }),
+  members: many(projectMembers),
+}));
+
+export const projectMembersRelations = relations(projectMembers, ({ one }) => ({
+  project: one(projects, { fields: [projectMembers.projectId], references: [projects.id] }),
+  user: one(users, { fields: [projectMembers.userId], references: [users.id] }),
+}));
+
+export type User = typeof users.$inferSelect;
+export type Project = typeof projects.$inferSelect;
+export type ProjectMember = typeof projectMembers.$inferSelect;
+export type Organisation = typeof organisations.$inferSelect;

@@ -1,0 +1,81 @@
+import "server-only";
+// The one place that decides who is asking and what they may do. Every page, server action and
+// route handler calls these; the proxy only redirects early.
+import { and, eq } from "drizzle-orm";
+import { redirect } from "next/navigation";
+import { cache } from "react";
+import { auth } from "@/auth";
+import { db } from "@/db";
+import { projectMembers, projects, users, type MemberRole, type UserRole } from "@/db/schema";
+import { AppError } from "./errors";
+
+export interface CurrentUser {
+  id: number;
+  email: string;
+  name: string;
+  role: UserRole;
+}
+
+/** The signed-in, active user, read fresh from the database, or null. */
+export const getCurrentUser = cache(async (): Promise<CurrentUser | null> => {
+  const session = await auth();
+  const id = Number(session?.user?.id);
+  if (!Number.isInteger(id) || id <= 0) return null;
+  const [user] = await db
+    .select({ id: users.id, email: users.email, name: users.name, role: users.role, active: users.active })
+    .from(users)
+    .where(eq(users.id, id))
+    .limit(1);
+  if (!user || !user.active) return null;
+  return { id: user.id, email: user.email, name: user.name, role: user.role };
+});
+
+export async function requireUser(): Promise<CurrentUser> {
+  const user = await getCurrentUser();
+  if (!user) throw new AppError("unauthorized");
+  return user;
+}
+
+export async function requireRole(...roles: UserRole[]): Promise<CurrentUser> {
+  const user = await requireUser();
+  if (!roles.includes(user.role)) throw new AppError("forbidden");
+  return user;
+}
+
+export interface ProjectAccess {
+  user: CurrentUser;
+  projectId: number;
+  /** The user's role in this project; null for an admin who is not a member. */
+  memberRole: MemberRole | null;
+  /** May change the project and its members: an admin, or the project's fabricator. */
+  canManage: boolean;
+}
+
+/**
+ * The caller's access to one project. A project the caller does not belong to answers 404, the
+ * same as one that does not exist, so ids reveal nothing. `manage` asks for change rights (403 otherwise).
+ */
+export async function requireProjectAccess(projectId: number, need: "view" | "manage" = "view"): Promise<ProjectAccess> {
+  const user = await requireUser();
+  const notFound = new AppError("not_found", "No such project.");
+  if (!Number.isInteger(projectId) || projectId <= 0) throw notFound;
+  const [row] = await db
+    .select({ id: projects.id, memberRole: projectMembers.role })
+    .from(projects)
+    .leftJoin(projectMembers, and(eq(projectMembers.projectId, projects.id), eq(projectMembers.userId, user.id)))
+    .where(eq(projects.id, projectId))
+    .limit(1);
+  if (!row) throw notFound;
+  const memberRole = row.memberRole ?? null;
+  if (user.role !== "admin" && !memberRole) throw notFound;
+  const canManage = user.role === "admin" || (memberRole === "fabricator" && user.role === "fabricator");
+  if (need === "manage" && !canManage) throw new AppError("forbidden", "Only the project's fabricator or an admin can change this project.");
+  return { user, projectId, memberRole, canManage };
+}
+
+/** For pages: the signed-in user, or a redirect to the sign-in page. */
+export async function requirePageUser(): Promise<CurrentUser> {
+  const user = await getCurrentUser();
+  if (!user) redirect("/login");
+  return user;
+}

@@ -1,0 +1,28 @@
+import "server-only";
+// Outgoing mail through nodemailer's SMTP transport: the local mail sink on loopback in development
+// and tests, the shop's mail service in production (same settings, other host).
+import nodemailer from "nodemailer";
+
+let transport: nodemailer.Transporter | undefined;
+
+function getTransport() {
+  transport ??= nodemailer.createTransport({
+    host: process.env.SMTP_HOST ?? "127.0.0.1",
+    port: Number(process.env.SMTP_PORT ?? 2525),
+    secure: false,
+    ignoreTLS: process.env.SMTP_HOST === "127.0.0.1",
+    ...(process.env.SMTP_USER ? { auth: { user: process.env.SMTP_USER, pass: process.env.SMTP_PASSWORD } } : {}),
+  });
+  return transport;
+}
+
+/** Sends a plain-text message. A mail failure is logged and does not undo the change that caused it. */
+export async function sendMail(message: { to: string; subject: string; text: string }): Promise<boolean> {
+  try {
+    await getTransport().sendMail({ from: process.env.MAIL_FROM ?? "Axlewright <no-reply@example.test>", ...message });
+    return true;
+  } catch (error) {
+    console.error("[axlewright] mail not sent:", error instanceof Error ? error.message : error);
+    return false;
+  }
+}

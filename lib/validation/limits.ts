@@ -1,0 +1,1 @@
+export const PASSWORD_MIN_LENGTH = 10;

@@ -1,0 +1,47 @@
+// `npm test`: the same preparation as `npm start`, against a throw-away database on its own port
+// and folder, then every test: unit and integration (vitest), then browser tests in Chromium.
+// Exits non-zero when anything fails, and stops every process it started.
+import path from "node:path";
+import { testSettings } from "./lib/env.mjs";
+import {
+  buildApp, createAppDatabase, debian, ensureDebianPackages, ensureNodeModules, log, onInterrupt, root, run,
+  startApp, startMailSink, startMariaDb, tsx, waitForStopped,
+} from "./lib/services.mjs";
+
+const vitest = path.join(root, "node_modules/.bin/vitest");
+
+async function main() {
+  ensureNodeModules();
+  ensureDebianPackages([debian.mariadb, debian.chromium, debian.mpmath, debian.scipy]);
+  const s = testSettings();
+  const env = { ...s.env, AXLEWRIGHT_TEST_OUTPUT: path.join(root, "test-results") };
+  onInterrupt(() => waitForStopped());
+
+  const server = await startMariaDb({ dataDir: s.dataDir, port: s.dbPort, fresh: true });
+  createAppDatabase(server, { database: s.database, user: s.dbUser, password: s.dbPassword });
+  tsx("scripts/db/migrate.ts", env);
+  tsx("scripts/db/seed.ts", env);
+  await startMailSink(env);
+
+  log("type check (tsc --noEmit)…");
+  run(path.join(root, "node_modules/.bin/tsc"), ["--noEmit", "-p", "tsconfig.json"], { env });
+  log("unit and integration tests…");
+  run(vitest, ["run", "--config", "vitest.config.mts"], { env });
+
+  buildApp(env, ".next-test");
+  await startApp({ ...env, NEXT_DIST_DIR: ".next-test" }, s.appPort);
+  log("browser tests in Chromium…");
+  run(vitest, ["run", "--config", "vitest.e2e.config.mts"], { env });
+}
+
+let exitCode = 0;
+try {
+  await main();
+  log("all tests passed");
+} catch (error) {
+  console.error(`\n[axlewright] ${error instanceof Error ? error.message : String(error)}`);
+  exitCode = 1;
+} finally {
+  await waitForStopped();
+}
+process.exit(exitCode);
