@@ -9,6 +9,11 @@ import {
 } from "./lib/services.mjs";
 
 const vitest = path.join(root, "node_modules/.bin/vitest");
+// `npm test -- --no-browser` stops after the unit and integration tests (quicker while working);
+// any other arguments are handed to vitest as file filters, e.g. `npm test -- role-matrix`.
+const args = process.argv.slice(2);
+const noBrowser = args.includes("--no-browser");
+const filters = args.filter((a) => !a.startsWith("--"));
 
 async function main() {
   ensureNodeModules();
@@ -25,13 +30,16 @@ async function main() {
 
   log("type check (tsc --noEmit)…");
   run(path.join(root, "node_modules/.bin/tsc"), ["--noEmit", "-p", "tsconfig.json"], { env });
+  log("lint (eslint)…");
+  run(path.join(root, "node_modules/.bin/eslint"), ["."], { env });
   log("unit and integration tests…");
-  run(vitest, ["run", "--config", "vitest.config.mts"], { env });
+  run(vitest, ["run", "--config", "vitest.config.mts", ...filters], { env });
+  if (noBrowser) return;
 
   buildApp(env, ".next-test");
   await startApp({ ...env, NEXT_DIST_DIR: ".next-test" }, s.appPort);
   log("browser tests in Chromium…");
-  run(vitest, ["run", "--config", "vitest.e2e.config.mts"], { env });
+  run(vitest, ["run", "--config", "vitest.e2e.config.mts", ...filters], { env });
 }
 
 let exitCode = 0;

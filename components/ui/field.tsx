@@ -48,7 +48,8 @@ export function SelectField({
   return (
     <label className="flex flex-col gap-1 text-sm">
       <span className="font-medium">{label}</span>
-      <select name={name} className={inputClass} aria-invalid={errors?.length ? true : undefined} aria-describedby={errorId} {...select}>
+      {/* Keyed by its default so a failed submit, which resets the form, shows the value typed. */}
+      <select key={String(select.defaultValue ?? "")} name={name} className={inputClass} aria-invalid={errors?.length ? true : undefined} aria-describedby={errorId} {...select}>
         {options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}

@@ -11,8 +11,11 @@ export default async function LoginPage({ searchParams }: { searchParams: Promis
   const { callbackUrl } = await searchParams;
   let path = "/projects";
   try {
-    // Auth.js passes an absolute URL; keep only its path on this site.
-    if (callbackUrl) path = new URL(callbackUrl, "http://local").pathname;
+    // Keep only a path on this site, never another origin.
+    if (callbackUrl) {
+      const url = new URL(callbackUrl, "http://local");
+      path = url.pathname + url.search;
+    }
   } catch {
     /* keep the default */
   }
