@@ -25,14 +25,19 @@ function Messages({ id, errors, hint }: { id: string; errors?: string[]; hint?: 
 const inputClass =
   "w-full rounded-plate border bg-white/70 px-2.5 py-1.5 text-sm text-ink placeholder:text-ink-faint aria-[invalid=true]:border-caution border-ink-line";
 
-export function TextField({ label, name, errors, hint, ...input }: FieldProps & InputHTMLAttributes<HTMLInputElement>) {
-  const errorId = `${name}-error`;
+// The label holds only its words; hints and errors sit beside the control and are tied to it by
+// aria-describedby, so a screen reader (and a test) finds the field by its label alone.
+export function TextField({ label, name, errors, hint, id, ...input }: FieldProps & InputHTMLAttributes<HTMLInputElement>) {
+  const fieldId = id ?? `field-${name}`;
+  const errorId = `${fieldId}-error`;
   return (
-    <label className="flex flex-col gap-1 text-sm">
-      <span className="font-medium">{label}</span>
-      <input name={name} className={inputClass} aria-invalid={errors?.length ? true : undefined} aria-describedby={errorId} {...input} />
+    <div className="flex flex-col gap-1 text-sm">
+      <label htmlFor={fieldId} className="font-medium">
+        {label}
+      </label>
+      <input id={fieldId} name={name} className={inputClass} aria-invalid={errors?.length ? true : undefined} aria-describedby={errorId} {...input} />
       <Messages id={errorId} errors={errors} hint={hint} />
-    </label>
+    </div>
   );
 }
 
@@ -42,14 +47,18 @@ export function SelectField({
   errors,
   hint,
   options,
+  id,
   ...select
 }: FieldProps & SelectHTMLAttributes<HTMLSelectElement> & { options: { value: string; label: string }[] }) {
-  const errorId = `${name}-error`;
+  const fieldId = id ?? `field-${name}`;
+  const errorId = `${fieldId}-error`;
   return (
-    <label className="flex flex-col gap-1 text-sm">
-      <span className="font-medium">{label}</span>
+    <div className="flex flex-col gap-1 text-sm">
+      <label htmlFor={fieldId} className="font-medium">
+        {label}
+      </label>
       {/* Keyed by its default so a failed submit, which resets the form, shows the value typed. */}
-      <select key={String(select.defaultValue ?? "")} name={name} className={inputClass} aria-invalid={errors?.length ? true : undefined} aria-describedby={errorId} {...select}>
+      <select key={String(select.defaultValue ?? "")} id={fieldId} name={name} className={inputClass} aria-invalid={errors?.length ? true : undefined} aria-describedby={errorId} {...select}>
         {options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}
@@ -57,6 +66,6 @@ export function SelectField({
         ))}
       </select>
       <Messages id={errorId} errors={errors} hint={hint} />
-    </label>
+    </div>
   );
 }
