@@ -4,6 +4,7 @@
 import { relations } from "drizzle-orm";
 import {
   boolean,
+  char,
   index,
   int,
   json,
@@ -98,6 +99,48 @@ export const signInAttempts = mysqlTable(
   (t) => [index("sign_in_attempts_email").on(t.email, t.createdAt), index("sign_in_attempts_address").on(t.address, t.createdAt)],
 );
 
+export const DESIGN_MODES = ["track-for-wheel", "wheel-for-track", "partner-wheel", "twin-wheels"] as const;
+export type DesignMode = (typeof DESIGN_MODES)[number];
+
+/** A design in a project: its working draft (a design spec, editable) and, below, its revisions. */
+export const designs = mysqlTable(
+  "designs",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    projectId: int("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    name: varchar("name", { length: 160 }).notNull(),
+    mode: mysqlEnum("mode", DESIGN_MODES).notNull(),
+    /** The working draft: a design spec as JSON (validated by the engine's schema before it is stored). */
+    draft: json("draft").$type<Record<string, unknown>>().notNull(),
+    createdById: int("created_by_id").references(() => users.id),
+    createdAt: timestamp("created_at").notNull().defaultNow(),
+    updatedAt: timestamp("updated_at").notNull().defaultNow().onUpdateNow(),
+  },
+  (t) => [index("designs_project").on(t.projectId)],
+);
+
+/**
+ * A saved, numbered, immutable copy of a design's spec, with its SHA-256 hash (what a client signs)
+ * and the engine's summary figures. A database trigger (drizzle/0001_designs_revisions.sql) refuses
+ * any UPDATE or direct DELETE, so immutability does not rest on the application alone.
+ */
+export const revisions = mysqlTable(
+  "revisions",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    designId: int("design_id").notNull().references(() => designs.id, { onDelete: "cascade" }),
+    number: int("number").notNull(),
+    spec: json("spec").$type<Record<string, unknown>>().notNull(),
+    specHash: char("spec_hash", { length: 64 }).notNull(),
+    engineVersion: varchar("engine_version", { length: 32 }).notNull(),
+    summary: json("summary").$type<Record<string, unknown>>().notNull(),
+    note: varchar("note", { length: 500 }).notNull().default(""),
+    createdById: int("created_by_id").references(() => users.id),
+    createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
+  },
+  (t) => [uniqueIndex("revisions_design_number").on(t.designId, t.number), index("revisions_hash").on(t.specHash)],
+);
+
 export const usersRelations = relations(users, ({ one, many }) => ({
   organisation: one(organisations, { fields: [users.organisationId], references: [organisations.id] }),
   memberships: many(projectMembers),
@@ -113,7 +156,18 @@ export const projectMembersRelations = relations(projectMembers, ({ one }) => ({
   user: one(users, { fields: [projectMembers.userId], references: [users.id] }),
 }));
 
+export const designsRelations = relations(designs, ({ one, many }) => ({
+  project: one(projects, { fields: [designs.projectId], references: [projects.id] }),
+  revisions: many(revisions),
+}));
+
+export const revisionsRelations = relations(revisions, ({ one }) => ({
+  design: one(designs, { fields: [revisions.designId], references: [designs.id] }),
+}));
+
 export type User = typeof users.$inferSelect;
+export type Design = typeof designs.$inferSelect;
+export type Revision = typeof revisions.$inferSelect;
 export type Project = typeof projects.$inferSelect;
 export type ProjectMember = typeof projectMembers.$inferSelect;
 export type Organisation = typeof organisations.$inferSelect;

@@ -79,3 +79,29 @@ export async function requirePageUser(): Promise<CurrentUser> {
   if (!user) redirect("/login");
   return user;
 }
+
+/** Access to a design goes through its project: the same rules, and 404 for what one cannot see. */
+export async function requireDesignAccess(designId: number, need: "view" | "manage" = "view") {
+  await requireUser();
+  const { findDesign } = await import("@/db/queries/designs");
+  const design = await findDesign(designId);
+  if (!design) throw new AppError("not_found", "No such design.");
+  const access = await requireProjectAccess(design.projectId, need).catch((e) => {
+    if (e instanceof AppError && e.kind === "not_found") throw new AppError("not_found", "No such design.");
+    throw e;
+  });
+  return { ...access, design };
+}
+
+/** Access to a revision: any member of its project may view it; nobody may change it. */
+export async function requireRevisionAccess(revisionId: number) {
+  await requireUser();
+  const { findRevision } = await import("@/db/queries/designs");
+  const found = await findRevision(revisionId);
+  if (!found) throw new AppError("not_found", "No such revision.");
+  const access = await requireProjectAccess(found.projectId).catch((e) => {
+    if (e instanceof AppError && e.kind === "not_found") throw new AppError("not_found", "No such revision.");
+    throw e;
+  });
+  return { ...access, revision: found.revision, designName: found.designName };
+}

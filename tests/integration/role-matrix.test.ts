@@ -5,6 +5,7 @@ import * as projectsRoute from "@/app/api/projects/route";
 import * as projectRoute from "@/app/api/projects/[id]/route";
 import * as membersRoute from "@/app/api/projects/[id]/members/route";
 import * as memberRoute from "@/app/api/projects/[id]/members/[memberId]/route";
+import * as solveRoute from "@/app/api/solve/route";
 import { addMemberAction, createProjectAction, removeMemberAction, updateProjectAction } from "@/lib/actions/projects";
 import { changeRoleAction, createUserAction, setActiveAction } from "@/lib/actions/users";
 import type { ActionState } from "@/lib/server/action";
@@ -134,6 +135,11 @@ const CASES: Case[] = [
     },
   },
   {
+    name: "POST /api/solve",
+    expect: everyoneSignedIn(200),
+    call: async () => (await solveRoute.POST(json("POST", { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400 } }), ctx({}))).status,
+  },
+  {
     name: "action createProject",
     expect: shopOnly(200),
     call: () => actionStatus(() => createProjectAction({}, form({ name: `Action-made ${runTag} ${++seq}`, site: "Bench", clientOrganisation: "" }))),
@@ -189,7 +195,7 @@ describe.each(CASES)("$name", (c) => {
     const status = await c.call();
     const after = await auditCount();
     expect(status).toBe(c.expect[caller]);
-    const isRead = c.name.startsWith("GET");
+    const isRead = c.name.startsWith("GET") || c.name === "POST /api/solve";
     if (status >= 400 || isRead) expect(after - before, "a refused call or a read writes nothing").toBe(0);
     else expect(after - before, "a change leaves one audit entry").toBe(1);
   });

@@ -1,9 +1,12 @@
 import type { Metadata } from "next";
+import Link from "next/link";
 import { notFound } from "next/navigation";
 import { formatWhen, STATUS_LABEL } from "@/components/format";
+import { MODE_LABELS } from "@/components/studio/spec-form/defaults";
 import { AddMemberForm, RemoveMemberButton } from "@/components/member-forms";
 import { Badge, Panel } from "@/components/ui/panel";
 import { Table } from "@/components/ui/table";
+import { listDesigns } from "@/db/queries/designs";
 import { listMembers } from "@/db/queries/members";
 import { getProjectSummary } from "@/db/queries/projects";
 import { listAssignableUsers } from "@/db/queries/users";
@@ -14,7 +17,6 @@ export const metadata: Metadata = { title: "Project" };
 
 // What each later stage will put here; said plainly, with no sample data.
 const COMING = [
-  { title: "Designs and revisions", text: "The studio: pick a wheel or a track, watch it roll, and save numbered revisions." },
   { title: "Client review", text: "The client watches the mock-up, comments, and signs off one frozen revision." },
   { title: "Cut plan and exports", text: "Run length, track parts, kerf, nesting on stock sheets, DXF, SVG and ZIP downloads." },
   { title: "Build log and assembly sheet", text: "Notes, site photos and the printable assembly sheet for the installer." },
@@ -27,7 +29,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
     if (e instanceof AppError && e.kind === "not_found") notFound();
     throw e;
   });
-  const [project, members] = await Promise.all([getProjectSummary(access.projectId), listMembers(access.projectId)]);
+  const [project, members, designs] = await Promise.all([getProjectSummary(access.projectId), listMembers(access.projectId), listDesigns(access.projectId)]);
   if (!project) notFound();
   const memberIds = new Set(members.map((m) => m.userId));
   const people = access.canManage ? (await listAssignableUsers()).filter((u) => !memberIds.has(u.id)) : [];
@@ -72,6 +74,36 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
             <AddMemberForm projectId={access.projectId} people={people} />
           </div>
         ) : null}
+      </Panel>
+
+      <Panel
+        title="Designs"
+        actions={
+          access.canManage ? (
+            <Link href={`/projects/${access.projectId}/designs/new`} className="text-sm font-medium underline">
+              New design
+            </Link>
+          ) : null
+        }
+      >
+        {designs.length === 0 ? (
+          <p className="text-sm text-ink-soft">No designs yet.{access.canManage ? " Start one from a preset or from scratch." : ""}</p>
+        ) : (
+          <Table head={["Design", "Mode", "Latest revision", "Last change"]} caption="Designs">
+            {designs.map((d) => (
+              <tr key={d.id}>
+                <td>
+                  <Link href={`/projects/${access.projectId}/designs/${d.id}`} className="font-medium underline decoration-ink-line underline-offset-2">
+                    {d.name}
+                  </Link>
+                </td>
+                <td>{MODE_LABELS[d.mode]}</td>
+                <td className="font-mono text-xs">{d.latestRevision ? `R${d.latestRevision}` : "none yet"}</td>
+                <td className="font-mono text-xs">{formatWhen(d.updatedAt)}</td>
+              </tr>
+            ))}
+          </Table>
+        )}
       </Panel>
 
       <div className="grid gap-4 sm:grid-cols-2">

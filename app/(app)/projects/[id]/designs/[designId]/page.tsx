@@ -1,0 +1,31 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { DesignStudio } from "@/components/studio/design-studio";
+import { QueryProvider } from "@/components/studio/query-provider";
+import { requireDesignAccess, requirePageUser } from "@/lib/server/dal";
+import { AppError } from "@/lib/server/errors";
+
+export const metadata: Metadata = { title: "Studio" };
+
+export default async function StudioPage({ params, searchParams }: { params: Promise<{ id: string; designId: string }>; searchParams: Promise<{ revision?: string }> }) {
+  await requirePageUser();
+  const { id, designId } = await params;
+  const { revision } = await searchParams;
+  const access = await requireDesignAccess(/^\d{1,10}$/.test(designId) ? Number(designId) : -1).catch((e) => {
+    if (e instanceof AppError && e.kind === "not_found") notFound();
+    throw e;
+  });
+  if (String(access.projectId) !== id) notFound();
+  const revisionNumber = revision && /^\d{1,6}$/.test(revision) ? Number(revision) : undefined;
+  return (
+    <>
+      <Link href={`/projects/${access.projectId}`} className="no-print text-sm text-ink-soft hover:underline">
+        ← Project
+      </Link>
+      <QueryProvider>
+        <DesignStudio designId={access.design.id} projectId={access.projectId} revisionNumber={revisionNumber} />
+      </QueryProvider>
+    </>
+  );
+}

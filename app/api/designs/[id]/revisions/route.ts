@@ -1,0 +1,16 @@
+import { listRevisions, saveRevision } from "@/db/queries/designs";
+import { requireDesignAccess } from "@/lib/server/dal";
+import { created, idParam, jsonBody, route } from "@/lib/server/route";
+import { newRevisionSchema, SPEC_BODY_LIMIT } from "@/lib/validation/designs";
+
+export const GET = route<{ id: string }>(async (_request, params) => {
+  const access = await requireDesignAccess(idParam(params.id, "design"));
+  return { revisions: await listRevisions(access.design.id) };
+});
+
+export const POST = route<{ id: string }>(async (request, params) => {
+  const access = await requireDesignAccess(idParam(params.id, "design"), "manage");
+  const input = await jsonBody(request, newRevisionSchema, SPEC_BODY_LIMIT);
+  const revision = await saveRevision(access.user, access.design.id, access.projectId, input);
+  return created({ revision });
+});

@@ -1,0 +1,116 @@
+"use client";
+// Small controlled inputs for the spec form: numbers with their unit, selects, formulas. Each shows
+// its own error under it and is tied to it for screen readers.
+import { useId, useState, type ReactNode } from "react";
+
+const box = "w-full rounded-plate border border-ink-line bg-white/70 px-2 py-1 text-sm text-ink aria-[invalid=true]:border-caution disabled:bg-paper-deep";
+
+function Row({ id, label, error, children, hint }: { id: string; label: string; error?: string; children: ReactNode; hint?: ReactNode }) {
+  return (
+    <div className="flex flex-col gap-0.5 text-sm">
+      <label htmlFor={id} className="font-medium">
+        {label}
+      </label>
+      {children}
+      {error ? (
+        <p id={`${id}-error`} className="text-xs font-medium text-caution" role="alert">
+          {error}
+        </p>
+      ) : hint ? (
+        <p className="text-xs text-ink-soft">{hint}</p>
+      ) : null}
+    </div>
+  );
+}
+
+/** A number with its unit. Keeps the text as typed while it is not yet a number, so typing "1." works. */
+export function NumberInput(props: {
+  label: string;
+  value: number | undefined;
+  unit?: string;
+  min?: number;
+  max?: number;
+  step?: number;
+  integer?: boolean;
+  disabled?: boolean;
+  error?: string;
+  hint?: ReactNode;
+  onChange: (value: number | undefined) => void;
+}) {
+  const id = useId();
+  const [text, setText] = useState<string | null>(null);
+  const shown = text ?? (props.value === undefined ? "" : String(props.value));
+  let localError: string | undefined;
+  if (text !== null && text.trim() !== "") {
+    const v = Number(text);
+    if (!Number.isFinite(v)) localError = "Enter a number.";
+    else if (props.integer && !Number.isInteger(v)) localError = "Enter a whole number.";
+    else if (props.min !== undefined && v < props.min) localError = `At least ${props.min}.`;
+    else if (props.max !== undefined && v > props.max) localError = `At most ${props.max}.`;
+  }
+  const error = localError ?? props.error;
+  return (
+    <Row id={id} label={props.unit ? `${props.label} (${props.unit})` : props.label} error={error} hint={props.hint}>
+      <input
+        id={id}
+        type="text"
+        inputMode="decimal"
+        className={`${box} font-mono`}
+        value={shown}
+        disabled={props.disabled}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : undefined}
+        onChange={(e) => {
+          setText(e.target.value);
+          const v = Number(e.target.value);
+          const ok = e.target.value.trim() !== "" && Number.isFinite(v) && (!props.integer || Number.isInteger(v)) && (props.min === undefined || v >= props.min) && (props.max === undefined || v <= props.max);
+          if (ok) props.onChange(v);
+        }}
+        onBlur={() => setText(null)}
+      />
+    </Row>
+  );
+}
+
+export function SelectInput<T extends string>(props: {
+  label: string;
+  value: T;
+  options: { value: T; label: string }[];
+  disabled?: boolean;
+  onChange: (value: T) => void;
+  testId?: string;
+}) {
+  const id = useId();
+  return (
+    <Row id={id} label={props.label}>
+      <select id={id} className={box} value={props.value} disabled={props.disabled} data-testid={props.testId} onChange={(e) => props.onChange(e.target.value as T)}>
+        {props.options.map((o) => (
+          <option key={o.value} value={o.value}>
+            {o.label}
+          </option>
+        ))}
+      </select>
+    </Row>
+  );
+}
+
+/** A formula, checked as it is typed by the engine's own formula reader. */
+export function FormulaInput(props: { label: string; value: string; variable: string; disabled?: boolean; check: (source: string) => string | undefined; onChange: (value: string) => void; hint?: ReactNode }) {
+  const id = useId();
+  const error = props.check(props.value);
+  return (
+    <Row id={id} label={props.label} error={error} hint={props.hint}>
+      <input
+        id={id}
+        type="text"
+        spellCheck={false}
+        className={`${box} font-mono`}
+        value={props.value}
+        disabled={props.disabled}
+        aria-invalid={error ? true : undefined}
+        aria-describedby={error ? `${id}-error` : undefined}
+        onChange={(e) => props.onChange(e.target.value)}
+      />
+    </Row>
+  );
+}

@@ -1,0 +1,104 @@
+// The rolling check as a list of figures with a pass / warn state. Pure (no React) so the panel
+// and the unit tests read the same thresholds.
+
+import type { SolveResult } from "@/lib/track";
+import { fmt } from "@/lib/studio/view-math";
+
+/** Friction coefficient above which many dry material pairs slip (the engine flags the same figure). */
+export const FRICTION_GUIDE = 0.6;
+/** A bend tighter than this share of the wheel size is flagged (as the engine does). */
+export const SHARP_SHARE = 0.02;
+/** Closure error (rad) above which the wheel visibly fails to close after its turn. */
+export const CLOSURE_LIMIT = 1e-6;
+
+export type FigureState = "pass" | "warn" | "info";
+
+export interface Figure {
+  key: string;
+  label: string;
+  value: string;
+  state: FigureState;
+  note?: string;
+  /** The check has a place to show on the canvas. */
+  locate?: "interference" | "friction";
+}
+
+const radius = (r: number | undefined, units: string) =>
+  r === undefined ? "—" : r === 0 ? "0 (corner)" : Number.isFinite(r) ? `${fmt(r)} ${units}` : "∞ (straight)";
+
+/** Lengths below which the roll counts as exact: the default chord tolerance of the outputs. */
+const lengthTolerance = (units: string) => (units === "in" ? 0.0005 : 0.01);
+
+export function checkFigures(r: SolveResult): Figure[] {
+  const c = r.check;
+  const u = r.units;
+  const pair = r.mode === "partner-wheel" || r.mode === "twin-wheels";
+  const size = r.mode === "partner-wheel" ? (r.centreDistance ?? r.wheel.rMax) : r.wheel.rMax;
+  const tol = lengthTolerance(u);
+  const out: Figure[] = [
+    {
+      key: "interference",
+      label: "Interference depth",
+      value: `${fmt(c.interference.depth)} ${u}`,
+      state: c.interference.depth > 0 ? "warn" : "pass",
+      note: c.interference.depth > 0 ? (pair ? "The wheels overlap away from the contact." : "The wheel cuts into the track away from the contact.") : undefined,
+      locate: c.interference.depth > 0 && c.interference.at ? "interference" : undefined,
+    },
+    {
+      key: "friction",
+      label: "Friction demand, max",
+      value: fmt(c.frictionDemand.max, 3),
+      state: c.frictionDemand.max > FRICTION_GUIDE ? "warn" : "pass",
+      note:
+        c.frictionDemand.max > FRICTION_GUIDE
+          ? `Above ${FRICTION_GUIDE}. The real limit depends on the materials in contact.`
+          : `At or below ${FRICTION_GUIDE}; the real limit depends on the materials in contact.`,
+      locate: "friction",
+    },
+    {
+      key: "closure",
+      label: "Closure error",
+      value: `${fmt(c.closureError, 3)} rad`,
+      state: Math.abs(c.closureError) > CLOSURE_LIMIT ? "warn" : "pass",
+    },
+    {
+      key: "axle",
+      label: r.mode === "partner-wheel" ? "Centre distance deviation" : "Axle deviation",
+      value: `${fmt(c.axleDeviation, 3)} ${u}`,
+      state: c.axleDeviation > tol ? "warn" : "pass",
+    },
+    { key: "slip", label: "Slip (arc-length difference)", value: `${fmt(c.slip, 3)} ${u}`, state: c.slip > tol ? "warn" : "pass" },
+  ];
+  const radii: Array<[string, string, number | undefined]> = [
+    ["wheel", r.mode === "partner-wheel" ? "Min curvature radius, driver" : r.mode === "twin-wheels" ? "Min curvature radius, upper wheel" : "Min curvature radius, wheel", c.minCurvatureRadius.wheel],
+    ["partner", r.mode === "twin-wheels" ? "Min curvature radius, lower wheel" : "Min curvature radius, partner", c.minCurvatureRadius.partner],
+    ["track", "Min curvature radius, track", c.minCurvatureRadius.track],
+  ];
+  for (const [key, label, value] of radii) {
+    if (value === undefined) continue;
+    const sharp = value < SHARP_SHARE * size;
+    out.push({
+      key: `radius-${key}`,
+      label,
+      value: radius(value, u),
+      state: sharp ? "warn" : "pass",
+      note: sharp ? `Under ${SHARP_SHARE * 100}% of the wheel size: round it for parts people touch, and check the cutter fits.` : undefined,
+    });
+  }
+  if (c.speedRatio)
+    out.push({
+      key: "speed-ratio",
+      label: r.mode === "twin-wheels" ? "Speed ratio, lower / upper" : "Speed ratio, partner / driver",
+      value: `${fmt(c.speedRatio.min, 3)} – ${fmt(c.speedRatio.max, 3)}`,
+      state: "info",
+    });
+  if (c.symmetryError !== undefined)
+    out.push({
+      key: "symmetry",
+      label: "Point-symmetry error of the track",
+      value: `${fmt(c.symmetryError, 3)} ${u}`,
+      state: c.symmetryError > 1e-9 * size ? "warn" : "pass",
+      note: c.symmetryError > 1e-9 * size ? "The two wheels are not identical." : undefined,
+    });
+  return out;
+}

@@ -1,0 +1,97 @@
+"use client";
+
+import { useCallback, useMemo, useState } from "react";
+import type { DesignSpec, SolveResult } from "@/lib/track";
+import { alongAt } from "@/lib/studio/motion";
+import { fmt, type Pt } from "@/lib/studio/view-math";
+import { Notice } from "@/components/ui/notice";
+import type { CanvasHighlight } from "./canvas-stage";
+import { CheckPanel } from "./check-panel";
+import { CheckPlots } from "./check-plots";
+import { OptionsTable } from "./options-table";
+import { PlayControls } from "./play-controls";
+import { StudioCanvas } from "./studio-canvas";
+import { useRollingClock } from "./use-rolling-clock";
+
+export interface StudioViewProps {
+  /** undefined while solving. */
+  result?: SolveResult;
+  spec?: DesignSpec;
+  /** A plain message when the engine could not solve the spec. */
+  error?: string;
+  /** Picking a closure option (periods per turn, or lobes). */
+  onPick?: (n: number) => void;
+  canvasHeight?: number;
+}
+
+/** The studio's view half: canvas and playback on the left, the check and options on the right, plots below. */
+export function StudioView({ result, spec, error, onPick, canvasHeight }: StudioViewProps) {
+  const clock = useRollingClock();
+  const [highlight, setHighlight] = useState<CanvasHighlight | null>(null);
+  // A new design clears the old design's highlight (adjusted while rendering, not in an effect).
+  const [seenHash, setSeenHash] = useState(result?.specHash);
+  if (result?.specHash !== seenHash) {
+    setSeenHash(result?.specHash);
+    setHighlight(null);
+  }
+
+  const { setPlaying, setPosition } = clock;
+  const pointAt = useCallback(
+    (position: number, spot: Pt) => {
+      setPlaying(false);
+      setPosition(position);
+      setHighlight({ point: spot, label: `${fmt(spot[0])}, ${fmt(spot[1])}` });
+    },
+    [setPlaying, setPosition],
+  );
+  const current = result?.mode === "partner-wheel" ? spec?.lobes : spec?.periodsPerTurn;
+  // The clock re-renders this view on every frame; the panels and plots only change with the result.
+  const plots = useMemo(() => (!error ? <CheckPlots result={result} /> : null), [error, result]);
+  const side = useMemo(
+    () => (
+      <aside className="flex flex-col gap-3">
+        {!error ? <CheckPanel result={result} onPointAt={pointAt} /> : null}
+        <OptionsTable result={error ? undefined : result} currentValue={current} onPick={onPick} />
+      </aside>
+    ),
+    [error, result, pointAt, current, onPick],
+  );
+  const describePosition = (p: number) => {
+    if (!result) return "";
+    const a = alongAt(result, p);
+    return result.mode === "partner-wheel" ? `driver turned ${fmt(a, 3)} rad` : `axle at x = ${fmt(a)} ${result.units}`;
+  };
+
+  return (
+    <div className="grid gap-gutter lg:grid-cols-[minmax(0,1fr)_22rem]" data-testid="studio-view">
+      <div className="flex min-w-0 flex-col gap-3">
+        {error ? <Notice tone="problem">{error}</Notice> : null}
+        <StudioCanvas
+          result={error ? undefined : result}
+          spec={spec}
+          playing={clock.playing}
+          speed={clock.speed}
+          position={clock.position}
+          onPositionChange={clock.setPosition}
+          onPlayingChange={clock.setPlaying}
+          highlight={highlight}
+          height={canvasHeight}
+        />
+        {result && !error ? (
+          <div className="flex flex-wrap items-center gap-3">
+            <div className="flex-1">
+              <PlayControls {...clock.controls} describePosition={describePosition} />
+            </div>
+            {highlight ? (
+              <button type="button" className="no-print text-xs text-caution underline" onClick={() => setHighlight(null)}>
+                Clear the mark
+              </button>
+            ) : null}
+          </div>
+        ) : null}
+        {plots}
+      </div>
+      {side}
+    </div>
+  );
+}

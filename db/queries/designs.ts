@@ -1,0 +1,187 @@
+import "server-only";
+// Designs and their immutable revisions. A revision is solved by the engine on the server before it
+// is stored, so its hash and summary figures are the engine's own.
+import { and, desc, eq, max, sql } from "drizzle-orm";
+import { db } from "@/db";
+import { designs, projects, revisions, users, type DesignMode } from "@/db/schema";
+import { audit } from "@/lib/server/audit";
+import type { CurrentUser } from "@/lib/server/dal";
+import { AppError } from "@/lib/server/errors";
+import { ENGINE_VERSION, isEngineError, parseSpec, solve, specHash, type DesignSpec, type SolveResult } from "@/lib/track";
+
+/** The engine's figures kept beside a revision, for lists, comparisons and sign-off. */
+export interface RevisionSummary {
+  period?: number;
+  depth?: number;
+  axleHeight?: number;
+  centreDistance?: number;
+  wheel: { rMin: number; rMax: number };
+  partner?: { rMin: number; rMax: number };
+  check: SolveResult["check"];
+  warnings: SolveResult["warnings"];
+}
+
+export interface DesignRow {
+  id: number;
+  projectId: number;
+  name: string;
+  mode: DesignMode;
+  updatedAt: string;
+  latestRevision: number | null;
+}
+
+export interface RevisionRow {
+  id: number;
+  designId: number;
+  number: number;
+  specHash: string;
+  engineVersion: string;
+  note: string;
+  createdBy: string | null;
+  createdAt: string;
+  summary: RevisionSummary;
+}
+
+/** Checks a spec with the engine's schema; an engine refusal becomes a 400 with the engine's words. */
+export function validSpec(input: unknown): DesignSpec {
+  try {
+    return parseSpec(input);
+  } catch (error) {
+    if (isEngineError(error)) throw new AppError("bad_request", error.where ? `${error.message} (at ${error.where})` : error.message);
+    throw error;
+  }
+}
+
+const SAVE_TIME_LIMIT_MS = 10_000;
+
+function summarise(result: SolveResult): RevisionSummary {
+  return {
+    period: result.period,
+    depth: result.depth,
+    axleHeight: result.axleHeight,
+    centreDistance: result.centreDistance,
+    wheel: { rMin: result.wheel.rMin, rMax: result.wheel.rMax },
+    ...(result.partner ? { partner: { rMin: result.partner.rMin, rMax: result.partner.rMax } } : {}),
+    check: result.check,
+    warnings: result.warnings,
+  };
+}
+
+export async function listDesigns(projectId: number): Promise<DesignRow[]> {
+  const rows = await db
+    .select({
+      id: designs.id,
+      projectId: designs.projectId,
+      name: designs.name,
+      mode: designs.mode,
+      updatedAt: designs.updatedAt,
+      latestRevision: max(revisions.number),
+    })
+    .from(designs)
+    .leftJoin(revisions, eq(revisions.designId, designs.id))
+    .where(eq(designs.projectId, projectId))
+    .groupBy(designs.id)
+    .orderBy(desc(designs.updatedAt), desc(designs.id));
+  return rows.map((r) => ({ ...r, updatedAt: r.updatedAt.toISOString(), latestRevision: r.latestRevision ?? null }));
+}
+
+/** The design with this id, and the project it belongs to (for the access check). */
+export async function findDesign(designId: number) {
+  const [row] = await db.select().from(designs).where(eq(designs.id, designId)).limit(1);
+  return row ?? null;
+}
+
+export async function findRevision(revisionId: number) {
+  const [row] = await db
+    .select({ revision: revisions, projectId: designs.projectId, designName: designs.name })
+    .from(revisions)
+    .innerJoin(designs, eq(designs.id, revisions.designId))
+    .where(eq(revisions.id, revisionId))
+    .limit(1);
+  return row ?? null;
+}
+
+export async function listRevisions(designId: number): Promise<RevisionRow[]> {
+  const rows = await db
+    .select({
+      id: revisions.id,
+      designId: revisions.designId,
+      number: revisions.number,
+      specHash: revisions.specHash,
+      engineVersion: revisions.engineVersion,
+      note: revisions.note,
+      createdBy: users.name,
+      createdAt: revisions.createdAt,
+      summary: revisions.summary,
+    })
+    .from(revisions)
+    .leftJoin(users, eq(users.id, revisions.createdById))
+    .where(eq(revisions.designId, designId))
+    .orderBy(desc(revisions.number));
+  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), summary: r.summary as unknown as RevisionSummary }));
+}
+
+export async function createDesign(actor: CurrentUser, projectId: number, input: { name: string; spec: unknown }): Promise<number> {
+  const spec = validSpec(input.spec);
+  return db.transaction(async (tx) => {
+    const [res] = await tx.insert(designs).values({ projectId, name: input.name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, createdById: actor.id });
+    await tx.update(projects).set({ updatedAt: new Date() }).where(eq(projects.id, projectId));
+    await audit(tx, { actorId: actor.id, action: "create", entity: "designs", entityId: res.insertId, projectId, detail: { name: input.name, mode: spec.mode } });
+    return res.insertId;
+  });
+}
+
+export async function updateDesign(actor: CurrentUser, designId: number, projectId: number, input: { name?: string; draft?: unknown }): Promise<void> {
+  const changes: Partial<typeof designs.$inferInsert> = {};
+  if (input.name !== undefined) changes.name = input.name;
+  if (input.draft !== undefined) {
+    const spec = validSpec(input.draft);
+    changes.draft = spec as unknown as Record<string, unknown>;
+    changes.mode = spec.mode;
+  }
+  await db.transaction(async (tx) => {
+    await tx.update(designs).set(changes).where(eq(designs.id, designId));
+    await audit(tx, { actorId: actor.id, action: "update", entity: "designs", entityId: designId, projectId, detail: { name: input.name, draft: input.draft !== undefined } });
+  });
+}
+
+/**
+ * Saves a spec as the design's next revision. The engine solves it first (a spec that does not
+ * solve is refused with the engine's message); the number is taken under a row lock on the design,
+ * so two saves at once get consecutive numbers.
+ */
+export async function saveRevision(actor: CurrentUser, designId: number, projectId: number, input: { spec: unknown; note: string }): Promise<{ id: number; number: number; specHash: string }> {
+  const spec = validSpec(input.spec);
+  let result: SolveResult;
+  try {
+    result = solve(spec, { deadlineMs: SAVE_TIME_LIMIT_MS });
+  } catch (error) {
+    if (isEngineError(error)) throw new AppError(error.code === "timeout" ? "timeout" : "bad_request", error.where ? `${error.message} (at ${error.where})` : error.message);
+    throw error;
+  }
+  const hash = specHash(spec);
+  return db.transaction(async (tx) => {
+    await tx.execute(sql`select id from ${designs} where ${designs.id} = ${designId} for update`);
+    const [{ last }] = await tx.select({ last: max(revisions.number) }).from(revisions).where(eq(revisions.designId, designId));
+    const number = (last ?? 0) + 1;
+    const [res] = await tx.insert(revisions).values({
+      designId,
+      number,
+      spec: spec as unknown as Record<string, unknown>,
+      specHash: hash,
+      engineVersion: ENGINE_VERSION,
+      summary: summarise(result) as unknown as Record<string, unknown>,
+      note: input.note,
+      createdById: actor.id,
+    });
+    await tx.update(designs).set({ updatedAt: new Date() }).where(eq(designs.id, designId));
+    await tx.update(projects).set({ updatedAt: new Date() }).where(eq(projects.id, projectId));
+    await audit(tx, { actorId: actor.id, action: "create", entity: "revisions", entityId: res.insertId, projectId, detail: { designId, number, specHash: hash } });
+    return { id: res.insertId, number, specHash: hash };
+  });
+}
+
+export async function revisionByNumber(designId: number, number: number) {
+  const [row] = await db.select().from(revisions).where(and(eq(revisions.designId, designId), eq(revisions.number, number))).limit(1);
+  return row ?? null;
+}

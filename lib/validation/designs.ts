@@ -1,0 +1,17 @@
+import { z } from "zod";
+
+const name = z.string({ error: "Enter a design name." }).trim().min(1, { error: "Enter a design name." }).max(160, { error: "A design name has at most 160 characters." });
+
+/** The spec itself is checked by the engine's own schema (lib/track), which gives the precise message. */
+export const newDesignSchema = z.object({ name, spec: z.unknown() });
+export const designUpdateSchema = z
+  .object({ name, draft: z.unknown() })
+  .partial()
+  .refine((v) => v.name !== undefined || v.draft !== undefined, { error: "Nothing to change." });
+export const newRevisionSchema = z.object({
+  spec: z.unknown(),
+  note: z.string().trim().max(500, { error: "A note has at most 500 characters." }).default(""),
+});
+
+// Uploaded outlines of thousands of points fit in this.
+export const SPEC_BODY_LIMIT = 512 * 1024;
