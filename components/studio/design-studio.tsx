@@ -118,7 +118,7 @@ export function DesignStudio({ designId, projectId, revisionNumber }: { designId
         {!canEdit ? <span className="text-sm text-ink-soft">You can view this design; only the shop edits it.</span> : null}
       </div>
 
-      <div className="grid gap-4 lg:grid-cols-[22rem_1fr]">
+      <div className="grid gap-4 lg:grid-cols-[20rem_minmax(0,1fr)]">
         <div className="flex flex-col gap-4">
           {spec ? (
             <Panel title="Parameters">

@@ -63,7 +63,7 @@ export function StudioView({ result, spec, error, onPick, canvasHeight }: Studio
   };
 
   return (
-    <div className="grid gap-gutter lg:grid-cols-[minmax(0,1fr)_22rem]" data-testid="studio-view">
+    <div className="grid gap-gutter 2xl:grid-cols-[minmax(0,1fr)_22rem]" data-testid="studio-view">
       <div className="flex min-w-0 flex-col gap-3">
         {error ? <Notice tone="problem">{error}</Notice> : null}
         <StudioCanvas

@@ -23,9 +23,12 @@ export default async function StudioPage({ params, searchParams }: { params: Pro
       <Link href={`/projects/${access.projectId}`} className="no-print text-sm text-ink-soft hover:underline">
         ← Project
       </Link>
-      <QueryProvider>
-        <DesignStudio designId={access.design.id} projectId={access.projectId} revisionNumber={revisionNumber} />
-      </QueryProvider>
+      {/* The studio uses the whole width of the screen, not the reading width of other pages. */}
+      <div className="relative left-1/2 w-[min(110rem,calc(100vw-2rem))] -translate-x-1/2">
+        <QueryProvider>
+          <DesignStudio designId={access.design.id} projectId={access.projectId} revisionNumber={revisionNumber} />
+        </QueryProvider>
+      </div>
     </>
   );
 }
