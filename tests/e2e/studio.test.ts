@@ -89,10 +89,13 @@ describe("the studio, as the fabricator", () => {
     await page.getByTestId("upload-wheel").setInputFiles(path.join(fixtures, "circle-two-arcs.svg"));
     await page.getByTestId("upload-message").waitFor();
     expect(await page.getByTestId("upload-message").innerText()).toMatch(/^Read \d+ points from circle-two-arcs\.svg/);
+    // Each refusal replaces the message before it, so wait for the new words rather than read at once.
+    const message = page.getByTestId("upload-message");
     await page.getByTestId("upload-wheel").setInputFiles(path.join(fixtures, "zipped.svg"));
-    await page.getByText(/compressed/i).waitFor();
+    await message.filter({ hasText: /compressed/i }).waitFor();
     await page.getByTestId("upload-wheel").setInputFiles(path.join(fixtures, "entity-bomb.svg"));
-    expect(await page.getByTestId("upload-message").innerText()).toMatch(/DOCTYPE|ENTITY|entit/i);
+    await message.filter({ hasText: /DOCTYPE|ENTITY|entit/i }).waitFor();
+    expect(await message.getAttribute("role"), "a refusal is announced as an alert").toBe("alert");
     await page.screenshot({ path: screenshotPath("studio-upload-refused"), fullPage: true });
     await context.close();
   });
