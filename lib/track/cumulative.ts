@@ -8,6 +8,7 @@
 import { gk15 } from "./quadrature";
 import { Deadline, NO_DEADLINE } from "./deadline";
 import { EngineError } from "./errors";
+import { lastAtOrBelow } from "./search";
 
 export interface CumulativePiece {
   a: number;
@@ -96,14 +97,7 @@ export class Cumulative {
 
   private panelAt(t: number): Panel {
     const p = this.panels;
-    let lo = 0;
-    let hi = p.length - 1;
-    while (lo < hi) {
-      const mid = (lo + hi + 1) >> 1;
-      if (p[mid].a <= t) lo = mid;
-      else hi = mid - 1;
-    }
-    return p[lo];
+    return p[lastAtOrBelow(p.length, (i) => p[i].a, t)];
   }
 
   /** F(t) for t in [start, end]. */
@@ -121,14 +115,7 @@ export class Cumulative {
     if (v <= 0) return this.start;
     if (v >= this.total) return this.end;
     const p = this.panels;
-    let lo = 0;
-    let hi = p.length - 1;
-    while (lo < hi) {
-      const mid = (lo + hi + 1) >> 1;
-      if (p[mid].F0 <= v) lo = mid;
-      else hi = mid - 1;
-    }
-    const pan = p[lo];
+    const pan = p[lastAtOrBelow(p.length, (i) => p[i].F0, v)];
     if (pan.piece.Finv) {
       const base = pan.a === pan.piece.a ? 0 : pan.piece.F!(pan.a);
       return pan.piece.Finv(v - pan.F0 + base);

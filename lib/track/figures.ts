@@ -45,15 +45,21 @@ function maxOver(pw: Piecewise, g: (t: number, side: -1 | 0 | 1) => number): Ext
   return best;
 }
 
+/** The friction demand |r′|/r of a polar curve, at its largest. */
+const polarFriction = (w: Piecewise) => maxOver(w, (t, s) => Math.abs(w.d1(t, s)) / w.f(t));
+
+/** Curvature of a polar curve, κ = (r² + 2r′² − r r″)/(r² + r′²)^{3/2}, convex positive. */
+const polarCurvature = (w: Piecewise) => (t: number, s: -1 | 0 | 1) => {
+  const r = w.f(t);
+  const d = w.d1(t, s);
+  const dd = w.d2(t, s);
+  return (r * r + 2 * d * d - r * dd) / Math.pow(r * r + d * d, 1.5);
+};
+
 /** A polar wheel r(t) over one sector and the road it rolls on (track-for-wheel). */
 export function wheelAndRoadFigures(w: Piecewise, hasCorners: boolean): Figures {
-  const friction = maxOver(w, (t, s) => Math.abs(w.d1(t, s)) / w.f(t));
-  const kw = (t: number, s: -1 | 0 | 1) => {
-    const r = w.f(t);
-    const d = w.d1(t, s);
-    const dd = w.d2(t, s);
-    return (r * r + 2 * d * d - r * dd) / Math.pow(r * r + d * d, 1.5);
-  };
+  const friction = polarFriction(w);
+  const kw = polarCurvature(w);
   const kr = (t: number, s: -1 | 0 | 1) => {
     const r = w.f(t);
     const d = w.d1(t, s);
@@ -83,13 +89,8 @@ export function trackAndWheelFigures(g: Piecewise, h: number, sgn: 1 | -1, hasKi
 
 /** A driver r₁(t) over one sector and its partner at centre distance a. */
 export function pairFigures(w: Piecewise, a: number, hasCorners: boolean): Figures {
-  const friction = maxOver(w, (t, s) => Math.abs(w.d1(t, s)) / w.f(t));
-  const k1 = (t: number, s: -1 | 0 | 1) => {
-    const r = w.f(t);
-    const d = w.d1(t, s);
-    const dd = w.d2(t, s);
-    return (r * r + 2 * d * d - r * dd) / Math.pow(r * r + d * d, 1.5);
-  };
+  const friction = polarFriction(w);
+  const k1 = polarCurvature(w);
   const k2 = (t: number, s: -1 | 0 | 1) => {
     const r = w.f(t);
     const d = w.d1(t, s);

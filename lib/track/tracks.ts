@@ -8,6 +8,7 @@ import { EngineError } from "./errors";
 import { compileFormula } from "./formula";
 import { extremes } from "./extremes";
 import type { TrackSpec } from "./spec";
+import { lastAtOrBelow } from "./search";
 
 export interface TrackPiece {
   kind: "graph" | "param" | "segment";
@@ -80,14 +81,7 @@ export function makeTrack(pieces: TrackPiece[], period: number, breaksX: number[
   const yAt = (X: number): number => {
     let u = X % period;
     if (u < 0) u += period;
-    let lo = 0;
-    let hi = starts.length - 1;
-    while (lo < hi) {
-      const mid = (lo + hi + 1) >> 1;
-      if (starts[mid] <= u) lo = mid;
-      else hi = mid - 1;
-    }
-    const p = pieces[lo];
+    const p = pieces[lastAtOrBelow(starts.length, (i) => starts[i], u)];
     return p.y(p.sOf(u));
   };
   let yMin = Infinity;

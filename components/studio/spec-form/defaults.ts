@@ -22,6 +22,14 @@ export const TRACK_DEFAULTS: Record<Track["kind"], Track> = {
   profile: { kind: "profile", points: [[0, 0], [25, 10], [50, 0], [75, -10], [100, 0]] },
 };
 
+/** A default in the user's units: every length scaled from millimetres (counts such as sides stay). */
+export function inUnits<T extends object>(value: T, units: "mm" | "in", counts: readonly string[] = []): T {
+  const scale = units === "in" ? 1 / 25.4 : 1;
+  const out = structuredClone(value) as Record<string, unknown>;
+  for (const [k, v] of Object.entries(out)) if (typeof v === "number" && !counts.includes(k)) out[k] = Number((v * scale).toPrecision(6));
+  return out as T;
+}
+
 export const MODE_LABELS: Record<Mode, string> = {
   "track-for-wheel": "Track for a wheel",
   "wheel-for-track": "Wheel for a track",

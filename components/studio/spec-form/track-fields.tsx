@@ -1,7 +1,7 @@
 "use client";
 import type { Units } from "@/lib/studio/units";
 import type { DesignSpecInput } from "@/lib/track";
-import { TRACK_DEFAULTS } from "./defaults";
+import { inUnits, TRACK_DEFAULTS } from "./defaults";
 import { FormulaInput, NumberInput, SelectInput } from "./inputs";
 import { OutlineUpload } from "./outline-upload";
 import { formulaError, type FieldErrors } from "./spec-form";
@@ -19,7 +19,6 @@ const KIND_LABELS: { value: Kind; label: string }[] = [
 
 export function TrackFields({ track, units, errors, onChange }: { track: Track; units: Units; errors: FieldErrors; onChange: (t: Track) => void }) {
   const e = (key: string) => errors[`track.${key}`];
-  const scale = units === "in" ? 1 / 25.4 : 1;
   return (
     <div className="flex flex-col gap-3 rounded-plate border border-paper-edge p-3">
       <SelectInput<Kind>
@@ -27,11 +26,7 @@ export function TrackFields({ track, units, errors, onChange }: { track: Track; 
         testId="track-kind"
         value={track.kind}
         options={KIND_LABELS}
-        onChange={(kind) => {
-          const d = structuredClone(TRACK_DEFAULTS[kind]) as Record<string, unknown>;
-          for (const [k, v] of Object.entries(d)) if (typeof v === "number") d[k] = Number((v * scale).toPrecision(6));
-          onChange(d as Track);
-        }}
+        onChange={(kind) => onChange(inUnits(TRACK_DEFAULTS[kind], units))}
       />
       {track.kind === "sine" ? (
         <div className="grid grid-cols-2 gap-3">

@@ -1,7 +1,7 @@
 "use client";
 import type { Units } from "@/lib/studio/units";
 import type { DesignSpecInput } from "@/lib/track";
-import { WHEEL_DEFAULTS } from "./defaults";
+import { inUnits, WHEEL_DEFAULTS } from "./defaults";
 import { FormulaInput, NumberInput, SelectInput } from "./inputs";
 import { OutlineUpload } from "./outline-upload";
 import { formulaError, type FieldErrors } from "./spec-form";
@@ -20,7 +20,6 @@ const KIND_LABELS: { value: Kind; label: string }[] = [
 
 export function WheelFields({ wheel, units, errors, onChange }: { wheel: Wheel; units: Units; errors: FieldErrors; onChange: (w: Wheel) => void }) {
   const e = (key: string) => errors[`wheel.${key}`];
-  const scale = units === "in" ? 1 / 25.4 : 1;
   return (
     <div className="flex flex-col gap-3 rounded-plate border border-paper-edge p-3">
       <SelectInput<Kind>
@@ -28,11 +27,7 @@ export function WheelFields({ wheel, units, errors, onChange }: { wheel: Wheel; 
         testId="wheel-kind"
         value={wheel.kind}
         options={KIND_LABELS}
-        onChange={(kind) => {
-          const d = structuredClone(WHEEL_DEFAULTS[kind]) as Record<string, unknown>;
-          for (const [k, v] of Object.entries(d)) if (typeof v === "number" && k !== "sides") d[k] = Number((v * scale).toPrecision(6));
-          onChange(d as Wheel);
-        }}
+        onChange={(kind) => onChange(inUnits(WHEEL_DEFAULTS[kind], units, ["sides"]))}
       />
       {wheel.kind === "polygon" ? <PolygonFields wheel={wheel} units={units} e={e} onChange={onChange} /> : null}
       {wheel.kind === "ellipse" ? (

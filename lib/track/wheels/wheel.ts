@@ -7,6 +7,7 @@
 
 import type { CumulativePiece } from "../cumulative";
 import { extremes } from "../extremes";
+import { lastAtOrBelow } from "../search";
 
 export const TAU = 2 * Math.PI;
 
@@ -107,14 +108,7 @@ export function makeWheel(pieces: WheelPiece[], corners: number[], symmetry?: nu
   const starts = pieces.map((p) => p.a);
   const r = (t: number): number => {
     const u = wrapAngle(t);
-    let lo = 0;
-    let hi = starts.length - 1;
-    while (lo < hi) {
-      const mid = (lo + hi + 1) >> 1;
-      if (starts[mid] <= u) lo = mid;
-      else hi = mid - 1;
-    }
-    return pieces[lo].f(u);
+    return pieces[lastAtOrBelow(starts.length, (i) => starts[i], u)].f(u);
   };
   const ex = extremes(r, pieces);
   return {

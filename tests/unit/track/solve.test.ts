@@ -1,17 +1,9 @@
 // The solve() contract: refusals with a clear message and place, the time limit, output sampling
 // to the chord tolerance, and tiling.
 import { describe, expect, it } from "vitest";
+import { engineError } from "./engine-error";
 import { EngineError, solve, tileRun } from "@/lib/track";
 
-function engineError(fn: () => unknown): EngineError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error("expected an EngineError");
-}
 
 const ttw = (wheel: object) => () => solve({ mode: "track-for-wheel", wheel });
 

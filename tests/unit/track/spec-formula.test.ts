@@ -1,22 +1,14 @@
 // The spec contract: schema, canonical JSON, SHA-256, and the locked-down formula compiler.
 import { describe, expect, it } from "vitest";
+import { engineError } from "./engine-error";
 import { sha256 } from "@noble/hashes/sha2.js";
 import { bytesToHex, utf8ToBytes } from "@noble/hashes/utils.js";
-import { canonicalJson, EngineError, parseSpec, specHash } from "@/lib/track";
+import { canonicalJson, parseSpec, specHash } from "@/lib/track";
 import { compileFormula } from "@/lib/track/formula";
 import { pythonReference } from "./python-reference";
 
 const square = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400 }, tolerance: 0.01 };
 
-function engineError(fn: () => unknown): EngineError {
-  try {
-    fn();
-  } catch (e) {
-    if (e instanceof EngineError) return e;
-    throw e;
-  }
-  throw new Error("expected an EngineError");
-}
 
 describe("spec", () => {
   it("fills defaults and names the failing field", () => {
