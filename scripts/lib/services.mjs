@@ -74,6 +74,7 @@ export const debian = {
   chromium: { name: "chromium", present: () => existsSync("/usr/bin/chromium") },
   mpmath: { name: "python3-mpmath", present: () => pythonHas("mpmath") },
   scipy: { name: "python3-scipy", present: () => pythonHas("scipy") },
+  ezdxf: { name: "python3-ezdxf", present: () => pythonHas("ezdxf") },
 };
 
 function pythonHas(module) {
