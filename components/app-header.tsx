@@ -16,6 +16,11 @@ export function AppHeader({ user }: { user: CurrentUser }) {
           <Link href="/projects" className="hover:underline">
             Projects
           </Link>
+          {user.role === "admin" || user.role === "fabricator" ? (
+            <Link href="/shop" className="hover:underline">
+              Shop library
+            </Link>
+          ) : null}
           {user.role === "admin" ? (
             <Link href="/admin/users" className="hover:underline">
               People

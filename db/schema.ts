@@ -5,6 +5,7 @@ import { relations } from "drizzle-orm";
 import {
   boolean,
   char,
+  double,
   index,
   int,
   json,
@@ -141,6 +142,84 @@ export const revisions = mysqlTable(
   (t) => [uniqueIndex("revisions_design_number").on(t.designId, t.number), index("revisions_hash").on(t.specHash)],
 );
 
+/** Where a shop-library figure comes from: a cited source, or the trade's common practice. */
+export const SOURCE_KINDS = ["published", "common-practice", "measured"] as const;
+
+/** The shop library: materials with the figures the checks use, each with its source. */
+export const materials = mysqlTable("materials", {
+  id: int("id").autoincrement().primaryKey(),
+  name: varchar("name", { length: 120 }).notNull().unique(),
+  thicknessMm: double("thickness_mm").notNull(),
+  densityKgM3: double("density_kg_m3").notNull(),
+  modulusGpa: double("modulus_gpa").notNull(),
+  strengthMpa: double("strength_mpa").notNull(),
+  frictionStatic: double("friction_static").notNull(),
+  frictionKinetic: double("friction_kinetic"),
+  /** Which surfaces the friction figures are for, e.g. "rubber tread on this material, dry". */
+  frictionPair: varchar("friction_pair", { length: 160 }).notNull().default(""),
+  source: varchar("source", { length: 500 }).notNull(),
+  sourceKind: mysqlEnum("source_kind", SOURCE_KINDS).notNull(),
+  active: boolean("active").notNull().default(true),
+  createdAt: timestamp("created_at").notNull().defaultNow(),
+  updatedAt: timestamp("updated_at").notNull().defaultNow().onUpdateNow(),
+});
+
+export const GRAIN_DIRECTIONS = ["length", "width", "none"] as const;
+
+/** Stock sheets the shop buys: size, material, grain direction. */
+export const stockSheets = mysqlTable("stock_sheets", {
+  id: int("id").autoincrement().primaryKey(),
+  name: varchar("name", { length: 120 }).notNull().unique(),
+  materialId: int("material_id").notNull().references(() => materials.id),
+  lengthMm: double("length_mm").notNull(),
+  widthMm: double("width_mm").notNull(),
+  grain: mysqlEnum("grain", GRAIN_DIRECTIONS).notNull().default("length"),
+  source: varchar("source", { length: 500 }).notNull(),
+  sourceKind: mysqlEnum("source_kind", SOURCE_KINDS).notNull(),
+  active: boolean("active").notNull().default(true),
+  createdAt: timestamp("created_at").notNull().defaultNow(),
+  updatedAt: timestamp("updated_at").notNull().defaultNow().onUpdateNow(),
+});
+
+export const MACHINE_KINDS = ["router", "laser", "waterjet", "plasma"] as const;
+export type MachineKind = (typeof MACHINE_KINDS)[number];
+
+/** Cutting machines: kind, kerf (a router's cutter diameter), bed size, smallest inside radius. */
+export const machines = mysqlTable("machines", {
+  id: int("id").autoincrement().primaryKey(),
+  name: varchar("name", { length: 120 }).notNull().unique(),
+  kind: mysqlEnum("kind", MACHINE_KINDS).notNull(),
+  kerfMm: double("kerf_mm").notNull(),
+  bedLengthMm: double("bed_length_mm").notNull(),
+  bedWidthMm: double("bed_width_mm").notNull(),
+  minInsideRadiusMm: double("min_inside_radius_mm").notNull(),
+  source: varchar("source", { length: 500 }).notNull(),
+  sourceKind: mysqlEnum("source_kind", SOURCE_KINDS).notNull(),
+  active: boolean("active").notNull().default(true),
+  createdAt: timestamp("created_at").notNull().defaultNow(),
+  updatedAt: timestamp("updated_at").notNull().defaultNow().onUpdateNow(),
+});
+
+/**
+ * A revision's cut plan: the settings it was made with and the nest (which part copy sits where on
+ * which sheet), checked on the server before it is stored. Parts and files are rebuilt from the
+ * revision's spec and these settings by the same code, so nothing derived is kept twice. The newest
+ * row is the revision's current plan; older rows stay as history.
+ */
+export const cutPlans = mysqlTable(
+  "cut_plans",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    revisionId: int("revision_id").notNull().references(() => revisions.id, { onDelete: "cascade" }),
+    settings: json("settings").$type<Record<string, unknown>>().notNull(),
+    nest: json("nest").$type<Record<string, unknown>>().notNull(),
+    summary: json("summary").$type<Record<string, unknown>>().notNull(),
+    createdById: int("created_by_id").references(() => users.id),
+    createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
+  },
+  (t) => [index("cut_plans_revision").on(t.revisionId)],
+);
+
 export const usersRelations = relations(users, ({ one, many }) => ({
   organisation: one(organisations, { fields: [users.organisationId], references: [organisations.id] }),
   memberships: many(projectMembers),
@@ -166,6 +245,10 @@ export const revisionsRelations = relations(revisions, ({ one }) => ({
 }));
 
 export type User = typeof users.$inferSelect;
+export type Material = typeof materials.$inferSelect;
+export type StockSheet = typeof stockSheets.$inferSelect;
+export type Machine = typeof machines.$inferSelect;
+export type CutPlan = typeof cutPlans.$inferSelect;
 export type Design = typeof designs.$inferSelect;
 export type Revision = typeof revisions.$inferSelect;
 export type Project = typeof projects.$inferSelect;

@@ -13,6 +13,8 @@ const vitest = path.join(root, "node_modules/.bin/vitest");
 // any other arguments are handed to vitest as file filters, e.g. `npm test -- role-matrix`.
 const args = process.argv.slice(2);
 const noBrowser = args.includes("--no-browser");
+// `--skip-checks` leaves out tsc and eslint (quicker while working on one file; CI never uses it).
+const skipChecks = args.includes("--skip-checks");
 const filters = args.filter((a) => !a.startsWith("--"));
 // With a filter, a run that matches no file is not a failure (the filter may aim at the other run).
 const filterArgs = filters.length ? ["--passWithNoTests", ...filters] : [];
@@ -30,10 +32,12 @@ async function main() {
   tsx("scripts/db/seed.ts", env);
   await startMailSink(env);
 
-  log("type check (tsc --noEmit)…");
-  run(path.join(root, "node_modules/.bin/tsc"), ["--noEmit", "-p", "tsconfig.json"], { env });
-  log("lint (eslint)…");
-  run(path.join(root, "node_modules/.bin/eslint"), ["."], { env });
+  if (!skipChecks) {
+    log("type check (tsc --noEmit)…");
+    run(path.join(root, "node_modules/.bin/tsc"), ["--noEmit", "-p", "tsconfig.json"], { env });
+    log("lint (eslint)…");
+    run(path.join(root, "node_modules/.bin/eslint"), ["."], { env });
+  }
   log("unit and integration tests…");
   run(vitest, ["run", "--config", "vitest.config.mts", ...filterArgs], { env });
   if (noBrowser) return;

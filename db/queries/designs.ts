@@ -7,19 +7,10 @@ import { designs, projects, revisions, users, type DesignMode } from "@/db/schem
 import { audit } from "@/lib/server/audit";
 import type { CurrentUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
+import { summarise, type RevisionSummary } from "@/lib/revision-summary";
 import { ENGINE_VERSION, isEngineError, parseSpec, solve, specHash, type DesignSpec, type SolveResult } from "@/lib/track";
 
-/** The engine's figures kept beside a revision, for lists, comparisons and sign-off. */
-export interface RevisionSummary {
-  period?: number;
-  depth?: number;
-  axleHeight?: number;
-  centreDistance?: number;
-  wheel: { rMin: number; rMax: number };
-  partner?: { rMin: number; rMax: number };
-  check: SolveResult["check"];
-  warnings: SolveResult["warnings"];
-}
+export type { RevisionSummary };
 
 export interface DesignRow {
   id: number;
@@ -53,19 +44,6 @@ export function validSpec(input: unknown): DesignSpec {
 }
 
 const SAVE_TIME_LIMIT_MS = 10_000;
-
-function summarise(result: SolveResult): RevisionSummary {
-  return {
-    period: result.period,
-    depth: result.depth,
-    axleHeight: result.axleHeight,
-    centreDistance: result.centreDistance,
-    wheel: { rMin: result.wheel.rMin, rMax: result.wheel.rMax },
-    ...(result.partner ? { partner: { rMin: result.partner.rMin, rMax: result.partner.rMax } } : {}),
-    check: result.check,
-    warnings: result.warnings,
-  };
-}
 
 export async function listDesigns(projectId: number): Promise<DesignRow[]> {
   const rows = await db

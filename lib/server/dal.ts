@@ -105,3 +105,13 @@ export async function requireRevisionAccess(revisionId: number) {
   });
   return { ...access, revision: found.revision, designName: found.designName };
 }
+
+/**
+ * Cut plans and cut files belong to the shop: an admin or the project's fabricator. Other members
+ * (clients, installers) see the revision but never its cut files.
+ */
+export async function requireCutPlanAccess(revisionId: number) {
+  const access = await requireRevisionAccess(revisionId);
+  if (!access.canManage) throw new AppError("forbidden", "Cut plans and cut files are for the shop: the project's fabricator or an admin.");
+  return access;
+}

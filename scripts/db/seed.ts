@@ -1,15 +1,21 @@
-// Seeds the invented demo scenario (db/demo-data.json). Idempotent: each row is looked up by its
-// natural key first, so a re-run keeps what is there (including changed passwords) and adds nothing twice.
+// Seeds the shop library (db/shop-library.json: common figures with their sources) and the invented
+// demo scenario (db/demo-data.json: people, projects, and one design per project with a first
+// revision solved by the engine). Idempotent: each row is looked up by its natural key first, so a
+// re-run keeps what is there (including changed passwords and edited library rows) and adds nothing twice.
 import { and, eq } from "drizzle-orm";
 import { drizzle } from "drizzle-orm/mysql2";
 import mysql from "mysql2/promise";
 import demo from "../../db/demo-data.json";
+import library from "../../db/shop-library.json";
 import * as schema from "../../db/schema";
+import { summarise } from "../../lib/revision-summary";
 import { hashPassword } from "../../lib/server/passwords";
+import { ENGINE_VERSION, parseSpec, solve, specHash } from "../../lib/track";
 
 const connection = await mysql.createConnection({ uri: process.env.DATABASE_URL! });
 const db = drizzle({ client: connection, schema, mode: "default" });
-const { organisations, users, projects, projectMembers } = schema;
+const { organisations, users, projects, projectMembers, designs, revisions, materials, stockSheets, machines } = schema;
+type SourceKind = (typeof schema.SOURCE_KINDS)[number];
 let added = 0;
 
 async function idOf<T extends { id: number }>(rows: Promise<T[]>): Promise<number | undefined> {
@@ -42,7 +48,31 @@ try {
     userIds.set(u.email, id);
   }
 
+  const materialIds = new Map<string, number>();
+  for (const m of library.materials) {
+    let id = await idOf(db.select({ id: materials.id }).from(materials).where(eq(materials.name, m.name)));
+    if (id === undefined) {
+      const [res] = await db.insert(materials).values({ ...m, sourceKind: m.sourceKind as SourceKind });
+      id = res.insertId;
+      added++;
+    }
+    materialIds.set(m.name, id);
+  }
+  for (const { material, ...sheet } of library.stockSheets) {
+    if (await idOf(db.select({ id: stockSheets.id }).from(stockSheets).where(eq(stockSheets.name, sheet.name)))) continue;
+    await db.insert(stockSheets).values({
+      ...sheet, materialId: materialIds.get(material)!, grain: sheet.grain as (typeof schema.GRAIN_DIRECTIONS)[number], sourceKind: sheet.sourceKind as SourceKind,
+    });
+    added++;
+  }
+  for (const machine of library.machines) {
+    if (await idOf(db.select({ id: machines.id }).from(machines).where(eq(machines.name, machine.name)))) continue;
+    await db.insert(machines).values({ ...machine, kind: machine.kind as schema.MachineKind, sourceKind: machine.sourceKind as SourceKind });
+    added++;
+  }
+
   const adminId = userIds.get("admin@example.test");
+  const fabricatorId = userIds.get("fabricator@example.test");
   for (const p of demo.projects) {
     let id = await idOf(db.select({ id: projects.id }).from(projects).where(eq(projects.name, p.name)));
     if (id === undefined) {
@@ -61,6 +91,19 @@ try {
         await db.insert(projectMembers).values({ projectId: id, userId, role: m.role as schema.MemberRole, addedById: adminId });
         added++;
       }
+    }
+    for (const d of p.designs ?? []) {
+      if (await idOf(db.select({ id: designs.id }).from(designs).where(and(eq(designs.projectId, id), eq(designs.name, d.name))))) continue;
+      // The same path as saving in the studio: the engine's schema, its solve, its canonical hash.
+      const spec = parseSpec(d.spec);
+      const [res] = await db.insert(designs).values({
+        projectId: id, name: d.name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, createdById: fabricatorId,
+      });
+      await db.insert(revisions).values({
+        designId: res.insertId, number: 1, spec: spec as unknown as Record<string, unknown>, specHash: specHash(spec),
+        engineVersion: ENGINE_VERSION, summary: summarise(solve(spec)) as unknown as Record<string, unknown>, note: d.note, createdById: fabricatorId,
+      });
+      added += 2;
     }
   }
   console.log(`[axlewright] demo data seeded (${added} new rows)`);

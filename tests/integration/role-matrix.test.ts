@@ -8,8 +8,10 @@ import * as memberRoute from "@/app/api/projects/[id]/members/[memberId]/route";
 import * as solveRoute from "@/app/api/solve/route";
 import { addMemberAction, createProjectAction, removeMemberAction, updateProjectAction } from "@/lib/actions/projects";
 import { changeRoleAction, createUserAction, setActiveAction } from "@/lib/actions/users";
+import { saveMachineAction, saveMaterialAction, saveStockSheetAction, setShopRowActiveAction } from "@/lib/actions/shop";
 import type { ActionState } from "@/lib/server/action";
-import { pool } from "@/db";
+import { db, pool } from "@/db";
+import { materials } from "@/db/schema";
 import { actAs } from "./support/session";
 import { addMembership, auditCount, makeProject, makeUser, runTag } from "./support/fixtures";
 
@@ -186,7 +188,47 @@ const CASES: Case[] = [
       return actionStatus(() => setActiveAction({}, form({ userId: target.id, active: "false" })));
     },
   },
+  // The shop library: admins and fabricators (members of a project or not); nobody else.
+  {
+    name: "action saveMaterial",
+    expect: shopOnly(200),
+    call: () => actionStatus(() => saveMaterialAction({}, form(materialForm(`Matrix ply ${runTag} ${++seq}`)))),
+  },
+  {
+    name: "action saveStockSheet",
+    expect: shopOnly(200),
+    call: async () =>
+      actionStatus(async () =>
+        saveStockSheetAction({}, form({ name: `Matrix sheet ${runTag} ${++seq}`, materialId: await libraryMaterialId(), lengthMm: 2440, widthMm: 1220, grain: "length", source: "common practice", sourceKind: "common-practice" })),
+      ),
+  },
+  {
+    name: "action saveMachine",
+    expect: shopOnly(200),
+    call: () =>
+      actionStatus(() =>
+        saveMachineAction({}, form({ name: `Matrix router ${runTag} ${++seq}`, kind: "router", kerfMm: 6, bedLengthMm: 2500, bedWidthMm: 1250, minInsideRadiusMm: 3, source: "common practice", sourceKind: "common-practice" })),
+      ),
+  },
+  {
+    name: "action setShopRowActive (retire)",
+    expect: shopOnly(200),
+    call: async () => {
+      const id = await libraryMaterialId();
+      return actionStatus(() => setShopRowActiveAction({}, form({ table: "materials", id, active: "false" })));
+    },
+  },
 ];
+
+function materialForm(name: string) {
+  return { name, thicknessMm: 18, densityKgM3: 680, modulusGpa: 7, strengthMpa: 40, frictionStatic: 0.6, frictionKinetic: "", frictionPair: "rubber on ply", source: "common practice", sourceKind: "common-practice" };
+}
+
+/** A material row of this run's own (made directly, so it costs no audit entry inside a case). */
+async function libraryMaterialId(): Promise<number> {
+  const [res] = await db.insert(materials).values({ ...materialForm(`Matrix base ${runTag} ${++seq}`), frictionKinetic: null, sourceKind: "common-practice" });
+  return res.insertId;
+}
 
 describe.each(CASES)("$name", (c) => {
   it.each(CALLERS)("as %s", async (caller) => {
