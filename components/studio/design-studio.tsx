@@ -153,6 +153,9 @@ export function DesignStudio({ designId, projectId, revisionNumber }: { designId
           {spec ? (
             <StudioView
               result={solver.error ? undefined : solver.result}
+              options={solver.options}
+              check={solver.check}
+              checkError={solver.checkError?.message}
               spec={designSpecSchema.safeParse(spec).data}
               error={solver.error ? `${solver.error.message}${solver.error.where ? ` (${solver.error.where})` : ""}` : undefined}
               onPick={readOnly ? undefined : (n: number) => change(spec.mode === "partner-wheel" ? { ...spec, lobes: n } : { ...spec, periodsPerTurn: n })}

@@ -1,7 +1,7 @@
 "use client";
 
 import { Circle, Group, Line, Text } from "react-konva";
-import type { SolveResult } from "@/lib/track";
+import type { SolvedGeometry } from "@/lib/track";
 import type { Pose } from "@/lib/studio/motion";
 import { placeOutline, toScreen, type Pt, type View } from "@/lib/studio/view-math";
 import { CAUTION, INK } from "./palette";
@@ -71,7 +71,7 @@ export function HighlightMark({ at, label, view, font }: { at: Pt; label?: strin
 }
 
 /** All moving bodies at one pose. `resting` are the axle heights the outlines themselves give (lib/studio/motion restingAxles). */
-export function PosedBodies({ result, pose, resting, view }: { result: SolveResult; pose: Pose; resting: { wheel: number; partner?: number }; view: View }) {
+export function PosedBodies({ result, pose, resting, view }: { result: SolvedGeometry; pose: Pose; resting: { wheel: number; partner?: number }; view: View }) {
   const pair = result.mode === "partner-wheel";
   // Track modes: set each wheel at the height its own outline rests at, so a wrong turn table would
   // show as a bobbing axle. Pairs keep their fixed axles.

@@ -6,7 +6,7 @@
 
 import { useEffect, useEffectEvent, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { Layer, Line, Stage } from "react-konva";
-import type { DesignSpec, SolveResult } from "@/lib/track";
+import type { DesignSpec, SolvedGeometry } from "@/lib/track";
 import { axleTrace, cycleOf, poseAt, restingAxles } from "@/lib/studio/motion";
 import { toScreen, type Pt } from "@/lib/studio/view-math";
 import { CanvasDimensions } from "./canvas-dimensions";
@@ -26,7 +26,7 @@ export interface CanvasHighlight {
 }
 
 export interface CanvasStageProps {
-  result: SolveResult;
+  result: SolvedGeometry;
   spec?: DesignSpec;
   playing: boolean;
   speed: number;
@@ -40,7 +40,7 @@ export interface CanvasStageProps {
 const ZOOM_STEP = 1.25;
 const PAN_STEP = 40;
 
-function describe(result: SolveResult, spec?: DesignSpec): string {
+function describe(result: SolvedGeometry, spec?: DesignSpec): string {
   const what = {
     "track-for-wheel": "a wheel rolling on the track made for it",
     "wheel-for-track": "the wheel made for a track, rolling on it",
