@@ -27,11 +27,13 @@ export interface StudioViewProps {
   error?: string;
   /** Picking a closure option (periods per turn, or lobes). */
   onPick?: (n: number) => void;
+  /** Placing the axle of an uploaded outline on the canvas; undefined where it cannot be edited. */
+  onAxleChange?: (axle: { x: number; y: number }) => void;
   canvasHeight?: number;
 }
 
 /** The studio's view half: canvas and playback on the left, the check and options on the right, plots below. */
-export function StudioView({ result, options, check, checkError, spec, error, onPick, canvasHeight }: StudioViewProps) {
+export function StudioView({ result, options, check, checkError, spec, error, onPick, onAxleChange, canvasHeight }: StudioViewProps) {
   const clock = useRollingClock();
   const [highlight, setHighlight] = useState<CanvasHighlight | null>(null);
   // A new design clears the old design's highlight (adjusted while rendering, not in an effect).
@@ -90,6 +92,7 @@ export function StudioView({ result, options, check, checkError, spec, error, on
           onPlayingChange={clock.setPlaying}
           highlight={highlight}
           height={canvasHeight}
+          onAxleChange={onAxleChange}
         />
         {result && !error ? (
           <div className="flex flex-wrap items-center gap-3">
