@@ -25,7 +25,29 @@ const CASES = [
 const TARGET_MS = 100;
 const TARGET_FPS = 50;
 
+const RUNS = 8;
+
 const median = (xs) => [...xs].sort((a, b) => a - b)[xs.length >> 1];
+
+/**
+ * Arms a stopwatch in the page: it starts at the next input event (the field being changed) and
+ * stops at the first animation frame in which the canvas readout no longer reads `before`, the
+ * frame that paints the redrawn design. The result waits in window.__benchRedraw (ms).
+ */
+function armStopwatch(page, before) {
+  return page.evaluate((before) => {
+    window.__benchRedraw = new Promise((resolve) => {
+      let t0 = null;
+      addEventListener("input", () => (t0 = performance.now()), { capture: true, once: true });
+      const poll = () => {
+        const text = document.querySelector("[data-testid=studio-view] dl")?.textContent;
+        if (t0 !== null && text !== undefined && text !== before) resolve(performance.now() - t0);
+        else requestAnimationFrame(poll);
+      };
+      requestAnimationFrame(poll);
+    });
+  }, before);
+}
 
 async function main() {
   ensureNodeModules();
@@ -52,7 +74,7 @@ async function main() {
   await page.waitForURL(/\/projects$/);
 
   console.log(`\nStudio in headless Chromium (${await browser.version()}); parameter change → redrawn readout, and frame rate while playing.`);
-  console.log(`${"preset".padEnd(28)} ${"redraw median".padStart(14)} ${"ratio to 100 ms".padStart(16)} ${"fps".padStart(6)} ${"ratio to 50".padStart(12)}`);
+  console.log(`${"preset".padEnd(28)} ${"redraw median".padStart(14)} ${"ratio to 100 ms".padStart(16)} ${"seen median".padStart(14)} ${"fps".padStart(6)} ${"ratio to 50".padStart(12)}`);
   for (const [preset, field, value] of CASES) {
     await page.goto(`${base}/projects/1/designs/new`);
     await page.getByLabel("Design name").fill(`Bench ${preset}`);
@@ -66,22 +88,30 @@ async function main() {
     await readout.waitFor();
     const input = page.getByLabel(field, { exact: true });
     const original = await input.inputValue();
-    const times = [];
-    for (let i = 0; i < 6; i++) {
+    const inPage = [];
+    const seen = [];
+    for (let i = 0; i < RUNS; i++) {
       const next = i % 2 === 0 ? value : original;
+      await armStopwatch(page, await readout.evaluate((el) => el.textContent));
       const started = Date.now();
       await input.fill(next);
-      await page.waitForFunction((text) => document.querySelector("[data-testid=studio-view] dl")?.textContent !== text && !!document.querySelector("[data-testid=studio-view] dl"), await readout.evaluate((el) => el.textContent), { polling: "raf", timeout: 20_000 });
-      times.push(Date.now() - started);
+      inPage.push(await page.evaluate(() => window.__benchRedraw));
+      seen.push(Date.now() - started);
+      // Let the rolling check of this value finish, so each run starts from a settled studio.
+      await page.getByTestId("check-figures").waitFor({ timeout: 20_000 });
     }
     await page.getByRole("button", { name: /Play/ }).click();
     await page.waitForTimeout(3000);
     const fps = await page.evaluate(() => window.__axlewrightStudio?.fps ?? 0);
     await page.getByRole("button", { name: /Pause/ }).click();
-    const ms = median(times);
-    console.log(`${preset.padEnd(28)} ${`${ms} ms`.padStart(14)} ${(ms / TARGET_MS).toFixed(2).padStart(16)} ${fps.toFixed(0).padStart(6)} ${(fps / TARGET_FPS).toFixed(2).padStart(12)}`);
+    const ms = Math.round(median(inPage));
+    const outside = median(seen);
+    console.log(`${preset.padEnd(28)} ${`${ms} ms`.padStart(14)} ${(ms / TARGET_MS).toFixed(2).padStart(16)} ${`${outside} ms`.padStart(14)} ${fps.toFixed(0).padStart(6)} ${(fps / TARGET_FPS).toFixed(2).padStart(12)}`);
   }
-  console.log("(redraw includes the debounce of 60 ms before solving and Playwright's own polling; ratio ≤ 1 meets the redraw target, ≥ 1 the frame-rate target)");
+  console.log(
+    `(medians of ${RUNS} changes. redraw: in the page, from the input event of the changed field to the first frame showing the new readout; ` +
+      "seen: the same as Playwright observes it, with its own round trips. Ratio ≤ 1 meets the redraw target, ≥ 1 the frame-rate target.)",
+  );
   await browser.close();
 }
 

@@ -51,6 +51,8 @@ export function DesignStudio({ designId, projectId, revisionNumber }: { designId
   const spec: DesignSpecInput | null =
     revisionNumber !== undefined ? (revision.data?.revision.spec ?? null) : canEdit ? working : (latestRevision.data?.revision.spec ?? null);
   const solver = useSolver(spec ?? { mode: "track-for-wheel" });
+  // An uploaded outline's axle can also be placed on the canvas.
+  const outlineWheel = spec?.wheel?.kind === "outline" ? spec.wheel : undefined;
 
   const unsaved = useMemo(
     () => canEdit && revisionNumber === undefined && !!working && !!design.data?.design.draft && !sameSpec(canonical(working), canonical(design.data.design.draft)),
@@ -153,9 +155,13 @@ export function DesignStudio({ designId, projectId, revisionNumber }: { designId
           {spec ? (
             <StudioView
               result={solver.error ? undefined : solver.result}
+              options={solver.options}
+              check={solver.check}
+              checkError={solver.checkError?.message}
               spec={designSpecSchema.safeParse(spec).data}
               error={solver.error ? `${solver.error.message}${solver.error.where ? ` (${solver.error.where})` : ""}` : undefined}
               onPick={readOnly ? undefined : (n: number) => change(spec.mode === "partner-wheel" ? { ...spec, lobes: n } : { ...spec, periodsPerTurn: n })}
+              onAxleChange={readOnly || !outlineWheel ? undefined : (axle) => change({ ...spec, wheel: { ...outlineWheel, axle } })}
             />
           ) : null}
         </div>

@@ -1,57 +1,58 @@
 "use client";
-// Solves the current spec in a Web Worker. Only the newest spec counts: when a new one arrives while
-// the worker is busy, the busy worker is ended and a fresh one takes the new spec.
-import { useEffect, useRef, useState } from "react";
-import type { SolveResult } from "@/lib/track";
-import type { SolveReply } from "./solve-worker";
+// Solves the current spec in a Web Worker (solve-worker.ts) with no debounce: every change is
+// posted at once and the latest request wins (solver-client.ts). The geometry comes back first and
+// is drawn at once; the closure options and the rolling check of it follow.
+import { useEffect, useState } from "react";
+import type { CheckResult, SolvedGeometry, SolveOption } from "@/lib/track";
+import { SolverClient } from "./solver-client";
+import type { SolveFailure } from "./solve-worker";
 
 export interface SolverState {
-  result?: SolveResult;
-  error?: { message: string; code: string; where?: string };
+  /** The newest geometry solved (kept while a newer spec is being solved). */
+  result?: SolvedGeometry;
+  /** The other closure choices for `result`; undefined until they arrive (or for modes without them). */
+  options?: SolveOption[];
+  /** The rolling check of `result`; undefined until it arrives. */
+  check?: CheckResult;
+  /** The newest spec could not be solved. */
+  error?: SolveFailure;
+  /** The options or the rolling check of `result` stopped on an error. */
+  checkError?: SolveFailure;
+  /** Waiting for the newest spec's geometry. */
   busy: boolean;
-  /** Milliseconds from the spec change to the result, including the hop to the worker. */
+  /** Waiting for the options or the check of `result`. */
+  checking: boolean;
+  /** Milliseconds from the spec change to its geometry, including the hop to the worker. */
   ms?: number;
 }
+
+type Solved = Omit<SolverState, "busy"> & { key: string | null };
 
 function newWorker(): Worker {
   return new Worker(new URL("./solve-worker.ts", import.meta.url), { type: "module" });
 }
 
-export function useSolver(spec: unknown, delayMs = 60): SolverState {
-  const [state, setState] = useState<SolverState>({ busy: true });
-  const worker = useRef<Worker | null>(null);
-  const busy = useRef(false);
-  const seq = useRef(0);
+export function useSolver(spec: unknown): SolverState {
+  // The client makes its worker on the first request, so nothing starts during the server render.
+  const [client] = useState(() => new SolverClient(newWorker));
+  const [solved, setSolved] = useState<Solved>({ key: null, checking: false });
   const key = JSON.stringify(spec);
 
-  useEffect(() => () => worker.current?.terminate(), []);
+  useEffect(() => () => client.dispose(), [client]);
 
   useEffect(() => {
-    const id = ++seq.current;
-    const timer = setTimeout(() => {
-      if (busy.current) {
-        worker.current?.terminate();
-        worker.current = null;
-      }
-      const w = (worker.current ??= newWorker());
-      const started = performance.now();
-      busy.current = true;
-      setState((s) => ({ ...s, busy: true }));
-      w.onmessage = (event: MessageEvent<SolveReply>) => {
-        if (event.data.id !== seq.current) return;
-        busy.current = false;
-        const ms = performance.now() - started;
-        if (event.data.ok) setState({ result: event.data.result, busy: false, ms });
-        else setState((s) => ({ result: s.result, error: (event.data as Extract<SolveReply, { ok: false }>).error, busy: false, ms }));
-      };
-      w.onerror = () => {
-        busy.current = false;
-        setState((s) => ({ ...s, busy: false, error: { message: "The solver could not start in this browser.", code: "internal" } }));
-      };
-      w.postMessage({ id, spec: JSON.parse(key) });
-    }, delayMs);
-    return () => clearTimeout(timer);
-  }, [key, delayMs]);
+    const posted = performance.now();
+    client.request(JSON.parse(key), (reply) => {
+      if (!reply.ok) {
+        const error = reply.error;
+        if (reply.stage === "geometry") setSolved((s) => ({ key, result: s.result, error, checking: false, ms: performance.now() - posted }));
+        else setSolved((s) => ({ ...s, checkError: error, checking: false }));
+      } else if (reply.stage === "geometry") setSolved({ key, result: reply.geometry, checking: true, ms: performance.now() - posted });
+      else if (reply.stage === "options") setSolved((s) => ({ ...s, options: reply.options }));
+      else setSolved((s) => ({ ...s, check: reply.check, checking: false }));
+    });
+  }, [client, key]);
 
-  return state;
+  const { key: solvedKey, ...state } = solved;
+  return { ...state, busy: solvedKey !== key };
 }

@@ -16,7 +16,7 @@
 // seamless) and one full driver turn for a pair. `alongAt` turns a position into axle x or driver
 // angle; `positionAt` goes back.
 
-import type { SolveResult } from "@/lib/track";
+import type { SolvedGeometry, SolveResult } from "@/lib/track";
 import { hermite, rayReach, trackLookup, trackYAt, type Pt, type TrackLookup } from "./view-math";
 
 /** How many track periods the studio lays out and rolls over. */
@@ -28,12 +28,12 @@ export type Cycle =
   | { kind: "track"; start: number; length: number; period: number }
   | { kind: "pair"; start: 0; length: number; sector: number };
 
-export function isPairResult(r: SolveResult): boolean {
+export function isPairResult(r: SolvedGeometry): boolean {
   return r.mode === "partner-wheel";
 }
 
 /** The nominal axle line: y = 0 for track-for-wheel (the track below it), else axleHeight above the datum. */
-export function axleLineY(r: SolveResult): number {
+export function axleLineY(r: SolvedGeometry): number {
   return r.mode === "track-for-wheel" ? 0 : (r.axleHeight ?? 0);
 }
 
@@ -60,9 +60,9 @@ interface Tables {
 }
 
 // Results are immutable JSON; build the lookup tables once per result.
-const cache = new WeakMap<SolveResult, Tables>();
+const cache = new WeakMap<SolvedGeometry, Tables>();
 
-function tables(r: SolveResult): Tables {
+function tables(r: SolvedGeometry): Tables {
   const hit = cache.get(r);
   if (hit) return hit;
   const m = r.motion ?? [];
@@ -96,13 +96,13 @@ function tables(r: SolveResult): Tables {
   return t;
 }
 
-function periodOf(r: SolveResult): number {
+function periodOf(r: SolvedGeometry): number {
   if (r.period) return r.period;
   const m = r.motion ?? [];
   return m.length > 1 ? m[m.length - 1].x - m[0].x : 1;
 }
 
-export function cycleOf(r: SolveResult): Cycle {
+export function cycleOf(r: SolvedGeometry): Cycle {
   if (isPairResult(r)) return { kind: "pair", start: 0, length: TAU, sector: TAU / Math.max(1, r.wheel.symmetry) };
   const period = periodOf(r);
   const start = r.motion?.[0]?.x ?? r.track?.points[0]?.[0] ?? 0;
@@ -112,13 +112,13 @@ export function cycleOf(r: SolveResult): Cycle {
 const wrap01 = (p: number) => p - Math.floor(p);
 
 /** Axle x (track modes) or driver angle (pairs) at a cycle position. */
-export function alongAt(r: SolveResult, position: number): number {
+export function alongAt(r: SolvedGeometry, position: number): number {
   const c = cycleOf(r);
   return c.start + wrap01(position) * c.length;
 }
 
 /** The cycle position of an axle x (track modes) or driver angle (pairs), wrapped to [0, 1). */
-export function positionAt(r: SolveResult, along: number): number {
+export function positionAt(r: SolvedGeometry, along: number): number {
   const c = cycleOf(r);
   return wrap01((along - c.start) / c.length);
 }
@@ -130,28 +130,28 @@ function extended(xs: Float64Array, ys: Float64Array, ds: Float64Array, period: 
 }
 
 /** The wheel's clockwise turn with the axle at x (track modes). */
-export function wheelAngleAt(r: SolveResult, x: number): number {
+export function wheelAngleAt(r: SolvedGeometry, x: number): number {
   const t = tables(r);
   if (t.xs.length < 2) return 0;
   return extended(t.xs, t.angle, t.dAngle, periodOf(r), t.turn, x);
 }
 
 /** Twin wheels: the lower wheel's counter-clockwise turn with the axles at x. */
-export function lowerAngleAt(r: SolveResult, x: number): number {
+export function lowerAngleAt(r: SolvedGeometry, x: number): number {
   const t = tables(r);
   if (!t.lower || !t.dLower || t.xs.length < 2) return 0;
   return extended(t.xs, t.lower, t.dLower, periodOf(r), t.lowerTurn, x);
 }
 
 /** Partner wheel: the partner's counter-clockwise turn when the driver has turned θ clockwise. */
-export function followerAt(r: SolveResult, driver: number): number {
+export function followerAt(r: SolvedGeometry, driver: number): number {
   const t = tables(r);
   if (!t.fd || !t.ff || !t.dff || t.fd.length < 2) return 0;
   return extended(t.fd, t.ff, t.dff, TAU / Math.max(1, r.wheel.symmetry), t.sectorTurn, driver);
 }
 
 /** Axle x at which the wheel has turned `angle` clockwise: the motion table read backwards (the turn only grows). */
-export function xAtWheelAngle(r: SolveResult, angle: number): number {
+export function xAtWheelAngle(r: SolvedGeometry, angle: number): number {
   const t = tables(r);
   if (t.xs.length < 2 || t.turn <= 0) return t.xs[0] ?? 0;
   const P = periodOf(r);
@@ -161,7 +161,7 @@ export function xAtWheelAngle(r: SolveResult, angle: number): number {
 }
 
 /** Track height at x, the period repeated (track modes). */
-export function trackYAtX(r: SolveResult, x: number): number {
+export function trackYAtX(r: SolvedGeometry, x: number): number {
   const t = tables(r).track;
   return t ? trackYAt(t, x) : 0;
 }
@@ -189,7 +189,7 @@ export interface Pose {
 
 
 /** Everything the canvas draws at one cycle position, from the engine's tables alone. */
-export function poseAt(r: SolveResult, position: number): Pose {
+export function poseAt(r: SolvedGeometry, position: number): Pose {
   const along = alongAt(r, position);
   if (isPairResult(r)) {
     const a = r.centreDistance ?? 0;
@@ -215,12 +215,12 @@ export function poseAt(r: SolveResult, position: number): Pose {
 }
 
 /** How far the wheel reaches from its axle toward its contact in this pose (straight down, or along the line of centres). */
-export function reachToContact(r: SolveResult, pose: Pose): number {
+export function reachToContact(r: SolvedGeometry, pose: Pose): number {
   return rayReach(r.wheel.points, downInBody(pose.wheel.angle));
 }
 
 /** How far the partner / lower twin reaches from its axle straight up toward the contact. */
-export function partnerReachToContact(r: SolveResult, pose: Pose): number {
+export function partnerReachToContact(r: SolvedGeometry, pose: Pose): number {
   if (!r.partner || !pose.partner) return NaN;
   return rayReach(r.partner.points, upInBody(pose.partner.angle));
 }
@@ -231,7 +231,7 @@ export function partnerReachToContact(r: SolveResult, pose: Pose): number {
  * axle at r₁ + r₂ below the driver's). Tracing these heights shows whether the axle stays level
  * without trusting the axle height the engine reports.
  */
-export function restingAxles(r: SolveResult, pose: Pose): { wheel: number; partner?: number } {
+export function restingAxles(r: SolvedGeometry, pose: Pose): { wheel: number; partner?: number } {
   if (isPairResult(r)) return { wheel: 0, partner: -(reachToContact(r, pose) + partnerReachToContact(r, pose)) };
   const y = pose.contact[1];
   const out: { wheel: number; partner?: number } = { wheel: y + reachToContact(r, pose) };
@@ -247,7 +247,7 @@ export interface TraceRow {
 }
 
 /** The resting axle heights at `samples` + 1 even steps over one cycle (the axle path the canvas traces). */
-export function axleTrace(r: SolveResult, samples = 360): TraceRow[] {
+export function axleTrace(r: SolvedGeometry, samples = 360): TraceRow[] {
   const out: TraceRow[] = [];
   for (let i = 0; i <= samples; i++) {
     // The last row is the cycle's end, not its wrapped start.

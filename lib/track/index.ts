@@ -25,7 +25,7 @@
 //   lowerAxleHeight); both close with periodsPerTurn periods per turn.
 
 export { designSpecSchema, parseSpec, canonicalJson, specHash, type DesignSpec, type DesignSpecInput } from "./spec";
-export { solve, ENGINE_VERSION } from "./solve";
+export { solve, solveInStages, ENGINE_VERSION, type SolveOptions, type SolveStages } from "./solve";
 export { EngineError, isEngineError, type EngineErrorCode } from "./errors";
 export { tileRun, type TileInput, type TileResult } from "./tiling";
-export type { SolveResult, Check, Outline, SolveOption, Warning, Pt } from "./types";
+export type { SolveResult, SolvedGeometry, CheckResult, Check, Outline, SolveOption, Warning, Pt } from "./types";

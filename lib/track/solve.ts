@@ -12,7 +12,7 @@ import { parseSpec, specHash, type DesignSpec } from "./spec";
 import { solveTrackForWheel } from "./track-for-wheel";
 import { buildTrack, type Track } from "./tracks";
 import { pointSymmetry } from "./twins";
-import type { Check, SolveOption, SolveResult, Warning } from "./types";
+import type { Check, CheckResult, SolvedGeometry, SolveOption, SolveResult, Warning } from "./types";
 import { solveAxleHeight, wheelFromTrack, type Side } from "./wheel-for-track";
 import { buildWheel, ray, TAU, type Wheel } from "./wheels";
 
@@ -30,6 +30,19 @@ interface Ctx {
   tol: number;
   deadline: Deadline;
   budget: { left: number };
+}
+
+type Base = Pick<SolveResult, "engineVersion" | "specHash" | "mode" | "units">;
+
+/**
+ * A mode's work in three parts: the geometry (everything that is drawn and cut), the other closure
+ * choices (periods per turn or lobes, each a solve of its own), and the independent rolling check.
+ * The last two run later and only when asked for; they reuse the geometry's construction.
+ */
+interface Stages {
+  geometry: SolvedGeometry;
+  options?(deadline: Deadline): SolveOption[];
+  check(deadline: Deadline): CheckResult;
 }
 
 const fmt = (v: number) => Number(v.toPrecision(4)).toString();
@@ -92,37 +105,39 @@ function warnings(check: Check, fig: Figures, size: number, units: string, hasCo
   return out;
 }
 
-function trackForWheelMode(ctx: Ctx, base: Pick<SolveResult, "engineVersion" | "specHash" | "mode" | "units">): SolveResult {
+function trackForWheelMode(ctx: Ctx, base: Base): Stages {
   const { deadline, tol } = ctx;
   const wheel = buildWheel(ctx.spec.wheel!);
   const tfw = solveTrackForWheel(wheel, deadline);
   const { T, period } = tfw;
   const trackS = sampleCurve((t) => [tfw.x.value(t), -wheel.r(t)], 0, T, tfw.breaks, tol, { deadline, budget: ctx.budget });
   const wheelPts = wheelOutline(wheel, ctx);
-  deadline.checkNow();
-  const roll = checkTrackRoll({
-    wheel: polarCurve(wheel.r, T, tfw.breaks),
-    T,
-    // The track as the engine outputs it, parametrised by the wheel angle t.
-    track: { x: (t) => tfw.x.value(t), y: (t) => -wheel.r(t), V: T, breaks: tfw.breaks },
-    H: 0,
-    size: wheel.rMax,
-    probe: { kind: "track", wheelR: wheel.r },
-    deadline,
-  });
-  const hasCorners = wheel.corners.length > 0;
-  const fig = wheelAndRoadFigures(piecewise(wheel.r, 0, T, tfw.breaks, 1), hasCorners);
-  const check = makeCheck(roll, { max: fig.friction.value, at: tfw.x.value(fig.friction.at) }, { wheel: fig.radiusA, track: fig.radiusB });
-  return {
+  const geometry: SolvedGeometry = {
     ...base,
     period,
     depth: tfw.depth,
     wheel: { points: wheelPts, rMin: wheel.rMin, rMax: wheel.rMax, symmetry: wheel.symmetry },
     track: { points: trackS.pts },
     motion: trackS.u.map((t, i) => ({ x: trackS.pts[i][0], angle: t })),
-    check,
-    warnings: warnings(check, fig, wheel.rMax, ctx.spec.units, hasCorners, false),
   };
+  const check = (deadline: Deadline): CheckResult => {
+    deadline.checkNow();
+    const roll = checkTrackRoll({
+      wheel: polarCurve(wheel.r, T, tfw.breaks),
+      T,
+      // The track as the engine outputs it, parametrised by the wheel angle t.
+      track: { x: (t) => tfw.x.value(t), y: (t) => -wheel.r(t), V: T, breaks: tfw.breaks },
+      H: 0,
+      size: wheel.rMax,
+      probe: { kind: "track", wheelR: wheel.r },
+      deadline,
+    });
+    const hasCorners = wheel.corners.length > 0;
+    const fig = wheelAndRoadFigures(piecewise(wheel.r, 0, T, tfw.breaks, 1), hasCorners);
+    const c = makeCheck(roll, { max: fig.friction.value, at: tfw.x.value(fig.friction.at) }, { wheel: fig.radiusA, track: fig.radiusB });
+    return { check: c, warnings: warnings(c, fig, wheel.rMax, ctx.spec.units, hasCorners, false) };
+  };
+  return { geometry, check };
 }
 
 function makeCheck(roll: RollCheck, frictionDemand: Check["frictionDemand"], minCurvatureRadius: Check["minCurvatureRadius"]): Check {
@@ -187,61 +202,63 @@ function trackKinks(track: Track): boolean {
   return hasKinks(g, (x, s) => g.d1(x, s));
 }
 
-function wheelForTrackMode(ctx: Ctx, base: Pick<SolveResult, "engineVersion" | "specHash" | "mode" | "units">): SolveResult {
+function wheelForTrackMode(ctx: Ctx, base: Base): Stages {
   const { deadline, tol } = ctx;
   const track = buildTrack(ctx.spec.track!);
   const k = ctx.spec.periodsPerTurn!;
   const P = track.period;
   const h = solveAxleHeight(track, k, 1, deadline);
   const wf = wheelFromTrack(track, h, k, 1, deadline);
-  const opts = heightOptions(track, 1, deadline);
   const trackS = trackSamples(track, ctx);
   const pattern = concat(
     track.pieces.map((p, i) => sampleCurve((s) => wf.point(i, s), p.s0, p.s1, [], tol, { deadline, budget: ctx.budget }).pts),
   );
   const wheelPts = replicate(pattern, k, TAU / k);
-  const inner = track.breaksX.filter((x) => x > 0 && x < P);
-  const tp = trackParam(track);
-  // The whole wheel outline as one curve for the interference probe: v runs over k patterns.
-  const wheelCurve = (v: number): Pt => {
-    const j = Math.min(k - 1, Math.floor(v / tp.V));
-    return rot(wf.point(...tp.at(v - j * tp.V)), (j * TAU) / k);
-  };
-  const wheelBreaks: number[] = [];
-  for (let j = 0; j < k; j++) for (const b of [0, ...tp.breaks]) wheelBreaks.push(j * tp.V + b);
-  const roll = checkTrackRoll({
-    wheel: curveOf((v) => wf.point(...tp.at(v)), tp.V, tp.breaks),
-    T: TAU / k,
-    track: curveOf((v) => {
-      const [i, s] = tp.at(v);
-      return [track.pieces[i].x(s), track.pieces[i].y(s)];
-    }, tp.V, tp.breaks),
-    H: h,
-    size: h - track.yMin,
-    probe: { kind: "wheel", curve: wheelCurve, V: k * tp.V, breaks: wheelBreaks.filter((b) => b > 0), trackY: track.yAt },
-    deadline,
-  });
-  const kinks = trackKinks(track);
-  const fig = trackAndWheelFigures(piecewise(track.yAt, 0, P, inner, P), h, 1, kinks);
-  const check = makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusB, track: fig.radiusA });
   const rMax = h - track.yMin;
-  return {
+  const geometry: SolvedGeometry = {
     ...base,
     period: P,
     depth: track.yMax - track.yMin,
     axleHeight: h,
     wheel: { points: wheelPts, rMin: h - track.yMax, rMax, symmetry: k },
     track: { points: concat(trackS.map((s) => s.pts)) },
-    options: [...opts].map(([kk, hh]) => ({ periodsPerTurn: kk, axleHeight: hh, rMax: hh - track.yMin })),
     motion: concat(
       trackS.map((s, i) => s.u.map((u): Pt => [track.pieces[i].x(u), wf.thetaOf(i, u)])),
     ).map(([x, angle]) => ({ x, angle })),
-    check,
-    warnings: warnings(check, fig, rMax, ctx.spec.units, kinks, false),
   };
+  const options = (deadline: Deadline): SolveOption[] =>
+    [...heightOptions(track, 1, deadline)].map(([kk, hh]) => ({ periodsPerTurn: kk, axleHeight: hh, rMax: hh - track.yMin }));
+  const check = (deadline: Deadline): CheckResult => {
+    const inner = track.breaksX.filter((x) => x > 0 && x < P);
+    const tp = trackParam(track);
+    // The whole wheel outline as one curve for the interference probe: v runs over k patterns.
+    const wheelCurve = (v: number): Pt => {
+      const j = Math.min(k - 1, Math.floor(v / tp.V));
+      return rot(wf.point(...tp.at(v - j * tp.V)), (j * TAU) / k);
+    };
+    const wheelBreaks: number[] = [];
+    for (let j = 0; j < k; j++) for (const b of [0, ...tp.breaks]) wheelBreaks.push(j * tp.V + b);
+    const roll = checkTrackRoll({
+      wheel: curveOf((v) => wf.point(...tp.at(v)), tp.V, tp.breaks),
+      T: TAU / k,
+      track: curveOf((v) => {
+        const [i, s] = tp.at(v);
+        return [track.pieces[i].x(s), track.pieces[i].y(s)];
+      }, tp.V, tp.breaks),
+      H: h,
+      size: h - track.yMin,
+      probe: { kind: "wheel", curve: wheelCurve, V: k * tp.V, breaks: wheelBreaks.filter((b) => b > 0), trackY: track.yAt },
+      deadline,
+    });
+    const kinks = trackKinks(track);
+    const fig = trackAndWheelFigures(piecewise(track.yAt, 0, P, inner, P), h, 1, kinks);
+    const c = makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusB, track: fig.radiusA });
+    return { check: c, warnings: warnings(c, fig, rMax, ctx.spec.units, kinks, false) };
+  };
+  return { geometry, options, check };
 }
 
-function partnerMode(ctx: Ctx, base: Pick<SolveResult, "engineVersion" | "specHash" | "mode" | "units">): SolveResult {
+function partnerMode(ctx: Ctx, base: Base): Stages {
   const { deadline, tol } = ctx;
   const wheel = buildWheel(ctx.spec.wheel!);
   const m = ctx.spec.lobes!;
@@ -252,40 +269,44 @@ function partnerMode(ctx: Ctx, base: Pick<SolveResult, "engineVersion" | "specHa
   const partS = sampleCurve(pt.point, 0, T1, breaks, tol, { deadline, budget: ctx.budget });
   // The partner's body ray is (sin τ, cos τ), so a later lobe is the pattern turned clockwise.
   const partnerPts = replicate(partS.pts, m, -T2);
-  const roll = checkPairRoll({
-    driver: polarCurve(wheel.r, T1, breaks),
-    T1,
-    driverR: wheel.r,
-    partner: curveOf(pt.point, T1, breaks),
-    T2,
-    a,
-    size: a,
-    deadline,
-  });
-  const hasCorners = wheel.corners.length > 0;
-  const fig = pairFigures(piecewise(wheel.r, 0, T1, breaks, 1), a, hasCorners);
-  const check: Check = {
-    ...makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusA, partner: fig.radiusB }),
-    speedRatio: { min: wheel.rMin / (a - wheel.rMin), max: wheel.rMax / (a - wheel.rMax) },
-  };
-  const options: SolveOption[] = [];
-  for (let mm = 1; mm <= OPTION_COUNT; mm++) {
-    const am = mm === m ? a : solveCentreDistance(wheel, mm, deadline);
-    options.push({ lobes: mm, centreDistance: am, rMax: am - wheel.rMin });
-  }
-  return {
+  const geometry: SolvedGeometry = {
     ...base,
     centreDistance: a,
     wheel: { points: wheelOutline(wheel, ctx), rMin: wheel.rMin, rMax: wheel.rMax, symmetry: wheel.symmetry },
     partner: { points: partnerPts, rMin: a - wheel.rMax, rMax: a - wheel.rMin, symmetry: m },
-    options,
     follower: partS.u.map((t) => ({ driver: t, follower: pt.follower.value(t) })),
-    check,
-    warnings: warnings(check, fig, a - wheel.rMin, ctx.spec.units, hasCorners, true),
   };
+  const options = (deadline: Deadline): SolveOption[] => {
+    const out: SolveOption[] = [];
+    for (let mm = 1; mm <= OPTION_COUNT; mm++) {
+      const am = mm === m ? a : solveCentreDistance(wheel, mm, deadline);
+      out.push({ lobes: mm, centreDistance: am, rMax: am - wheel.rMin });
+    }
+    return out;
+  };
+  const check = (deadline: Deadline): CheckResult => {
+    const roll = checkPairRoll({
+      driver: polarCurve(wheel.r, T1, breaks),
+      T1,
+      driverR: wheel.r,
+      partner: curveOf(pt.point, T1, breaks),
+      T2,
+      a,
+      size: a,
+      deadline,
+    });
+    const hasCorners = wheel.corners.length > 0;
+    const fig = pairFigures(piecewise(wheel.r, 0, T1, breaks, 1), a, hasCorners);
+    const c: Check = {
+      ...makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusA, partner: fig.radiusB }),
+      speedRatio: { min: wheel.rMin / (a - wheel.rMin), max: wheel.rMax / (a - wheel.rMax) },
+    };
+    return { check: c, warnings: warnings(c, fig, a - wheel.rMin, ctx.spec.units, hasCorners, true) };
+  };
+  return { geometry, options, check };
 }
 
-function twinMode(ctx: Ctx, base: Pick<SolveResult, "engineVersion" | "specHash" | "mode" | "units">): SolveResult {
+function twinMode(ctx: Ctx, base: Base): Stages {
   const { deadline, tol } = ctx;
   const track = buildTrack(ctx.spec.track!);
   const k = ctx.spec.periodsPerTurn!;
@@ -296,46 +317,11 @@ function twinMode(ctx: Ctx, base: Pick<SolveResult, "engineVersion" | "specHash"
   const top = wheelFromTrack(track, h1, k, 1, deadline);
   const bottom = wheelFromTrack(track, h2, k, -1, deadline);
   const a = h1 - h2;
-  const sym = pointSymmetry(track, deadline);
   const trackS = trackSamples(track, ctx);
   const patternOf = (w: typeof top) =>
     concat(track.pieces.map((p, i) => sampleCurve((s) => w.point(i, s), p.s0, p.s1, [], tol, { deadline, budget: ctx.budget }).pts));
-  const tp = trackParam(track);
-  const roll = checkPairRoll({
-    driver: curveOf((v) => top.point(...tp.at(v)), tp.V, tp.breaks),
-    T1: T,
-    driverR: top.r,
-    partner: curveOf((v) => bottom.point(...tp.at(v)), tp.V, tp.breaks),
-    T2: T,
-    a,
-    size: a,
-    deadline,
-  });
-  const inner = track.breaksX.filter((x) => x > 0 && x < P);
-  const kinks = trackKinks(track);
-  const g = piecewise(track.yAt, 0, P, inner, P);
-  const figTop = trackAndWheelFigures(g, h1, 1, kinks);
-  const figBottom = trackAndWheelFigures(g, h2, -1, kinks);
-  const check: Check = {
-    ...makeCheck(roll, { max: figTop.friction.value, at: figTop.friction.at }, { wheel: figTop.radiusB, partner: figBottom.radiusB, track: figTop.radiusA }),
-    speedRatio: { min: (h1 - track.yMax) / (track.yMax - h2), max: (h1 - track.yMin) / (track.yMin - h2) },
-    symmetryError: sym.error,
-  };
-  const up = heightOptions(track, 1, deadline);
-  const down = heightOptions(track, -1, deadline);
-  const options: SolveOption[] = [];
-  for (const [kk, hh] of up) {
-    const lo = down.get(kk);
-    if (lo !== undefined) options.push({ periodsPerTurn: kk, centreDistance: hh - lo, axleHeight: hh, rMax: hh - track.yMin });
-  }
   const rMax = h1 - track.yMin;
-  const warn = warnings(check, { friction: figTop.friction, radiusA: figTop.radiusA, radiusB: Math.min(figTop.radiusB, figBottom.radiusB) }, rMax, ctx.spec.units, kinks, true);
-  if (sym.error > 1e-9 * rMax)
-    warn.push({
-      code: "not-point-symmetric",
-      message: `The track is not point-symmetric: turned upside down about x = ${fmt(sym.centre)} it is off by up to ${fmt(sym.error)} ${ctx.spec.units}, so the two wheels are not identical (each still closes and they roll on each other).`,
-    });
-  return {
+  const geometry: SolvedGeometry = {
     ...base,
     period: P,
     depth: track.yMax - track.yMin,
@@ -345,27 +331,67 @@ function twinMode(ctx: Ctx, base: Pick<SolveResult, "engineVersion" | "specHash"
     wheel: { points: replicate(patternOf(top), k, T), rMin: h1 - track.yMax, rMax, symmetry: k },
     partner: { points: replicate(patternOf(bottom), k, -T), rMin: track.yMin - h2, rMax: track.yMax - h2, symmetry: k },
     track: { points: concat(trackS.map((s) => s.pts)) },
-    options,
     motion: concat(trackS.map((s, i) => s.u.map((u): Pt => [i, u]))).map(([i, u]) => ({
       x: track.pieces[i].x(u),
       angle: top.thetaOf(i, u),
       lowerAngle: bottom.thetaOf(i, u),
     })),
-    check,
-    warnings: warn,
   };
+  const options = (deadline: Deadline): SolveOption[] => {
+    const up = heightOptions(track, 1, deadline);
+    const down = heightOptions(track, -1, deadline);
+    const out: SolveOption[] = [];
+    for (const [kk, hh] of up) {
+      const lo = down.get(kk);
+      if (lo !== undefined) out.push({ periodsPerTurn: kk, centreDistance: hh - lo, axleHeight: hh, rMax: hh - track.yMin });
+    }
+    return out;
+  };
+  const check = (deadline: Deadline): CheckResult => {
+    const sym = pointSymmetry(track, deadline);
+    const tp = trackParam(track);
+    const roll = checkPairRoll({
+      driver: curveOf((v) => top.point(...tp.at(v)), tp.V, tp.breaks),
+      T1: T,
+      driverR: top.r,
+      partner: curveOf((v) => bottom.point(...tp.at(v)), tp.V, tp.breaks),
+      T2: T,
+      a,
+      size: a,
+      deadline,
+    });
+    const inner = track.breaksX.filter((x) => x > 0 && x < P);
+    const kinks = trackKinks(track);
+    const g = piecewise(track.yAt, 0, P, inner, P);
+    const figTop = trackAndWheelFigures(g, h1, 1, kinks);
+    const figBottom = trackAndWheelFigures(g, h2, -1, kinks);
+    const c: Check = {
+      ...makeCheck(roll, { max: figTop.friction.value, at: figTop.friction.at }, { wheel: figTop.radiusB, partner: figBottom.radiusB, track: figTop.radiusA }),
+      speedRatio: { min: (h1 - track.yMax) / (track.yMax - h2), max: (h1 - track.yMin) / (track.yMin - h2) },
+      symmetryError: sym.error,
+    };
+    const warn = warnings(c, { friction: figTop.friction, radiusA: figTop.radiusA, radiusB: Math.min(figTop.radiusB, figBottom.radiusB) }, rMax, ctx.spec.units, kinks, true);
+    if (sym.error > 1e-9 * rMax)
+      warn.push({
+        code: "not-point-symmetric",
+        message: `The track is not point-symmetric: turned upside down about x = ${fmt(sym.centre)} it is off by up to ${fmt(sym.error)} ${ctx.spec.units}, so the two wheels are not identical (each still closes and they roll on each other).`,
+      });
+    return { check: c, warnings: warn };
+  };
+  return { geometry, options, check };
 }
 
-/**
- * Solves a design spec. Throws EngineError for bad input ("invalid-spec", "bad-formula",
- * "invalid-wheel", "invalid-track"), for designs with no solution ("no-solution"), for too fine a
- * tolerance ("too-fine") and when `deadlineMs` passes ("timeout").
- */
-export function solve(input: unknown, opts: { deadlineMs?: number } = {}): SolveResult {
-  const deadline = new Deadline(opts.deadlineMs);
+export interface SolveOptions {
+  /** Stop with EngineError "timeout" once this many milliseconds have passed. */
+  deadlineMs?: number;
+  /** false: return the geometry alone, without the rolling check and its warnings. Default true. */
+  check?: boolean;
+}
+
+function stagesOf(input: unknown, deadline: Deadline): Stages {
   const spec = parseSpec(input);
   const ctx: Ctx = { spec, tol: spec.tolerance, deadline, budget: { left: MAX_OUTPUT_POINTS } };
-  const base = { engineVersion: ENGINE_VERSION, specHash: specHash(spec), mode: spec.mode, units: spec.units };
+  const base: Base = { engineVersion: ENGINE_VERSION, specHash: specHash(spec), mode: spec.mode, units: spec.units };
   switch (spec.mode) {
     case "track-for-wheel":
       return trackForWheelMode(ctx, base);
@@ -376,4 +402,45 @@ export function solve(input: unknown, opts: { deadlineMs?: number } = {}): Solve
     case "twin-wheels":
       return twinMode(ctx, base);
   }
+}
+
+/**
+ * Solves a design spec. Throws EngineError for bad input ("invalid-spec", "bad-formula",
+ * "invalid-wheel", "invalid-track"), for designs with no solution ("no-solution"), for too fine a
+ * tolerance ("too-fine") and when `deadlineMs` passes ("timeout"). With `check: false` the
+ * rolling check is skipped and the result carries neither `check` nor `warnings`.
+ */
+export function solve(input: unknown, opts: SolveOptions & { check: false }): SolvedGeometry;
+export function solve(input: unknown, opts?: SolveOptions & { check?: true }): SolveResult;
+export function solve(input: unknown, opts: SolveOptions = {}): SolvedGeometry | SolveResult {
+  // One time limit for every stage.
+  const deadline = new Deadline(opts.deadlineMs);
+  const stages = stagesOf(input, deadline);
+  const geometry: SolvedGeometry = stages.options ? { ...stages.geometry, options: stages.options(deadline) } : stages.geometry;
+  if (opts.check === false) return geometry;
+  return { ...geometry, ...stages.check(deadline) };
+}
+
+export interface SolveStages {
+  /** What is drawn: solve(spec, { check: false }) without `options`. */
+  geometry: SolvedGeometry;
+  /** The closure choices solve() lists as `options` (undefined for modes without them). */
+  options(opts?: { deadlineMs?: number }): SolveOption[] | undefined;
+  /** The rolling check and its warnings, as solve() returns them. */
+  check(opts?: { deadlineMs?: number }): CheckResult;
+}
+
+/**
+ * The same solve in stages, for a caller that shows the drawing first (the studio's worker): the
+ * geometry at once, then the options and the check when asked for, each with its own time limit.
+ * Later stages reuse the geometry's construction instead of solving again; together the three
+ * make exactly what solve(spec) returns.
+ */
+export function solveInStages(input: unknown, opts: { deadlineMs?: number } = {}): SolveStages {
+  const stages = stagesOf(input, new Deadline(opts.deadlineMs));
+  return {
+    geometry: stages.geometry,
+    options: (o = {}) => stages.options?.(new Deadline(o.deadlineMs)),
+    check: (o = {}) => stages.check(new Deadline(o.deadlineMs)),
+  };
 }

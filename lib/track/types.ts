@@ -45,7 +45,8 @@ export interface Check {
   symmetryError?: number;
 }
 
-export interface SolveResult {
+/** What solve() returns without the rolling check (`check: false`): everything that is drawn and cut. */
+export interface SolvedGeometry {
   engineVersion: string;
   specHash: string;
   mode: "track-for-wheel" | "wheel-for-track" | "partner-wheel" | "twin-wheels";
@@ -64,6 +65,12 @@ export interface SolveResult {
   motion?: Array<{ x: number; angle: number; lowerAngle?: number }>;
   /** Pairs: partner turn (counter-clockwise) against driver turn (clockwise) over one driver sector. */
   follower?: Array<{ driver: number; follower: number }>;
+}
+
+/** The rolling check of a solved geometry and the plain warnings drawn from it. */
+export interface CheckResult {
   check: Check;
   warnings: Warning[];
 }
+
+export type SolveResult = SolvedGeometry & CheckResult;

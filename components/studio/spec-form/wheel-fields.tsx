@@ -1,6 +1,7 @@
 "use client";
 import type { Units } from "@/lib/studio/units";
 import type { DesignSpecInput } from "@/lib/track";
+import { axleRefusal } from "@/lib/studio/axle-placement";
 import { inUnits, WHEEL_DEFAULTS } from "./defaults";
 import { FormulaInput, NumberInput, SelectInput } from "./inputs";
 import { OutlineUpload } from "./outline-upload";
@@ -96,14 +97,17 @@ function PolygonFields({ wheel, units, e, onChange }: { wheel: Extract<Wheel, { 
 }
 
 function OutlineFields({ wheel, units, e, onChange }: { wheel: Extract<Wheel, { kind: "outline" }>; units: Units; e: (k: string) => string | undefined; onChange: (w: Wheel) => void }) {
+  // The engine's own refusal of this axle (not star-shaped about it, outside it), beside the fields
+  // that place it; the canvas handle gives the same words.
+  const refusal = e("axle.x") || e("points") || e("axle.y") ? undefined : axleRefusal(wheel.points, wheel.axle);
   return (
     <div className="flex flex-col gap-3">
       <OutlineUpload want="wheel" units={units} onPoints={(points, axle) => onChange({ kind: "outline", points, axle: axle ?? wheel.axle })} />
       <p className="text-xs text-ink-soft">
-        <span className="font-mono">{wheel.points.length}</span> points. Place the axle by typing its position (or drag it on the canvas).
+        <span className="font-mono">{wheel.points.length}</span> points. Place the axle by typing its position, or drag it on the canvas (or focus it there and use the arrow keys).
       </p>
       <div className="grid grid-cols-2 gap-3">
-        <NumberInput label="Axle x" unit={units} value={wheel.axle.x} error={e("axle.x") ?? e("points")} onChange={(x) => x !== undefined && onChange({ ...wheel, axle: { ...wheel.axle, x } })} />
+        <NumberInput label="Axle x" unit={units} value={wheel.axle.x} error={e("axle.x") ?? e("points") ?? refusal} onChange={(x) => x !== undefined && onChange({ ...wheel, axle: { ...wheel.axle, x } })} />
         <NumberInput label="Axle y" unit={units} value={wheel.axle.y} error={e("axle.y")} onChange={(y) => y !== undefined && onChange({ ...wheel, axle: { ...wheel.axle, y } })} />
       </div>
     </div>

@@ -1,7 +1,7 @@
 "use client";
 
 import { Circle, Group, Line, Text } from "react-konva";
-import type { SolveResult } from "@/lib/track";
+import type { SolvedGeometry } from "@/lib/track";
 import type { Pose } from "@/lib/studio/motion";
 import { placeOutline, toScreen, type Pt, type View } from "@/lib/studio/view-math";
 import { CAUTION, INK } from "./palette";
@@ -70,19 +70,28 @@ export function HighlightMark({ at, label, view, font }: { at: Pt; label?: strin
   );
 }
 
-/** All moving bodies at one pose. `resting` are the axle heights the outlines themselves give (lib/studio/motion restingAxles). */
-export function PosedBodies({ result, pose, resting, view }: { result: SolveResult; pose: Pose; resting: { wheel: number; partner?: number }; view: View }) {
+/**
+ * Where the wheels' axles are drawn at one pose. Track modes: set each wheel at the height its own
+ * outline rests at (`resting`, lib/studio/motion restingAxles), so a wrong turn table would show as
+ * a bobbing axle. Pairs keep their fixed axles.
+ */
+export function drawnAxles(result: SolvedGeometry, pose: Pose, resting: { wheel: number; partner?: number }): { wheel: Pt; partner?: Pt } {
   const pair = result.mode === "partner-wheel";
-  // Track modes: set each wheel at the height its own outline rests at, so a wrong turn table would
-  // show as a bobbing axle. Pairs keep their fixed axles.
   const wheelY = pair || !Number.isFinite(resting.wheel) ? pose.wheel.y : resting.wheel;
-  const partnerY = pose.partner && (pair || resting.partner === undefined || !Number.isFinite(resting.partner) ? pose.partner.y : resting.partner);
+  if (!pose.partner) return { wheel: [pose.wheel.x, wheelY] };
+  const partnerY = pair || resting.partner === undefined || !Number.isFinite(resting.partner) ? pose.partner.y : resting.partner;
+  return { wheel: [pose.wheel.x, wheelY], partner: [pose.partner.x, partnerY] };
+}
+
+/** All moving bodies at one pose. */
+export function PosedBodies({ result, pose, resting, view }: { result: SolvedGeometry; pose: Pose; resting: { wheel: number; partner?: number }; view: View }) {
+  const axles = drawnAxles(result, pose, resting);
   return (
     <>
-      {result.partner && pose.partner ? (
-        <WheelBody outline={result.partner.points} angleCw={-pose.partner.angle} axle={[pose.partner.x, partnerY!]} view={view} tone="partner" name="partner" />
+      {result.partner && pose.partner && axles.partner ? (
+        <WheelBody outline={result.partner.points} angleCw={-pose.partner.angle} axle={axles.partner} view={view} tone="partner" name="partner" />
       ) : null}
-      <WheelBody outline={result.wheel.points} angleCw={pose.wheel.angle} axle={[pose.wheel.x, wheelY]} view={view} tone="wheel" name="wheel" />
+      <WheelBody outline={result.wheel.points} angleCw={pose.wheel.angle} axle={axles.wheel} view={view} tone="wheel" name="wheel" />
       <ContactMark at={pose.contact} view={view} />
     </>
   );

@@ -1,9 +1,9 @@
-import type { SolveResult } from "@/lib/track";
+import type { SolvedGeometry } from "@/lib/track";
 import type { Pose } from "@/lib/studio/motion";
 import { fmt } from "@/lib/studio/view-math";
 
 /** The design's dimensions and the current pose, in the monospace face, laid over the canvas corner. */
-export function CanvasReadout({ result, pose, id }: { result: SolveResult; pose: Pose; id: string }) {
+export function CanvasReadout({ result, pose, id }: { result: SolvedGeometry; pose: Pose; id: string }) {
   const u = result.units;
   const rows: Array<[string, string]> = [];
   const range = (o: { rMin: number; rMax: number }) => `${fmt(o.rMin)} – ${fmt(o.rMax)} ${u}`;

@@ -6,13 +6,15 @@
 
 import { useEffect, useEffectEvent, useMemo, useRef, useState, type KeyboardEvent, type PointerEvent } from "react";
 import { Layer, Line, Stage } from "react-konva";
-import type { DesignSpec, SolveResult } from "@/lib/track";
+import type { DesignSpec, SolvedGeometry } from "@/lib/track";
+import { axleRefusal, outlinePointAt, type Axle, type DrawnBody } from "@/lib/studio/axle-placement";
 import { axleTrace, cycleOf, poseAt, restingAxles } from "@/lib/studio/motion";
-import { toScreen, type Pt } from "@/lib/studio/view-math";
+import { rotateCw, toScreen, type Pt } from "@/lib/studio/view-math";
+import { AxleHandle } from "./axle-handle";
 import { CanvasDimensions } from "./canvas-dimensions";
 import { CanvasGrid } from "./canvas-grid";
 import { CanvasReadout } from "./canvas-readout";
-import { AxleMark, HighlightMark, PosedBodies, flat } from "./canvas-bodies";
+import { AxleMark, HighlightMark, PosedBodies, drawnAxles, flat } from "./canvas-bodies";
 import { INK, monoFamily } from "./palette";
 import { sceneOf } from "./scene";
 import { FrameMeter, publishProbe } from "./studio-probe";
@@ -26,7 +28,7 @@ export interface CanvasHighlight {
 }
 
 export interface CanvasStageProps {
-  result: SolveResult;
+  result: SolvedGeometry;
   spec?: DesignSpec;
   playing: boolean;
   speed: number;
@@ -35,12 +37,14 @@ export interface CanvasStageProps {
   onPlayingChange?: (playing: boolean) => void;
   highlight?: CanvasHighlight | null;
   height: number;
+  /** Moving the axle of an uploaded outline (a handle on the canvas); undefined: not editable here. */
+  onAxleChange?: (axle: Axle) => void;
 }
 
 const ZOOM_STEP = 1.25;
 const PAN_STEP = 40;
 
-function describe(result: SolveResult, spec?: DesignSpec): string {
+function describe(result: SolvedGeometry, spec?: DesignSpec): string {
   const what = {
     "track-for-wheel": "a wheel rolling on the track made for it",
     "wheel-for-track": "the wheel made for a track, rolling on it",
@@ -51,11 +55,15 @@ function describe(result: SolveResult, spec?: DesignSpec): string {
   return `Studio canvas: ${what}${shape}. Drag or arrow keys to pan, mouse wheel or + and − to zoom, F to fit, Space to play or pause, comma and full stop to step.`;
 }
 
-export default function CanvasStage({ result, spec, playing, speed, position, onPositionChange, onPlayingChange, highlight, height }: CanvasStageProps) {
+export default function CanvasStage({ result: latest, spec, playing, speed, position, onPositionChange, onPlayingChange, highlight, height, onAxleChange }: CanvasStageProps) {
   const box = useRef<HTMLDivElement>(null);
   const [width, setWidth] = useState(0);
   const [font] = useState(monoFamily);
   const [meter] = useState(() => new FrameMeter());
+  // While the axle is dragged the drawing holds still (the result and the wheel's place as the drag
+  // began), so the outline stays under the pointer while each new position is solved behind it.
+  const [axleDrag, setAxleDrag] = useState<{ result: SolvedGeometry; body: DrawnBody } | null>(null);
+  const result = axleDrag?.result ?? latest;
   const scene = useMemo(() => sceneOf(result), [result]);
   const trace = useMemo(() => axleTrace(result, 480), [result]);
   const vt = useViewTransform(scene.bounds, Math.max(width, 1), height, result.specHash);
@@ -93,6 +101,7 @@ export default function CanvasStage({ result, spec, playing, speed, position, on
 
   const pose = poseAt(result, position);
   const resting = restingAxles(result, pose);
+  const drawn = drawnAxles(result, pose, resting);
   const c = cycleOf(result);
   const travelled = position * c.length;
 
@@ -106,6 +115,10 @@ export default function CanvasStage({ result, spec, playing, speed, position, on
   }
   const traceFlat = flat(tracePts, view);
   const lowerFlat = flat(lowerPts, view);
+  // A pair's axles are both fixed, so nothing is traced on the canvas; the probe still reports
+  // where the drawn outlines, touching, would put the partner's axle over the turn so far.
+  const pairRest = scene.pair ? trace.filter((t) => t.along <= travelled && t.partner !== undefined).map((t) => t.partner!) : [];
+  if (scene.pair && resting.partner !== undefined) pairRest.push(resting.partner);
 
   useEffect(() => {
     meter.tick(performance.now());
@@ -116,8 +129,10 @@ export default function CanvasStage({ result, spec, playing, speed, position, on
       fps: meter.fps,
       position,
       axleTrace: ys(traceFlat),
-      lowerAxleTrace: lowerFlat.length ? ys(lowerFlat) : undefined,
+      lowerAxleTrace: lowerFlat.length ? ys(lowerFlat) : pairRest.length ? pairRest.map((y) => toScreen(view, [0, y])[1]) : undefined,
       axleLine: toScreen(view, [0, scene.axleY])[1],
+      lowerAxleLine: scene.lowerAxleY !== undefined ? toScreen(view, [0, scene.lowerAxleY])[1] : undefined,
+      pixelsPerUnit: view.scale,
     });
   });
 
@@ -155,6 +170,28 @@ export default function CanvasStage({ result, spec, playing, speed, position, on
   };
   const endDrag = () => {
     drag.current = null;
+  };
+
+  // The axle handle of an uploaded outline: where the spec's axle is on the drawn wheel.
+  const outline = spec?.wheel?.kind === "outline" ? spec.wheel : undefined;
+  const showHandle = !!onAxleChange && !!outline && (!playing || !!axleDrag);
+  let handleAt: Pt | null = null;
+  if (showHandle && outline) {
+    const body: DrawnBody = axleDrag?.body ?? { axleAt: drawn.wheel, angleCw: pose.wheel.angle, axle: outline.axle };
+    const [dx, dy] = rotateCw([outline.axle.x - body.axle.x, outline.axle.y - body.axle.y], body.angleCw);
+    handleAt = toScreen(view, [body.axleAt[0] + dx, body.axleAt[1] + dy]);
+  }
+  const startAxleDrag = () => {
+    const body: DrawnBody = { axleAt: drawn.wheel, angleCw: pose.wheel.angle, axle: outline!.axle };
+    const frozenView = view;
+    onPlayingChange?.(false);
+    setAxleDrag({ result, body });
+    return (q: Pt) => outlinePointAt(q, frozenView, body);
+  };
+  const placeAxle = (axle: Axle) => {
+    const refusal = axleRefusal(outline!.points, axle);
+    if (!refusal) onAxleChange?.(axle);
+    return refusal;
   };
 
   const axleLinePx = toScreen(view, [0, scene.axleY])[1];
@@ -204,6 +241,18 @@ export default function CanvasStage({ result, spec, playing, speed, position, on
         </Stage>
       ) : null}
       <CanvasReadout result={result} pose={pose} id={readoutId} />
+      {handleAt && outline ? (
+        <AxleHandle
+          at={handleAt}
+          axle={outline.axle}
+          units={result.units}
+          pixelsPerUnit={view.scale}
+          box={box}
+          onDragStart={startAxleDrag}
+          onDragEnd={() => setAxleDrag(null)}
+          place={placeAxle}
+        />
+      ) : null}
       <div className="no-print absolute right-2 top-2 flex gap-1">
         <ToolButton label="Zoom out" onClick={() => vt.zoomBy(1 / ZOOM_STEP)}>
           −

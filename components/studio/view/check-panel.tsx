@@ -5,10 +5,16 @@ import { frictionLocation, interferenceLocation, type Location } from "@/lib/stu
 import type { Pt } from "@/lib/studio/view-math";
 import { Badge, Panel } from "@/components/ui/panel";
 import { Button } from "@/components/ui/button";
+import { Notice } from "@/components/ui/notice";
 import { checkFigures, type FigureState } from "./check-figures";
 
 export interface CheckPanelProps {
+  /** The solved design with its rolling check; undefined while solving or checking. */
   result?: SolveResult;
+  /** The geometry is drawn and its rolling check is still running. */
+  checking?: boolean;
+  /** The rolling check stopped on an error (the geometry is still drawn). */
+  error?: string;
   /** Called by a "show" button: the cycle position to move to and the spot to mark there. */
   onPointAt?: (position: number, spot: Pt) => void;
 }
@@ -23,12 +29,18 @@ function locationFor(r: SolveResult, what: "interference" | "friction"): Locatio
   return what === "interference" ? interferenceLocation(r) : frictionLocation(r);
 }
 
-export function CheckPanel({ result, onPointAt }: CheckPanelProps) {
+export function CheckPanel({ result, checking, error, onPointAt }: CheckPanelProps) {
+  if (error)
+    return (
+      <Panel title="Rolling check">
+        <Notice tone="problem">The rolling check stopped: {error}</Notice>
+      </Panel>
+    );
   if (!result)
     return (
       <Panel title="Rolling check">
-        <p className="text-sm text-ink-soft" aria-busy="true">
-          Solving…
+        <p className="text-sm text-ink-soft" aria-busy="true" data-testid="check-pending">
+          {checking ? "Checking…" : "Solving…"}
         </p>
       </Panel>
     );

@@ -1,6 +1,6 @@
 "use client";
 
-import type { SolveResult } from "@/lib/track";
+import type { SolvedGeometry } from "@/lib/track";
 import {
   curvatureSeries,
   outlineFrictionSeries,
@@ -35,7 +35,7 @@ function curvatureClip(s: Series): number | undefined {
 }
 
 /** The plots for a result, all read off the engine's own polylines and tables (lib/studio/view-math). */
-export function plotsFor(r: SolveResult): PlotSpec[] {
+export function plotsFor(r: SolvedGeometry): PlotSpec[] {
   const u = r.units;
   if (r.mode === "partner-wheel") {
     const sector = (2 * Math.PI) / Math.max(1, r.wheel.symmetry);
@@ -71,7 +71,7 @@ export function plotsFor(r: SolveResult): PlotSpec[] {
   return plots;
 }
 
-export function CheckPlots({ result }: { result?: SolveResult }) {
+export function CheckPlots({ result }: { result?: SolvedGeometry }) {
   if (!result)
     return (
       <Panel title="Along the roll">

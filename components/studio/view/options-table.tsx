@@ -1,23 +1,34 @@
 "use client";
 
-import type { SolveResult } from "@/lib/track";
+import type { SolvedGeometry } from "@/lib/track";
 import { fmt } from "@/lib/studio/view-math";
 import { Badge, Panel } from "@/components/ui/panel";
 import { Table } from "@/components/ui/table";
 
 export interface OptionsTableProps {
-  result?: SolveResult;
+  result?: SolvedGeometry;
+  /** The options of this result are still being worked out. */
+  pending?: boolean;
   /** The periods per turn or lobes the design uses now. */
   currentValue?: number;
   onPick?: (n: number) => void;
 }
 
 /** The closure options the engine lists: each whole number of periods per turn (or lobes) with the size it gives. */
-export function OptionsTable({ result, currentValue, onPick }: OptionsTableProps) {
+export function OptionsTable({ result, pending, currentValue, onPick }: OptionsTableProps) {
   const options = result?.options ?? [];
+  const lobes = result?.mode === "partner-wheel";
+  // Track-for-wheel designs have no closure choice to make.
+  if (result && pending && result.mode !== "track-for-wheel")
+    return (
+      <Panel title={lobes ? "Lobes" : "Closure options"}>
+        <p className="text-sm text-ink-soft" aria-busy="true">
+          Working out the choices…
+        </p>
+      </Panel>
+    );
   if (!result || !options.length) return null;
   const u = result.units;
-  const lobes = result.mode === "partner-wheel";
   const count = (o: (typeof options)[number]) => (lobes ? o.lobes : o.periodsPerTurn) ?? 0;
   const head = [
     lobes ? "Lobes" : "Periods per turn",

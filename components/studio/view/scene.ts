@@ -1,7 +1,7 @@
 // What the canvas lays out for a result, in the spec's units (y up): the tiled track, the frame
 // to fit, the nominal axle lines. Pure, so it is computed once per result.
 
-import type { SolveResult } from "@/lib/track";
+import type { SolvedGeometry } from "@/lib/track";
 import { RUN_PERIODS, axleLineY, cycleOf, isPairResult } from "@/lib/studio/motion";
 import { boundsOf, discBounds, tileTrack, unionBounds, type Bounds, type Pt } from "@/lib/studio/view-math";
 
@@ -18,7 +18,7 @@ export interface Scene {
   bounds: Bounds;
 }
 
-export function sceneOf(r: SolveResult): Scene {
+export function sceneOf(r: SolvedGeometry): Scene {
   if (isPairResult(r)) {
     const a = r.centreDistance ?? 0;
     const bounds = unionBounds(discBounds(0, 0, r.wheel.rMax), discBounds(0, -a, r.partner?.rMax ?? 0));

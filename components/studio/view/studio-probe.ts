@@ -9,10 +9,17 @@ export interface StudioProbe {
   position: number;
   /** Screen y (px, down) of each drawn point of the upper / only axle's trace. */
   axleTrace: number[];
-  /** The lower twin's trace, when there is one. */
+  /**
+   * The lower twin's trace, when there is one; for a partner wheel, the partner axle's height where
+   * the drawn outlines put it (the canvas draws no trace for a pair: both axles are fixed).
+   */
   lowerAxleTrace?: number[];
   /** Screen y of the nominal axle line. */
   axleLine: number;
+  /** Screen y of the lower twin's axle line, or of the partner's fixed axle. */
+  lowerAxleLine?: number;
+  /** The zoom: screen pixels per spec unit. */
+  pixelsPerUnit: number;
 }
 
 declare global {

@@ -1,7 +1,7 @@
 "use client";
 
 import { useCallback, useMemo, useState } from "react";
-import type { DesignSpec, SolveResult } from "@/lib/track";
+import type { CheckResult, DesignSpec, SolvedGeometry, SolveOption, SolveResult } from "@/lib/track";
 import { alongAt } from "@/lib/studio/motion";
 import { fmt, type Pt } from "@/lib/studio/view-math";
 import { Notice } from "@/components/ui/notice";
@@ -14,18 +14,26 @@ import { StudioCanvas } from "./studio-canvas";
 import { useRollingClock } from "./use-rolling-clock";
 
 export interface StudioViewProps {
-  /** undefined while solving. */
-  result?: SolveResult;
+  /** The engine's geometry (or a whole SolveResult); undefined while solving. */
+  result?: SolvedGeometry;
+  /** The closure options of `result`, when they come separately (undefined: still coming). */
+  options?: SolveOption[];
+  /** The rolling check of `result`, when it comes separately (undefined: still checking). */
+  check?: CheckResult;
+  /** The rolling check or the options stopped on an error. */
+  checkError?: string;
   spec?: DesignSpec;
   /** A plain message when the engine could not solve the spec. */
   error?: string;
   /** Picking a closure option (periods per turn, or lobes). */
   onPick?: (n: number) => void;
+  /** Placing the axle of an uploaded outline on the canvas; undefined where it cannot be edited. */
+  onAxleChange?: (axle: { x: number; y: number }) => void;
   canvasHeight?: number;
 }
 
 /** The studio's view half: canvas and playback on the left, the check and options on the right, plots below. */
-export function StudioView({ result, spec, error, onPick, canvasHeight }: StudioViewProps) {
+export function StudioView({ result, options, check, checkError, spec, error, onPick, onAxleChange, canvasHeight }: StudioViewProps) {
   const clock = useRollingClock();
   const [highlight, setHighlight] = useState<CanvasHighlight | null>(null);
   // A new design clears the old design's highlight (adjusted while rendering, not in an effect).
@@ -45,16 +53,24 @@ export function StudioView({ result, spec, error, onPick, canvasHeight }: Studio
     [setPlaying, setPosition],
   );
   const current = result?.mode === "partner-wheel" ? spec?.lobes : spec?.periodsPerTurn;
+  // The drawing needs the geometry alone; the panels take the options and the check as they come.
+  const withOptions = useMemo(() => (result && options ? { ...result, options } : result), [result, options]);
+  const checked = useMemo((): SolveResult | undefined => {
+    if (!withOptions) return undefined;
+    if (check) return { ...withOptions, ...check };
+    return "check" in withOptions ? (withOptions as SolveResult) : undefined;
+  }, [withOptions, check]);
+  const optionsPending = !!result && !result.options && !options && !checkError;
   // The clock re-renders this view on every frame; the panels and plots only change with the result.
   const plots = useMemo(() => (!error ? <CheckPlots result={result} /> : null), [error, result]);
   const side = useMemo(
     () => (
       <aside className="flex flex-col gap-3">
-        {!error ? <CheckPanel result={result} onPointAt={pointAt} /> : null}
-        <OptionsTable result={error ? undefined : result} currentValue={current} onPick={onPick} />
+        {!error ? <CheckPanel result={checked} checking={!!result && !checked} error={checkError} onPointAt={pointAt} /> : null}
+        <OptionsTable result={error ? undefined : withOptions} pending={optionsPending} currentValue={current} onPick={onPick} />
       </aside>
     ),
-    [error, result, pointAt, current, onPick],
+    [error, result, checked, checkError, withOptions, optionsPending, pointAt, current, onPick],
   );
   const describePosition = (p: number) => {
     if (!result) return "";
@@ -76,6 +92,7 @@ export function StudioView({ result, spec, error, onPick, canvasHeight }: Studio
           onPlayingChange={clock.setPlaying}
           highlight={highlight}
           height={canvasHeight}
+          onAxleChange={onAxleChange}
         />
         {result && !error ? (
           <div className="flex flex-wrap items-center gap-3">

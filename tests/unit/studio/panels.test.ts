@@ -4,7 +4,7 @@
 import { createElement } from "react";
 import { renderToStaticMarkup } from "react-dom/server";
 import { describe, expect, it } from "vitest";
-import { solve } from "@/lib/track";
+import { solve, solveInStages } from "@/lib/track";
 import { CheckPanel, CheckPlots, OptionsTable, PlayControls, checkFigures } from "@/components/studio/view";
 
 const triangle = solve({ mode: "track-for-wheel", wheel: { kind: "polygon", sides: 3, side: 300 } });
@@ -42,6 +42,21 @@ describe("panels render", () => {
   it("shows a calm placeholder while solving", () => {
     expect(renderToStaticMarkup(createElement(CheckPanel, {}))).toContain("Solving…");
     expect(renderToStaticMarkup(createElement(CheckPlots, {}))).toContain("Solving…");
+  });
+
+  it("says the check is running while the geometry is already drawn, and when it stopped", () => {
+    const html = renderToStaticMarkup(createElement(CheckPanel, { checking: true }));
+    expect(html).toContain("Checking…");
+    expect(html).not.toContain("data-check=");
+    const stopped = renderToStaticMarkup(createElement(CheckPanel, { error: "The computation ran past its time limit." }));
+    expect(stopped).toContain("The rolling check stopped: The computation ran past its time limit.");
+  });
+
+  it("holds the options table's place while the choices are worked out", () => {
+    const geometry = solveInStages({ mode: "wheel-for-track", track: { kind: "sine", amplitude: 20, period: 200 }, periodsPerTurn: 4 }).geometry;
+    expect(renderToStaticMarkup(createElement(OptionsTable, { result: geometry, pending: true }))).toContain("Working out the choices…");
+    // A wheel with a track made for it has no closure choice: nothing to wait for.
+    expect(renderToStaticMarkup(createElement(OptionsTable, { result: triangle, pending: true }))).toBe("");
   });
 
   it("plots friction with the 0.6 guide and labelled axes", () => {
