@@ -1,5 +1,7 @@
-// What the shop cuts: parts as flat regions with holes, drill points and engraving, in the design's
-// units. Shared by the part builders (lib/cut), the nester (lib/nest) and the exporters.
+// What the shop cuts: parts as flat regions with holes, drill points and engraving. lib/cut builds
+// every part in millimetres (a design in inches is converted ×25.4 first); the exporters convert to
+// the chosen output unit. Shared by the part builders (lib/cut), the nester (lib/nest) and the
+// exporters.
 import type { Pt } from "@/lib/track";
 
 /** A closed ring, first point not repeated. Outer rings counter-clockwise, holes clockwise. */
@@ -32,4 +34,31 @@ export interface Part {
   engrave: Pt[][];
   /** True when the part's x axis must follow the sheet's grain (rotations then limited to 0/180°). */
   grainAlongX: boolean;
+  /**
+   * Track parts: the translation that puts the part back in the run's coordinates (run x from the
+   * run's start, y as the engine's profile), so the segments rejoin into the whole run.
+   */
+  runOffset?: Pt;
+  /** Track parts: the stretch of the run [x0, x1] between the part's two cut stations. */
+  station?: { x0: number; x1: number };
+}
+
+export type CutWarningCode =
+  | "inside-corner" // the cutter leaves a radius in a concave corner of a rolling surface
+  | "no-crest-cut" // no crest within reach: a segment is cut on a slope
+  | "support-moved" // a support hole was moved clear of a joint
+  | "lightening-skipped" // no room for lightening holes with the asked rim
+  | "label-skipped" // no room for an engraved label
+  | "label-shortened" // the label was cut down to fit
+  | "no-font" // no glyph table was given, so no labels were engraved
+  | "hole-too-small" // a hole is smaller than the cutter
+  | "scaled" // the design was scaled to fit the run
+  | "engine"; // a warning of the solve result, passed on
+
+export interface CutWarning {
+  code: CutWarningCode;
+  message: string;
+  partId?: string;
+  /** Where, in run x (track parts) or the part's own coordinates, in mm. */
+  at?: number[];
 }

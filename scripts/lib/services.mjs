@@ -75,6 +75,7 @@ export const debian = {
   mpmath: { name: "python3-mpmath", present: () => pythonHas("mpmath") },
   scipy: { name: "python3-scipy", present: () => pythonHas("scipy") },
   ezdxf: { name: "python3-ezdxf", present: () => pythonHas("ezdxf") },
+  unzip: { name: "unzip", present: () => existsSync("/usr/bin/unzip") },
 };
 
 function pythonHas(module) {

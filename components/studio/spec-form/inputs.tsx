@@ -2,26 +2,9 @@
 // Small controlled inputs for the spec form: numbers with their unit, selects, formulas. Each shows
 // its own error under it and is tied to it for screen readers.
 import { useId, useState, type ReactNode } from "react";
+import { FieldRow as Row } from "@/components/ui/field-row";
 
 const box = "w-full rounded-plate border border-ink-line bg-white/70 px-2 py-1 text-sm text-ink aria-[invalid=true]:border-caution disabled:bg-paper-deep";
-
-function Row({ id, label, error, children, hint }: { id: string; label: string; error?: string; children: ReactNode; hint?: ReactNode }) {
-  return (
-    <div className="flex flex-col gap-0.5 text-sm">
-      <label htmlFor={id} className="font-medium">
-        {label}
-      </label>
-      {children}
-      {error ? (
-        <p id={`${id}-error`} className="text-xs font-medium text-caution" role="alert">
-          {error}
-        </p>
-      ) : hint ? (
-        <p className="text-xs text-ink-soft">{hint}</p>
-      ) : null}
-    </div>
-  );
-}
 
 /** A number with its unit. Keeps the text as typed while it is not yet a number, so typing "1." works. */
 export function NumberInput(props: {

@@ -18,7 +18,6 @@ export const metadata: Metadata = { title: "Project" };
 // What each later stage will put here; said plainly, with no sample data.
 const COMING = [
   { title: "Client review", text: "The client watches the mock-up, comments, and signs off one frozen revision." },
-  { title: "Cut plan and exports", text: "Run length, track parts, kerf, nesting on stock sheets, DXF, SVG and ZIP downloads." },
   { title: "Build log and assembly sheet", text: "Notes, site photos and the printable assembly sheet for the installer." },
 ];
 
@@ -89,7 +88,7 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
         {designs.length === 0 ? (
           <p className="text-sm text-ink-soft">No designs yet.{access.canManage ? " Start one from a preset or from scratch." : ""}</p>
         ) : (
-          <Table head={["Design", "Mode", "Latest revision", "Last change"]} caption="Designs">
+          <Table head={access.canManage ? ["Design", "Mode", "Latest revision", "Last change", "Cut plan"] : ["Design", "Mode", "Latest revision", "Last change"]} caption="Designs">
             {designs.map((d) => (
               <tr key={d.id}>
                 <td>
@@ -100,6 +99,17 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
                 <td>{MODE_LABELS[d.mode]}</td>
                 <td className="font-mono text-xs">{d.latestRevision ? `R${d.latestRevision}` : "none yet"}</td>
                 <td className="font-mono text-xs">{formatWhen(d.updatedAt)}</td>
+                {access.canManage ? (
+                  <td>
+                    {d.latestRevision ? (
+                      <Link href={`/projects/${access.projectId}/designs/${d.id}/cut`} className="text-sm underline decoration-ink-line underline-offset-2">
+                        Parts and cut files
+                      </Link>
+                    ) : (
+                      <span className="text-xs text-ink-soft">save a revision first</span>
+                    )}
+                  </td>
+                ) : null}
               </tr>
             ))}
           </Table>

@@ -20,9 +20,16 @@ export default async function StudioPage({ params, searchParams }: { params: Pro
   const revisionNumber = revision && /^\d{1,6}$/.test(revision) ? Number(revision) : undefined;
   return (
     <>
-      <Link href={`/projects/${access.projectId}`} className="no-print text-sm text-ink-soft hover:underline">
-        ← Project
-      </Link>
+      <div className="no-print flex gap-4 text-sm">
+        <Link href={`/projects/${access.projectId}`} className="text-ink-soft hover:underline">
+          ← Project
+        </Link>
+        {access.canManage ? (
+          <Link href={`/projects/${access.projectId}/designs/${access.design.id}/cut`} className="text-ink-soft hover:underline">
+            Parts and cut files →
+          </Link>
+        ) : null}
+      </div>
       {/* The studio uses the whole width of the screen, not the reading width of other pages. */}
       <div className="relative left-1/2 w-[min(110rem,calc(100vw-2rem))] -translate-x-1/2">
         <QueryProvider>

@@ -1,0 +1,116 @@
+import type { Metadata } from "next";
+import Link from "next/link";
+import { notFound } from "next/navigation";
+import { CutPlanner, type StoredPlanView } from "@/components/cut/cut-planner";
+import { NoAccess } from "@/components/no-access";
+import { Notice } from "@/components/ui/notice";
+import { latestCutPlan } from "@/db/queries/cut-plans";
+import { findRevision, listRevisions } from "@/db/queries/designs";
+import { getProjectSummary } from "@/db/queries/projects";
+import { listShopLibrary } from "@/db/queries/shop";
+import { jobTextFiles } from "@/lib/cut/export/job";
+import type { CutSettings } from "@/lib/cut/settings";
+import type { PlanChoice } from "@/lib/cut-plan/compose";
+import { formFromSettings } from "@/lib/cut-plan/form";
+import { jobForPlan, type CutPlanSummary } from "@/lib/server/cut-plans";
+import { requireDesignAccess, requirePageUser } from "@/lib/server/dal";
+import { AppError } from "@/lib/server/errors";
+
+export const metadata: Metadata = { title: "Parts and cut files" };
+
+/** Choices for a revision with no plan yet: the first sheet in the library, its material, the first router. */
+function firstIds(library: Awaited<ReturnType<typeof listShopLibrary>>) {
+  // The largest sheet, as a shop would first reach for.
+  const sheet = [...library.stockSheets].sort((a, b) => b.lengthMm * b.widthMm - a.lengthMm * a.widthMm).find((s) => library.materials.some((m) => m.id === s.materialId));
+  const machine = library.machines.find((m) => m.kind === "router") ?? library.machines[0];
+  return { materialId: sheet?.materialId ?? library.materials[0]?.id ?? 0, stockSheetId: sheet?.id ?? 0, machineId: machine?.id ?? 0 };
+}
+
+export default async function CutPlanPage({ params, searchParams }: { params: Promise<{ id: string; designId: string }>; searchParams: Promise<{ revision?: string }> }) {
+  await requirePageUser();
+  const { id, designId } = await params;
+  const { revision: asked } = await searchParams;
+  const access = await requireDesignAccess(/^\d{1,10}$/.test(designId) ? Number(designId) : -1).catch((e) => {
+    if (e instanceof AppError && e.kind === "not_found") notFound();
+    throw e;
+  });
+  if (String(access.projectId) !== id) notFound();
+  if (!access.canManage) return <NoAccess what="Cut plans and cut files are for the shop: the project's fabricator or an admin." />;
+
+  const revisions = await listRevisions(access.design.id);
+  const back = (
+    <Link href={`/projects/${access.projectId}/designs/${access.design.id}`} className="no-print text-sm text-ink-soft hover:underline">
+      ← Studio
+    </Link>
+  );
+  if (revisions.length === 0) {
+    return (
+      <>
+        {back}
+        <h1 className="text-2xl font-semibold tracking-tight">Parts and cut files: {access.design.name}</h1>
+        <Notice>Save a revision in the studio first: cut plans are made from a frozen revision.</Notice>
+      </>
+    );
+  }
+  const row = asked && /^\d{1,6}$/.test(asked) ? revisions.find((r) => r.number === Number(asked)) : revisions[0];
+  if (!row) notFound();
+  const found = await findRevision(row.id);
+  if (!found) notFound();
+  const revision = found.revision;
+
+  const [library, plan, project] = await Promise.all([listShopLibrary({ activeOnly: true }), latestCutPlan(revision.id), getProjectSummary(access.projectId)]);
+  const storedChoice = plan?.settings as (PlanChoice & { composed?: CutSettings }) | undefined;
+  const ids = storedChoice ? { materialId: storedChoice.materialId, stockSheetId: storedChoice.stockSheetId, machineId: storedChoice.machineId } : firstIds(library);
+  let stored: StoredPlanView | null = null;
+  if (plan) {
+    const job = await jobForPlan(plan, revision, found.designName);
+    const { files, previews } = jobTextFiles(job);
+    stored = {
+      id: plan.id,
+      createdAt: plan.createdAt,
+      createdBy: plan.createdBy,
+      summary: plan.summary as unknown as CutPlanSummary,
+      files: ["job.zip", ...files.map((f) => f.name), ...previews.map((p) => p.name)],
+    };
+  }
+
+  return (
+    <>
+      {back}
+      <div className="flex flex-wrap items-baseline gap-3">
+        <h1 className="text-2xl font-semibold tracking-tight">Parts and cut files: {access.design.name}</h1>
+        <span className="font-mono text-sm text-ink-soft" data-testid="cut-revision">
+          R{revision.number} · {revision.specHash.slice(0, 12)}
+        </span>
+        {revisions.length > 1 ? (
+          <nav aria-label="Revisions" className="flex gap-2 text-sm">
+            {revisions.map((r) => (
+              <Link key={r.id} href={`?revision=${r.number}`} className={r.number === revision.number ? "font-semibold" : "underline"}>
+                R{r.number}
+              </Link>
+            ))}
+          </nav>
+        ) : null}
+      </div>
+      <p className="max-w-3xl text-sm text-ink-soft">
+        CAUTION: a rolling exhibit has pinch points where the wheel meets the track. Check the parts, joints and supports with your local codes, the
+        authority having jurisdiction and a licensed engineer before anyone rides or touches it.
+      </p>
+      {/* The studio width: the sheets and the run are drawn wide. */}
+      <div className="relative left-1/2 w-[min(110rem,calc(100vw-2rem))] -translate-x-1/2">
+        <CutPlanner
+          revision={{ id: revision.id, number: revision.number, spec: revision.spec, specHash: revision.specHash }}
+          designName={found.designName}
+          projectName={project?.name ?? "Axlewright job"}
+          library={{
+            materials: library.materials.map((m) => ({ id: m.id, name: m.name, thicknessMm: m.thicknessMm })),
+            sheets: library.stockSheets.map((s) => ({ id: s.id, name: s.name, lengthMm: s.lengthMm, widthMm: s.widthMm, grain: s.grain, materialId: s.materialId })),
+            machines: library.machines.map((k) => ({ id: k.id, name: k.name, kind: k.kind, kerfMm: k.kerfMm, bedLengthMm: k.bedLengthMm, bedWidthMm: k.bedWidthMm, minInsideRadiusMm: k.minInsideRadiusMm })),
+          }}
+          initialForm={formFromSettings((storedChoice?.settings ?? {}) as Partial<CutSettings>, ids)}
+          stored={stored}
+        />
+      </div>
+    </>
+  );
+}

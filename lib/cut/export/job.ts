@@ -1,0 +1,90 @@
+// Every file of a cut job except the PNG previews (which need sharp: export/zip.ts), from one plan:
+// a parts DXF and SVG (each part once, in a row), a DXF and SVG per nested sheet, the bill of
+// materials and the README. File names carry the output unit, as shops ask (FAB.md §3.1).
+import type { SheetNestResult } from "@/lib/nest/types";
+import type { SolveResult } from "@/lib/track";
+import type { ToolPath } from "../kerf";
+import type { CutPlanResult } from "../plan";
+import { bomCsv } from "./bom-csv";
+import { buildDrawing, partsRow, sheetParts } from "./drawing";
+import { drawingToDxf } from "./dxf";
+import { jobReadme } from "./readme";
+import { drawingToSvg } from "./svg";
+
+export interface JobInput {
+  /** File name stem, e.g. "square-wheel-trike-run". */
+  baseName: string;
+  design?: string;
+  revision?: number | string;
+  result: SolveResult;
+  plan: CutPlanResult;
+  toolPaths: Map<string, ToolPath>;
+  nest: SheetNestResult | null;
+  nestNote?: string;
+}
+
+export interface JobFile {
+  name: string;
+  data: string | Buffer;
+}
+
+export interface JobTextFiles {
+  files: JobFile[];
+  /** Preview SVGs to render as PNG, with the PNG's file name. */
+  previews: Array<{ name: string; svg: string }>;
+}
+
+/** A file-name stem from free text: lower case letters, digits and hyphens. */
+export function slug(text: string): string {
+  return (
+    text
+      .normalize("NFKD")
+      .replace(/[\u0300-\u036f]/g, "")
+      .toLowerCase()
+      .replace(/[^a-z0-9]+/g, "-")
+      .replace(/^-+|-+$/g, "")
+      .slice(0, 60) || "axlewright-job"
+  );
+}
+
+export function jobTextFiles(j: JobInput): JobTextFiles {
+  const s = j.plan.settings;
+  const u = s.outputUnits;
+  const base = j.baseName;
+  const toolPaths = s.kerfInFile ? j.toolPaths : undefined;
+  const files: JobFile[] = [];
+  const previews: JobTextFiles["previews"] = [];
+  const row = buildDrawing(partsRow(j.plan.parts, { gap: 20 + s.machine.kerf, toolPaths: j.toolPaths }), { units: u, toolPaths });
+  files.push({ name: `${base}-parts-${u}.dxf`, data: drawingToDxf(row) });
+  files.push({ name: `${base}-parts-${u}.svg`, data: drawingToSvg(row, { title: `${s.project}: parts` }) });
+  previews.push({ name: `${base}-parts-preview.png`, svg: drawingToSvg(row, { preview: true }) });
+  for (const sheet of j.nest?.sheets ?? []) {
+    const n = sheet.index + 1;
+    const d = buildDrawing(sheetParts(j.plan.parts, sheet.placements), {
+      units: u,
+      toolPaths,
+      frames: [{ minX: 0, minY: 0, maxX: s.sheet.length, maxY: s.sheet.width }],
+    });
+    files.push({ name: `${base}-sheet-${n}-${u}.dxf`, data: drawingToDxf(d) });
+    files.push({ name: `${base}-sheet-${n}-${u}.svg`, data: drawingToSvg(d, { title: `${s.project}: sheet ${n}` }) });
+    previews.push({ name: `${base}-sheet-${n}-preview.png`, svg: drawingToSvg(d, { preview: true }) });
+  }
+  files.push({ name: `${base}-bom.csv`, data: bomCsv(j.plan.parts, { material: s.material, thickness: s.sheet.thickness, units: u, nest: j.nest }) });
+  const names = [...files.map((f) => f.name), ...previews.map((p) => p.name), "README.txt"].sort();
+  files.push({
+    name: "README.txt",
+    data: jobReadme({
+      design: j.design,
+      revision: j.revision,
+      result: j.result,
+      settings: s,
+      run: j.plan.run,
+      parts: j.plan.parts,
+      warnings: j.plan.warnings,
+      nest: j.nest,
+      files: names,
+      nestNote: j.nestNote,
+    }),
+  });
+  return { files, previews };
+}

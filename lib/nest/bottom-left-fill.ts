@@ -1,0 +1,111 @@
+// Bottom-left-fill placement in one rectangular container (Burke, Hellier, Kendall & Whitwell 2006,
+// "A new bottom-left-fill heuristic algorithm for the two-dimensional irregular packing problem",
+// Operations Research 54(3):587–601), on no-fit polygons: the feasible positions of the next shape
+// are its inner-fit rectangle minus the union of the no-fit polygons of the shapes already placed
+// (Bennell & Oliveira 2008, §6); the position chosen is the vertex of that region that lies lowest
+// along the gravity axis, then lowest across it. Holes left between earlier parts are feasible
+// regions like any other, so later, smaller parts fall into them (the "fill").
+import type { ClipperLib } from "@/lib/geometry/clipper";
+import { clipper } from "@/lib/geometry/clipper";
+import { innerFitRectangle } from "./inner-fit";
+import type { NoFitCache } from "./no-fit-cache";
+import { EXACT_FIT_STEPS, type IntBox, type ShapeSet } from "./shapes";
+
+/** Which way parts fall: along x (fill the length first) or along y (fill across first). */
+export type Gravity = "x" | "y";
+
+export interface PlacedShape {
+  shape: number;
+  x: number;
+  y: number;
+}
+
+export interface Position {
+  x: number;
+  y: number;
+  /** Keys compared in order, smaller is better: the shape's near edge along gravity, then across. */
+  k1: number;
+  k2: number;
+}
+
+export function better(a: Position, b: Position | null): boolean {
+  return !b || a.k1 < b.k1 || (a.k1 === b.k1 && a.k2 < b.k2);
+}
+
+/**
+ * Reference-point positions where `shape` overlaps none of `placed`: the inner-fit rectangle minus
+ * the union of the placed shapes' no-fit polygons (Bennell & Oliveira 2008, §6). Empty when none.
+ */
+export function feasibleRegion(lib: ClipperLib, nfps: NoFitCache, shape: number, placed: readonly PlacedShape[], ifp: IntBox): clipper.Paths {
+  const clip: clipper.Path[] = [];
+  for (const p of placed) {
+    const nfp = nfps.get(p.shape, shape);
+    if (nfp.box.minX + p.x >= ifp.maxX || nfp.box.maxX + p.x <= ifp.minX || nfp.box.minY + p.y >= ifp.maxY || nfp.box.maxY + p.y <= ifp.minY)
+      continue;
+    for (const path of nfp.paths) clip.push(path.map((q) => ({ x: q.x + p.x, y: q.y + p.y })));
+  }
+  const rect: clipper.Path = [
+    { x: ifp.minX, y: ifp.minY },
+    { x: ifp.maxX, y: ifp.minY },
+    { x: ifp.maxX, y: ifp.maxY },
+    { x: ifp.minX, y: ifp.maxY },
+  ];
+  if (!clip.length) return [rect];
+  return lib.clipToPaths({
+    clipType: clipper.ClipType.Difference,
+    subjectInputs: [{ data: rect, closed: true }],
+    clipInputs: [{ data: clip }],
+    subjectFillType: clipper.PolyFillType.NonZero,
+    clipFillType: clipper.PolyFillType.NonZero,
+  });
+}
+
+export const clamp = (v: number, lo: number, hi: number) => (lo <= hi ? Math.min(Math.max(v, lo), hi) : v);
+
+export class Bin {
+  placed: PlacedShape[] = [];
+  /** Largest x reached by the placed shapes' bounding boxes. */
+  extentX: number;
+
+  constructor(
+    private readonly lib: ClipperLib,
+    private readonly set: ShapeSet,
+    private readonly nfps: NoFitCache,
+    readonly container: IntBox,
+    readonly gravity: Gravity = "x",
+  ) {
+    this.extentX = container.minX;
+  }
+
+  clone(): Bin {
+    const b = new Bin(this.lib, this.set, this.nfps, this.container, this.gravity);
+    b.placed = this.placed.slice();
+    b.extentX = this.extentX;
+    return b;
+  }
+
+  /** The bottom-left vertex of the shape's feasible region, or null when it does not fit. */
+  bestPosition(shape: number): Position | null {
+    const box = this.set.shapes[shape].box;
+    const ifp = innerFitRectangle(this.container, box, EXACT_FIT_STEPS);
+    if (!ifp) return null;
+    const exact = innerFitRectangle(this.container, box) ?? ifp;
+    const region = feasibleRegion(this.lib, this.nfps, shape, this.placed, ifp);
+    let best: Position | null = null;
+    const alongX = this.gravity === "x";
+    for (const path of region)
+      for (const q of path) {
+        const x = clamp(q.x, exact.minX, exact.maxX);
+        const y = clamp(q.y, exact.minY, exact.maxY);
+        const c: Position = alongX ? { x, y, k1: x + box.minX, k2: y + box.minY } : { x, y, k1: y + box.minY, k2: x + box.minX };
+        if (better(c, best)) best = c;
+      }
+    return best;
+  }
+
+  place(shape: number, at: { x: number; y: number }): void {
+    this.placed.push({ shape, x: at.x, y: at.y });
+    const right = at.x + this.set.shapes[shape].box.maxX;
+    if (right > this.extentX) this.extentX = right;
+  }
+}

@@ -1,0 +1,62 @@
+// No-fit polygons per ordered pair of collision shapes (Bennell & Oliveira 2008), computed on
+// first use and kept for the rest of the run; copies of one item share them.
+import type { ClipperLib } from "@/lib/geometry/clipper";
+import type { clipper } from "@/lib/geometry/clipper";
+import { noFitPolygon } from "./minkowski";
+import { intBox, type IntBox, type ShapeSet } from "./shapes";
+
+export interface Nfp {
+  paths: clipper.Paths;
+  box: IntBox;
+  /** Every edge of every ring as x1, y1, x2, y2 (for penetration depths). */
+  edges: Float64Array;
+}
+
+function edgeList(paths: clipper.Paths): Float64Array {
+  const n = paths.reduce((s, p) => s + p.length, 0);
+  const e = new Float64Array(4 * n);
+  let k = 0;
+  for (const p of paths)
+    for (let i = 0; i < p.length; i++) {
+      const q = p[(i + 1) % p.length];
+      e[k++] = p[i].x;
+      e[k++] = p[i].y;
+      e[k++] = q.x;
+      e[k++] = q.y;
+    }
+  return e;
+}
+
+export class NoFitCache {
+  private readonly table: (Nfp | undefined)[];
+  private readonly n: number;
+  computed = 0;
+
+  constructor(
+    private readonly lib: ClipperLib,
+    private readonly set: ShapeSet,
+  ) {
+    this.n = set.shapes.length;
+    this.table = new Array(this.n * this.n);
+  }
+
+  /** NFP of shape `moving` around shape `fixed` placed at the origin. */
+  get(fixed: number, moving: number): Nfp {
+    const k = fixed * this.n + moving;
+    let nfp = this.table[k];
+    if (!nfp) {
+      const paths = noFitPolygon(this.lib, this.set.shapes[fixed].stationary, this.set.shapes[moving].orbiting);
+      const boxes = paths.map(intBox);
+      const box = boxes.reduce((a, b) => ({
+        minX: Math.min(a.minX, b.minX),
+        minY: Math.min(a.minY, b.minY),
+        maxX: Math.max(a.maxX, b.maxX),
+        maxY: Math.max(a.maxY, b.maxY),
+      }));
+      nfp = { paths, box, edges: edgeList(paths) };
+      this.table[k] = nfp;
+      this.computed++;
+    }
+    return nfp;
+  }
+}

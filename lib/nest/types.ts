@@ -1,0 +1,89 @@
+// The nesting engine's public types. Coordinates: x along the sheet's or strip's length, y across.
+// A placed copy's outline is rotate(item.polygon, rotation° about (0, 0)) and then translate (x, y).
+import type { Ring } from "@/lib/cut/types";
+
+export interface NestItem {
+  id: string;
+  polygon: Ring;
+  quantity: number;
+  /** Allowed rotations in degrees, e.g. [0, 90, 180, 270]. */
+  rotations: number[];
+}
+
+export interface NestProgress {
+  /** Share of the time budget used, 0..1. */
+  fraction: number;
+  bestUtilisation: number;
+  placed: number;
+  total: number;
+  message?: string;
+}
+
+export interface NestControl {
+  seconds: number;
+  seed?: number;
+  onProgress?: (p: NestProgress) => void;
+  signal?: AbortSignal;
+  /**
+   * Stop after this many search iterations even if time is left. The search visits the same
+   * layouts in the same order for a given seed, so a run that stops on this count (rather than on
+   * the clock) gives the same result on any machine.
+   */
+  maxIterations?: number;
+}
+
+export interface Placement {
+  id: string;
+  /** 0-based copy index. */
+  copy: number;
+  /** Degrees, about the item's own origin, applied first. */
+  rotation: number;
+  /** Translation applied after the rotation. */
+  x: number;
+  y: number;
+}
+
+export interface SheetPlacement extends Placement {
+  /** 0-based. */
+  sheet: number;
+}
+
+export interface SheetNestInput extends NestControl {
+  items: NestItem[];
+  sheet: { width: number; height: number };
+  /** Edge margin. */
+  margin: number;
+  /** Smallest gap between parts. */
+  spacing: number;
+  maxSheets?: number;
+}
+
+export interface SheetNestResult {
+  sheets: Array<{ index: number; utilisation: number; placements: SheetPlacement[] }>;
+  /** Overall: part area / (sheets used × sheet area). */
+  utilisation: number;
+  unplaced: Array<{ id: string; copy: number; reason: string }>;
+  seconds: number;
+  cancelled: boolean;
+}
+
+export interface StripNestInput extends NestControl {
+  items: NestItem[];
+  height: number;
+  spacing?: number;
+}
+
+export interface StripNestResult {
+  utilisation: number;
+  length: number;
+  placed: number;
+  seconds: number;
+  cancelled: boolean;
+  placements: Placement[];
+}
+
+export interface NestInstance {
+  name: string;
+  items: NestItem[];
+  height: number;
+}

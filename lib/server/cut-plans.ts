@@ -1,0 +1,139 @@
+import "server-only";
+// Cut plans on the server: compose the settings from the request and the shop library, rebuild the
+// parts from the revision's own spec with the same code the browser ran, check the browser's nest
+// against them (lib/cut-plan/verify-nest.ts), and only then store it. Files are made on request from
+// the stored plan, so the app keeps no files of its own.
+import { findCutPlan, insertCutPlan, type CutPlanRow } from "@/db/queries/cut-plans";
+import { getProjectSummary } from "@/db/queries/projects";
+import { getShopRows } from "@/db/queries/shop";
+import type { Revision } from "@/db/schema";
+import { buildCutParts, isCutError, kerfParts, nestItemsFor, slug, type CutPlanResult } from "@/lib/cut";
+import { ringArea } from "@/lib/cut/geometry";
+import { loadHersheyFont } from "@/lib/cut/labels/font-file";
+import type { JobInput } from "@/lib/cut/export/job";
+import { composeSettings, type PlanChoice } from "@/lib/cut-plan/compose";
+import { checkNest } from "@/lib/cut-plan/verify-nest";
+import type { SheetNestResult } from "@/lib/nest/types";
+import { isEngineError, solve, type SolveResult } from "@/lib/track";
+import type { CurrentUser } from "./dal";
+import { AppError } from "./errors";
+
+const SOLVE_LIMIT_MS = 10_000;
+
+/** Engine and cut refusals become a 400 with their own words, on the field they name. */
+function asAppError(error: unknown): never {
+  if (isCutError(error)) {
+    const field = error.field ? `settings.${error.field}` : undefined;
+    throw new AppError("bad_request", error.message, field ? { [field]: [error.message] } : undefined);
+  }
+  if (isEngineError(error)) throw new AppError(error.code === "timeout" ? "timeout" : "bad_request", error.message);
+  throw error;
+}
+
+export interface BuiltPlan {
+  result: SolveResult;
+  plan: CutPlanResult;
+}
+
+/** The settings of a new plan: the request's own, with the chosen library rows' figures. */
+export async function composeFromLibrary(choice: PlanChoice, projectId: number) {
+  const [library, project] = await Promise.all([getShopRows(choice), getProjectSummary(projectId)]);
+  return { library, settings: composeSettings(choice, library, project?.name ?? "Axlewright job") };
+}
+
+/** The parts of a revision under the given settings, built as the browser builds them (plus labels). */
+export function buildPlanParts(revision: Revision, settings: unknown, { labels = true } = {}): BuiltPlan {
+  try {
+    const result = solve(revision.spec, { deadlineMs: SOLVE_LIMIT_MS });
+    const plan = buildCutParts(revision.spec, result, settings, labels ? { font: loadHersheyFont() } : {});
+    return { result, plan };
+  } catch (error) {
+    asAppError(error);
+  }
+}
+
+export interface CutPlanSummary {
+  sheets: number;
+  utilisation: number;
+  perSheet: number[];
+  parts: number;
+  copies: number;
+  runLength: number | null;
+  periods: number | null;
+  material: string;
+  sheet: string;
+  machine: string;
+  seconds: number;
+  warnings: string[];
+}
+
+export async function storeCutPlan(
+  actor: CurrentUser,
+  target: { revision: Revision; projectId: number },
+  choice: PlanChoice,
+  nest: Pick<SheetNestResult, "sheets" | "unplaced" | "seconds" | "cancelled">,
+): Promise<{ id: number; summary: CutPlanSummary }> {
+  const { library, settings } = await composeFromLibrary(choice, target.projectId);
+  const built = buildPlanParts(target.revision, settings, { labels: false });
+  const s = built.plan.settings;
+  const items = await nestItemsFor(built.plan.parts, s);
+  const problems = await checkNest({ items, nest, sheet: { width: s.sheet.length, height: s.sheet.width }, margin: s.margin, spacing: s.spacing });
+  if (problems.length) {
+    const shown = problems.slice(0, 5).join(" ");
+    throw new AppError("bad_request", `The nest was not stored: ${shown}${problems.length > 5 ? ` (and ${problems.length - 5} more)` : ""}`);
+  }
+  const sheets = nest.sheets.filter((sh) => sh.placements.length > 0);
+  const sheetArea = s.sheet.length * s.sheet.width;
+  const partArea = new Map(built.plan.parts.map((p) => [p.id, regionArea(p.region)]));
+  const perSheet = sheets.map((sh) => sh.placements.reduce((sum, pl) => sum + (partArea.get(pl.id) ?? 0), 0) / sheetArea);
+  const summary: CutPlanSummary = {
+    sheets: sheets.length,
+    // The parts' own area over the stock's: the same figure the page shows.
+    utilisation: perSheet.reduce((a, b) => a + b, 0) / Math.max(1, sheets.length),
+    perSheet,
+    parts: built.plan.parts.length,
+    copies: built.plan.parts.reduce((n, p) => n + p.quantity, 0),
+    runLength: built.plan.run?.runLength ?? null,
+    periods: built.plan.run?.periods ?? null,
+    material: library.material.name,
+    sheet: library.sheet.name,
+    machine: library.machine.name,
+    seconds: nest.seconds,
+    warnings: built.plan.warnings.filter((w) => w.code !== "no-font").map((w) => w.message),
+  };
+  const stored = { sheets: sheets.map((sh, index) => ({ index, utilisation: perSheet[index], placements: sh.placements.map((p) => ({ ...p, sheet: index })) })), unplaced: [], seconds: nest.seconds, cancelled: nest.cancelled };
+  const id = await insertCutPlan(actor, { revisionId: target.revision.id, projectId: target.projectId }, {
+    // The library figures are copied in, so a later edit of a library row cannot change this plan.
+    settings: { ...choice, composed: s } as unknown as Record<string, unknown>,
+    nest: stored as unknown as Record<string, unknown>,
+    summary: summary as unknown as Record<string, unknown>,
+  });
+  return { id, summary };
+}
+
+/** Area of a region: the outer ring less its holes. */
+function regionArea(region: { outer: [number, number][]; holes: [number, number][][] }): number {
+  return ringArea(region.outer) - region.holes.reduce((a, h) => a + ringArea(h), 0);
+}
+
+/** Everything the exporters need for a stored plan, rebuilt from its revision and its own settings (labels included). */
+export async function jobForPlan(plan: CutPlanRow, revision: Revision, designName: string): Promise<JobInput> {
+  const composed = (plan.settings as { composed?: unknown }).composed;
+  const built = buildPlanParts(revision, composed);
+  const { paths } = await kerfParts(built.plan.parts, built.plan.settings);
+  return {
+    baseName: slug(`${built.plan.settings.project} ${designName} r${revision.number}`),
+    design: designName,
+    revision: revision.number,
+    result: built.result,
+    plan: built.plan,
+    toolPaths: paths,
+    nest: plan.nest as unknown as SheetNestResult,
+  };
+}
+
+export async function requireStoredPlan(id: number): Promise<CutPlanRow> {
+  const plan = await findCutPlan(id);
+  if (!plan) throw new AppError("not_found", "No such cut plan.");
+  return plan;
+}

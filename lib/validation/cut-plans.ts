@@ -1,0 +1,23 @@
+import { z } from "zod";
+import { planChoiceSchema } from "@/lib/cut-plan/compose";
+
+const finite = z.number({ error: "Positions must be numbers." }).finite({ error: "Positions must be finite numbers." });
+const partId = z.string().min(1).max(40);
+
+const placement = z.strictObject({ id: partId, copy: z.number().int().min(0).max(10_000), rotation: finite, x: finite, y: finite, sheet: z.number().int().min(0).max(500) });
+
+/** A nest as the browser's nester hands it back; the server checks it against its own parts. */
+export const nestSchema = z.strictObject({
+  sheets: z
+    .array(z.strictObject({ index: z.number().int().min(0).max(500), utilisation: z.number().finite(), placements: z.array(placement).max(5000) }), { error: "The nest needs its sheets." })
+    .min(1, { error: "The nest places nothing." })
+    .max(500, { error: "A nest of more than 500 sheets is not stored." }),
+  unplaced: z.array(z.strictObject({ id: partId, copy: z.number().int().min(0), reason: z.string().max(500) })).max(5000),
+  seconds: z.number().finite().min(0),
+  cancelled: z.boolean(),
+  utilisation: z.number().finite().optional(),
+});
+
+export const newCutPlanSchema = planChoiceSchema.extend({ nest: nestSchema });
+
+export const CUT_PLAN_BODY_LIMIT = 512 * 1024;

@@ -1,0 +1,47 @@
+import type { Page } from "playwright-core";
+import { baseUrl } from "../support/browser";
+
+/** The parts-and-cut-files page of a design. */
+export class CutPlanPage {
+  constructor(private readonly page: Page) {}
+
+  /** Opens the seeded design of a project from the project page, as a fabricator would. */
+  async openFromProject(projectName: string, designName: string) {
+    await this.page.goto(`${baseUrl}/projects`);
+    await this.page.getByRole("link", { name: projectName }).click();
+    const row = this.page.getByRole("row").filter({ hasText: designName });
+    await row.getByRole("link", { name: "Parts and cut files" }).click();
+    await this.page.getByRole("heading", { name: `Parts and cut files: ${designName}` }).waitFor();
+  }
+
+  async choose(label: string, option: string) {
+    await this.page.getByLabel(label, { exact: true }).selectOption({ label: option });
+  }
+
+  async fill(label: string, value: string) {
+    await this.page.getByLabel(label, { exact: true }).fill(value);
+  }
+
+  runSummary() {
+    return this.page.getByTestId("run-summary");
+  }
+
+  async waitForRunSummary(text: RegExp) {
+    await this.page.waitForFunction((source) => new RegExp(source).test(document.querySelector("[data-testid=run-summary]")?.textContent ?? ""), text.source);
+  }
+
+  async nest(seconds: number) {
+    await this.fill("Search time (s)", String(seconds));
+    await this.page.getByRole("button", { name: /^Nest (parts|again)$/ }).click();
+  }
+
+  nestSummary() {
+    return this.page.getByTestId("nest-summary");
+  }
+
+  async store() {
+    await this.page.getByRole("button", { name: "Store as this revision's cut plan" }).click();
+    await this.page.getByTestId("save-message").waitFor();
+    return this.page.getByTestId("save-message").innerText();
+  }
+}
