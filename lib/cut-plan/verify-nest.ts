@@ -34,7 +34,13 @@ function sameAngle(a: number, b: number): boolean {
 function overlapArea(lib: ClipperLib, a: Ring, b: Ring, grow: number): number {
   const inflate = (ring: Ring) =>
     grow > 0
-      ? lib.offsetToPaths({ delta: grow * SCALE, offsetInputs: [{ data: toPath(ring, SCALE), joinType: clipper.JoinType.Miter, endType: clipper.EndType.ClosedPolygon }] }) ?? []
+      ? // Round joins: the grown ring is every point within `grow` of the part (a Minkowski sum with a
+        // disc), so two grown parts meet exactly when the parts are closer than twice `grow`.
+        lib.offsetToPaths({
+          delta: grow * SCALE,
+          arcTolerance: 0.001 * SCALE,
+          offsetInputs: [{ data: toPath(ring, SCALE), joinType: clipper.JoinType.Round, endType: clipper.EndType.ClosedPolygon }],
+        }) ?? []
       : [toPath(ring, SCALE)];
   const out = lib.clipToPaths({
     clipType: clipper.ClipType.Intersection,

@@ -30,6 +30,15 @@ describe("checkNest", () => {
     expect(problems).toEqual(["T01 (copy 1) and T01 (copy 2) on sheet 1 are closer than the 6 part spacing."]);
   });
 
+  it("measures true distance at sharp corners (no mitre overshoot)", async () => {
+    // Two diamonds (squares turned 45°, half-diagonal 50) tip to tip: tips at x = 110 and x = 116,
+    // exactly the 6 spacing apart. A mitred growth would reach past the tips and call them too close.
+    const diamond: NestItem = { id: "D1", polygon: [[0, -50], [50, 0], [0, 50], [-50, 0]], quantity: 2, rotations: [0] };
+    const place = (copy: number, x: number): SheetPlacement => ({ id: "D1", copy, rotation: 0, x, y: 100, sheet: 0 });
+    expect(await check([place(0, 60), place(1, 166)], { items: [diamond] })).toEqual([]);
+    expect(await check([place(0, 60), place(1, 165)], { items: [diamond] })).toHaveLength(1);
+  });
+
   it("refuses overlapping parts even with no spacing", async () => {
     expect(await check([at(0, 10, 10), at(1, 60, 30)], { spacing: 0 })).toHaveLength(1);
   });
