@@ -2,17 +2,14 @@
 // "A new bottom-left-fill heuristic algorithm for the two-dimensional irregular packing problem",
 // Operations Research 54(3):587–601), on no-fit polygons: the feasible positions of the next shape
 // are its inner-fit rectangle minus the union of the no-fit polygons of the shapes already placed
-// (Bennell & Oliveira 2008, §6); the position chosen is the vertex of that region that lies lowest
-// along the gravity axis, then lowest across it. Holes left between earlier parts are feasible
+// (Bennell & Oliveira 2008, §6); the position chosen is the vertex of that region where the shape's
+// left edge is lowest in x (along the length), then its bottom edge lowest in y. Holes left between earlier parts are feasible
 // regions like any other, so later, smaller parts fall into them (the "fill").
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import { clipper } from "@/lib/geometry/clipper";
 import { innerFitRectangle } from "./inner-fit";
 import type { NoFitCache } from "./no-fit-cache";
 import { EXACT_FIT_STEPS, type IntBox, type ShapeSet } from "./shapes";
-
-/** Which way parts fall: along x (fill the length first) or along y (fill across first). */
-export type Gravity = "x" | "y";
 
 export interface PlacedShape {
   shape: number;
@@ -23,7 +20,7 @@ export interface PlacedShape {
 export interface Position {
   x: number;
   y: number;
-  /** Keys compared in order, smaller is better: the shape's near edge along gravity, then across. */
+  /** Keys compared in order, smaller is better: the shape's left edge, then its bottom edge. */
   k1: number;
   k2: number;
 }
@@ -72,16 +69,8 @@ export class Bin {
     private readonly set: ShapeSet,
     private readonly nfps: NoFitCache,
     readonly container: IntBox,
-    readonly gravity: Gravity = "x",
   ) {
     this.extentX = container.minX;
-  }
-
-  clone(): Bin {
-    const b = new Bin(this.lib, this.set, this.nfps, this.container, this.gravity);
-    b.placed = this.placed.slice();
-    b.extentX = this.extentX;
-    return b;
   }
 
   /** The bottom-left vertex of the shape's feasible region, or null when it does not fit. */
@@ -89,15 +78,14 @@ export class Bin {
     const box = this.set.shapes[shape].box;
     const ifp = innerFitRectangle(this.container, box, EXACT_FIT_STEPS);
     if (!ifp) return null;
-    const exact = innerFitRectangle(this.container, box) ?? ifp;
+    const exact = innerFitRectangle(this.container, box) ?? ifp; // null only when it misses by under a step
     const region = feasibleRegion(this.lib, this.nfps, shape, this.placed, ifp);
     let best: Position | null = null;
-    const alongX = this.gravity === "x";
     for (const path of region)
       for (const q of path) {
         const x = clamp(q.x, exact.minX, exact.maxX);
         const y = clamp(q.y, exact.minY, exact.maxY);
-        const c: Position = alongX ? { x, y, k1: x + box.minX, k2: y + box.minY } : { x, y, k1: y + box.minY, k2: x + box.minX };
+        const c: Position = { x, y, k1: x + box.minX, k2: y + box.minY };
         if (better(c, best)) best = c;
       }
     return best;

@@ -4,7 +4,7 @@
 // Neighbouring sequences share a prefix, so a decode can start from the first changed position and
 // copy the earlier placements from the previous decode instead of searching for them again.
 import type { ClipperLib } from "@/lib/geometry/clipper";
-import { Bin, type Gravity } from "./bottom-left-fill";
+import { Bin } from "./bottom-left-fill";
 import type { NoFitCache } from "./no-fit-cache";
 import type { IntBox, ShapeSet } from "./shapes";
 
@@ -45,7 +45,6 @@ export interface DecoderSetup {
   /** Usable region of every container, integer steps. */
   container: IntBox;
   maxBins: number;
-  gravity?: Gravity;
 }
 
 export function decode(setup: DecoderSetup, seq: readonly Gene[], from = 0, previous?: Decoded): Decoded {
@@ -55,7 +54,7 @@ export function decode(setup: DecoderSetup, seq: readonly Gene[], from = 0, prev
   let unplacedArea = 0;
   let unplacedCount = 0;
   const openBin = () => {
-    const b = new Bin(lib, set, nfps, container, setup.gravity ?? "x");
+    const b = new Bin(lib, set, nfps, container);
     bins.push(b);
     return b;
   };

@@ -1,7 +1,7 @@
 // The first layout: copies in order of decreasing area (the usual first order for BLF, Burke et al.
 // 2006), each in the allowed rotation that bottom-left-fill puts on the earliest container and
-// ends nearest the left (smallest right edge). If the run is cancelled part-way, the remaining
-// copies keep their first rotation so that a complete layout still comes back quickly.
+// ends nearest the left (smallest right edge). If the run is cancelled or out of time part-way, the
+// remaining copies keep their first rotation so that a complete layout still comes back quickly.
 import type { Budget } from "./budget";
 import { decode, type Decoded, type DecoderSetup, type Gene } from "./decoder";
 
@@ -9,7 +9,7 @@ export async function greedyLayout(setup: DecoderSetup, order: readonly number[]
   const seq: Gene[] = [];
   let partial: Decoded | undefined;
   for (const copy of order) {
-    const options = budget.aborted ? rotations(copy).slice(0, 1) : rotations(copy);
+    const options = budget.done() ? rotations(copy).slice(0, 1) : rotations(copy);
     let best: { g: Gene; d: Decoded; key: [number, number] } | undefined;
     for (const rot of options) {
       const g = { copy, rot };

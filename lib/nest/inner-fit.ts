@@ -6,7 +6,8 @@ import type { IntBox } from "./shapes";
 /**
  * Positions for a shape with bounding box `box` (in its own frame) inside `container`, widened by
  * `slack` integer steps on each side so that an exact fit keeps a region of non-zero area.
- * Null when the shape does not fit.
+ * Null when the shape does not fit; a shape exactly as long or wide as the container gets a
+ * rectangle of zero width.
  */
 export function innerFitRectangle(container: IntBox, box: IntBox, slack = 0): IntBox | null {
   const r = {
@@ -15,5 +16,5 @@ export function innerFitRectangle(container: IntBox, box: IntBox, slack = 0): In
     maxX: container.maxX - box.maxX + slack,
     maxY: container.maxY - box.maxY + slack,
   };
-  return r.maxX > r.minX && r.maxY > r.minY ? r : null;
+  return r.maxX >= r.minX && r.maxY >= r.minY ? r : null;
 }

@@ -30,11 +30,29 @@ export function reflect(b: clipper.ReadonlyPath): clipper.Path {
   return b.map((q) => ({ x: -q.x, y: -q.y }));
 }
 
+/** Area of `fixed` ∩ (`moving` translated by (dx, dy)). */
+function overlapArea(lib: ClipperLib, fixed: clipper.ReadonlyPath, moving: clipper.ReadonlyPath, dx: number, dy: number): number {
+  const out = lib.clipToPaths({
+    clipType: clipper.ClipType.Intersection,
+    subjectInputs: [{ data: fixed, closed: true }],
+    clipInputs: [{ data: shift(moving, dx, dy) }],
+    subjectFillType: clipper.PolyFillType.NonZero,
+  });
+  return out.reduce((s, p) => s + Math.abs(lib.area(p)), 0);
+}
+
 /**
  * No-fit polygon of `orbiting` around `fixed`, both in their own frames: the orbiting shape's
  * reference point placed strictly inside it overlaps `fixed` (placed at the origin), on its
  * boundary touches, outside is clear.
+ *
+ * A hole of the sum is a pocket where the orbiting shape fits inside the fixed one, or a sliver
+ * left by rounding where it does not. Each hole is tried at its vertices; a hole where the shapes
+ * overlap there is a sliver and is filled.
  */
 export function noFitPolygon(lib: ClipperLib, fixed: clipper.ReadonlyPath, orbiting: clipper.ReadonlyPath): clipper.Paths {
-  return minkowskiSum(lib, fixed, reflect(orbiting));
+  const sum = minkowskiSum(lib, fixed, reflect(orbiting));
+  if (sum.length <= 1) return sum;
+  const tolerance = 1e-6 * Math.min(Math.abs(lib.area(fixed)), Math.abs(lib.area(orbiting)));
+  return sum.filter((path) => lib.area(path) > 0 || path.every((q) => overlapArea(lib, fixed, orbiting, q.x, q.y) <= tolerance));
 }

@@ -40,7 +40,7 @@ export interface OverlapSetup {
 }
 
 /** A pair this shallow (in integer steps) counts as touching. */
-const TOUCH = 1;
+const TOUCH = 0.75;
 export interface SeparationTuning {
   /** Share of the smaller part's size that any collision costs on top of its depth. */
   collisionFloor: number;
@@ -51,17 +51,12 @@ export interface SeparationTuning {
   /** Random positions tried per move: anywhere in the container, and near the part. */
   globalSamples: number;
   localSamples: number;
-  /** Positions where the part touches another one: a vertex of their no-fit polygon. */
-  contactSamples: number;
   maxDescentEvaluations: number;
-  /** Which exactly free spot to take: the nearest to where the part was, or the leftmost. */
-  freeSpot: "nearest" | "leftmost";
   /**
-   * The exact free-spot search looks this many part sizes around the part (fewer no-fit polygons
-   * to merge), and over the whole container with probability `globalFreeSpot`.
+   * Chance that a move which found no overlap-free position by sampling also asks the no-fit
+   * polygons for one (exact, but the dearest step of a move).
    */
-  freeSpotWindow: number;
-  globalFreeSpot: number;
+  freeSpotChance: number;
 }
 
 export const DEFAULT_SEPARATION: SeparationTuning = {
@@ -71,11 +66,8 @@ export const DEFAULT_SEPARATION: SeparationTuning = {
   penaltyCap: 1e6,
   globalSamples: 40,
   localSamples: 20,
-  contactSamples: 0,
   maxDescentEvaluations: 200,
-  freeSpot: "nearest",
-  freeSpotWindow: Infinity,
-  globalFreeSpot: 1,
+  freeSpotChance: 0.3,
 };
 
 export class OverlapSearch {
@@ -92,6 +84,7 @@ export class OverlapSearch {
   private readonly rowF: Float64Array;
   private readonly rowSign: Int8Array;
   private readonly ifps: (IntBox | null)[];
+  private readonly allowed: number[][];
   private readonly slackIfps: (IntBox | null)[];
 
   constructor(
@@ -100,12 +93,16 @@ export class OverlapSearch {
     private readonly t: SeparationTuning = DEFAULT_SEPARATION,
   ) {
     this.n = start.shape.length;
-    this.ifps = s.set.shapes.map((sh) => innerFitRectangle(s.container, sh.box, 0) ?? exactFit(s.container, sh.box));
+    this.ifps = s.set.shapes.map((sh) => innerFitRectangle(s.container, sh.box));
     this.slackIfps = s.set.shapes.map((sh) => innerFitRectangle(s.container, sh.box, EXACT_FIT_STEPS));
     this.a = { shape: start.shape.slice(), x: start.x.slice(), y: start.y.slice() };
+    // Rotations that do not fit this container are out for this search.
+    this.allowed = s.shapesOf.map((list) => list.filter((sh) => this.ifps[sh]));
     for (let i = 0; i < this.n; i++) {
-      const f = this.ifps[this.a.shape[i]];
-      if (!f) throw new Error("OverlapSearch: a part does not fit the container");
+      const allowed = this.allowed[s.copies[i].item];
+      if (allowed.length === 0) throw new Error("OverlapSearch: a part fits the container in no rotation");
+      if (!this.ifps[this.a.shape[i]]) this.a.shape[i] = allowed[0];
+      const f = this.ifps[this.a.shape[i]]!;
       this.a.x[i] = clamp(this.a.x[i], f.minX, f.maxX);
       this.a.y[i] = clamp(this.a.y[i], f.minY, f.maxY);
     }
@@ -170,15 +167,6 @@ export class OverlapSearch {
     return c;
   }
 
-  debugPairs(): string[] {
-    const out: string[] = [];
-    const { n } = this;
-    for (let i = 0; i < n; i++)
-      for (let j = i + 1; j < n; j++)
-        if (this.pd[i * n + j] > TOUCH) out.push(`${i}-${j} ${this.pd[i * n + j].toFixed(1)} w ${this.w[i * n + j].toExponential(2)}`);
-    return out;
-  }
-
   /**
    * Exchanges the places of two copies of different items (each keeps its rotation), the
    * disruption of Imamichi et al. (2009) and Gardeyn et al. (2025) for leaving a layout whose
@@ -230,7 +218,7 @@ export class OverlapSearch {
     const current = this.cost(a.x[i], a.y[i], Infinity);
     if (current === 0) return false;
     let best = { v: current, shape: a.shape[i], x: a.x[i], y: a.y[i] };
-    const shapes = s.shapesOf[s.copies[i].item].slice();
+    const shapes = this.allowed[s.copies[i].item].slice();
     for (let k = shapes.length - 1; k > 0; k--) {
       const r = rng.int(k + 1);
       [shapes[k], shapes[r]] = [shapes[r], shapes[k]];
@@ -241,11 +229,6 @@ export class OverlapSearch {
       const f = this.ifps[shape];
       if (!f) continue;
       this.work++;
-      const free = this.freeSpot(shape, others, a.x[i], a.y[i], rng.next() < this.t.globalFreeSpot ? Infinity : this.t.freeSpotWindow);
-      if (free) {
-        best = { v: 0, shape, ...free };
-        break;
-      }
       this.loadRow(i, shape);
       const box = s.set.shapes[shape].box;
       const size = Math.max(box.maxX - box.minX, box.maxY - box.minY);
@@ -259,16 +242,16 @@ export class OverlapSearch {
       if (shape === a.shape[i]) trial(a.x[i], a.y[i]);
       for (let k = 0; k < this.t.globalSamples; k++) trial(f.minX + rng.next() * (f.maxX - f.minX), f.minY + rng.next() * (f.maxY - f.minY));
       for (let k = 0; k < this.t.localSamples; k++) trial(a.x[i] + (rng.next() - 0.5) * size, a.y[i] + (rng.next() - 0.5) * size);
-      for (let k = 0; k < this.t.contactSamples && this.n > 1; k++) {
-        let j = rng.int(this.n - 1);
-        if (j >= i) j++;
-        const path = this.row[j]!.paths[0];
-        const q = path[rng.int(path.length)];
-        trial(this.rowSign[j] * q.x + a.x[j], this.rowSign[j] * q.y + a.y[j]);
-      }
       const refined = this.descend(top, f, size / 8);
       if (refined.v < best.v) best = { shape, ...refined };
       if (best.v === 0) break;
+      if (rng.next() < this.t.freeSpotChance) {
+        const free = this.freeSpot(shape, others, a.x[i], a.y[i]);
+        if (free) {
+          best = { v: 0, shape, ...free };
+          break;
+        }
+      }
     }
     if (!(best.v < current)) return false;
     a.shape[i] = best.shape;
@@ -279,22 +262,17 @@ export class OverlapSearch {
   }
 
   /** An overlap-free position for `shape` among `others`, the one nearest (x, y); null if none. */
-  private freeSpot(shape: number, others: PlacedShape[], x: number, y: number, window: number): { x: number; y: number } | null {
-    let slack = this.slackIfps[shape];
+  private freeSpot(shape: number, others: PlacedShape[], x: number, y: number): { x: number; y: number } | null {
+    const slack = this.slackIfps[shape];
     const f = this.ifps[shape]!;
     if (!slack) return null;
-    if (Number.isFinite(window)) {
-      const box = this.s.set.shapes[shape].box;
-      const r = window * Math.max(box.maxX - box.minX, box.maxY - box.minY);
-      slack = { minX: Math.max(slack.minX, x - r), minY: Math.max(slack.minY, y - r), maxX: Math.min(slack.maxX, x + r), maxY: Math.min(slack.maxY, y + r) };
-    }
     const region = feasibleRegion(this.s.lib, this.s.nfps, shape, others, slack);
     let best: { x: number; y: number; d: number } | null = null;
     for (const path of region)
       for (const q of path) {
         const px = clamp(q.x, f.minX, f.maxX);
         const py = clamp(q.y, f.minY, f.maxY);
-        const d = this.t.freeSpot === "nearest" ? (px - x) ** 2 + (py - y) ** 2 : px * 4e9 + py;
+        const d = (px - x) ** 2 + (py - y) ** 2;
         if (!best || d < best.d) best = { x: px, y: py, d };
       }
     return best;
@@ -348,8 +326,10 @@ export class OverlapSearch {
         [list[k], list[r]] = [list[r], list[k]];
       }
       for (const i of list) {
+        if (budget.done()) return false;
         this.move(i);
         budget.iterations++;
+        await pause();
       }
       const t = this.totalOverlap();
       if (t === 0) return true;
@@ -358,14 +338,7 @@ export class OverlapSearch {
         since = this.work;
       } else if (this.work - since > maxStall) return false;
       this.penalise();
-      await pause();
     }
     return false;
   }
-}
-
-/** A zero-width inner-fit range (the part exactly as long or wide as the container). */
-function exactFit(container: IntBox, box: IntBox): IntBox | null {
-  const r = { minX: container.minX - box.minX, minY: container.minY - box.minY, maxX: container.maxX - box.maxX, maxY: container.maxY - box.maxY };
-  return r.maxX >= r.minX && r.maxY >= r.minY ? r : null;
 }

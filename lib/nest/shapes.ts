@@ -78,7 +78,8 @@ export function buildShapes(lib: ClipperLib, items: readonly NestItem[], scale: 
       const exact = toPath(rotateRing(item.polygon, rotation), scale);
       if (lib.area(exact) < 0) exact.reverse();
       const orbiting = offsetPolygon(lib, exact, half);
-      const stationary = offsetPolygon(lib, exact, half - EXACT_FIT_STEPS);
+      // Clipper's mitred offset leaves edges one step long at the corners; they only breed slivers.
+      const stationary = lib.cleanPolygon(offsetPolygon(lib, exact, half - EXACT_FIT_STEPS), 1.5);
       shapes.push({ item: i, rotation, stationary, orbiting, box: intBox(orbiting) });
       return shapes.length - 1;
     }),

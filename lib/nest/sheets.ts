@@ -6,6 +6,7 @@
 import { loadClipper } from "@/lib/geometry/clipper";
 import { Budget } from "./budget";
 import { checkItems, expandCopies } from "./copies";
+import { fmt } from "./format";
 import { decode, type Decoded, type DecoderSetup, type Gene } from "./decoder";
 import { greedyLayout } from "./greedy";
 import { innerFitRectangle } from "./inner-fit";
@@ -20,9 +21,7 @@ import type { SheetNestInput, SheetNestResult, SheetPlacement } from "./types";
 
 const HISTORY = 50;
 
-export const fmt = (v: number) => Number(v.toPrecision(6)).toString();
-
-export async function nestOnSheets(input: SheetNestInput & { units?: string }): Promise<SheetNestResult> {
+export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResult> {
   const budget = new Budget(input.seconds, input.signal, input.maxIterations, input.onProgress);
   checkItems(input.items);
   const { width, height } = input.sheet ?? ({} as SheetNestInput["sheet"]);
@@ -60,7 +59,7 @@ export async function nestOnSheets(input: SheetNestInput & { units?: string }): 
     unplaced.push({
       id: items[c.item].id,
       copy: c.index,
-      reason: `${items[c.item].id} is ${fmt(b.maxX - b.minX)} × ${fmt(b.maxY - b.minY)} ${units}; the sheet's usable area is ${usableW} × ${usableH} ${units} in every allowed rotation${spacing > 0 ? ` (with ${fmt(spacing)} ${units} spacing)` : ""}`,
+      reason: `${items[c.item].id} is ${fmt(b.maxX - b.minX)} × ${fmt(b.maxY - b.minY)} ${units}; the sheet's usable area is ${usableW} × ${usableH} ${units} in every allowed rotation`,
     });
   });
 
@@ -83,7 +82,7 @@ export async function nestOnSheets(input: SheetNestInput & { units?: string }): 
     let cur = best;
     const lahc = new LateAcceptance(HISTORY, cur.cost);
     const rng = seededRandom(input.seed ?? 1);
-    const placedArea = (d: Decoded) => d.steps.reduce((s, st, k) => (st.bin >= 0 ? s + set.itemArea[copies[cur.seq[k].copy].item] : s), 0);
+    const placedArea = (seq: Gene[], d: Decoded) => d.steps.reduce((s, st, k) => (st.bin >= 0 ? s + set.itemArea[copies[seq[k].copy].item] : s), 0);
     while (!budget.done() && order.length > 1) {
       const mv = neighbour(cur.seq, cur.decoded, rotations, itemOf, rng);
       const d = decode(setup, mv.seq, mv.from, cur.decoded);
@@ -95,7 +94,7 @@ export async function nestOnSheets(input: SheetNestInput & { units?: string }): 
       }
       const b = best;
       await budget.pause(() => ({
-        bestUtilisation: placedArea(b.decoded) / (Math.max(1, b.decoded.bins.length) * sheetArea),
+        bestUtilisation: placedArea(b.seq, b.decoded) / (Math.max(1, b.decoded.bins.length) * sheetArea),
         placed: b.decoded.steps.length - b.decoded.unplacedCount,
         total: copies.length,
         message: `${b.decoded.bins.length} sheet(s)`,

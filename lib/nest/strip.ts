@@ -10,6 +10,7 @@
 import { loadClipper } from "@/lib/geometry/clipper";
 import { Budget } from "./budget";
 import { checkItems, expandCopies } from "./copies";
+import { fmt } from "./format";
 import type { DecoderSetup } from "./decoder";
 import { greedyLayout } from "./greedy";
 import { DEFAULT_SEPARATION, OverlapSearch, type Arrangement, type SeparationTuning } from "./overlap-search";
@@ -38,12 +39,13 @@ export const DEFAULT_STRIP_TUNING: StripTuning = {
   firstShrink: 0.02,
   minShrink: 0.001,
   shrinkDecay: 0.7,
-  maxStall: 6000,
+  maxStall: 3000,
   separation: DEFAULT_SEPARATION,
-  swapsAfterFailure: 0,
+  swapsAfterFailure: 1,
 };
 
-const fmt = (v: number) => Number(v.toPrecision(6)).toString();
+/** The overlap search keeps n × n pair tables; above this many copies the first layout is returned. */
+const MAX_SEARCH_COPIES = 1500;
 
 export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEFAULT_STRIP_TUNING): Promise<StripNestResult> {
   const budget = new Budget(input.seconds, input.signal, input.maxIterations, input.onProgress);
@@ -72,8 +74,10 @@ export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEF
   const widthOf = (i: number) => Math.min(...usable[i].map((k) => boxes[i][k].maxX - boxes[i][k].minX)) + spacing;
   const sumWidths = copies.reduce((s, c) => s + widthOf(c.item), 0);
   // The first layout's strip: long enough in practice, short enough for a fine integer scale.
-  const bound = Math.min(sumWidths, (2 * partArea) / height + 2 * Math.max(...items.map((_, i) => widthOf(i))));
-  for (const length of [bound, sumWidths]) {
+  // (Bottom-left-fill alone packs well over 2/3 of the area, so 1.5 × area / height plus the widest
+  // part is enough; if not, the strip is doubled, then made long enough for anything.)
+  const bound = Math.min(sumWidths, (1.5 * partArea) / height + Math.max(...items.map((_, i) => widthOf(i))));
+  for (const length of new Set([bound, Math.min(2 * bound, sumWidths), sumWidths])) {
     const S = scaleForExtent(Math.max(height, length) + spacing);
     const set = buildShapes(lib, items, S, spacing);
     const nfps = new NoFitCache(lib, set);
@@ -99,13 +103,13 @@ export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEF
     let failed = false;
     const pause = () =>
       budget.pause(() => ({ bestUtilisation: partArea / (height * bestLength), placed: total, total, message: `strip length ${fmt(bestLength)}` }));
-    while (!budget.done()) {
-      const target = bestLength * (1 - shrink);
+    // No layout is shorter than the area over the height, nor than the widest part at its narrowest.
+    const lowerBound = Math.max(partArea / height, ...copies.map((c) => widthOf(c.item) - spacing));
+    while (!budget.done() && total <= MAX_SEARCH_COPIES && bestLength > lowerBound * (1 + 1e-9)) {
+      const target = Math.max(lowerBound, bestLength * (1 - shrink));
       const search = new OverlapSearch({ lib, set, nfps, copies, shapesOf, container: containerFor(target), rng }, best, tuning.separation);
       if (failed) for (let k = 0; k < tuning.swapsAfterFailure; k++) search.swapTwo();
-      const t0 = budget.elapsed();
       const ok = await search.run(budget, tuning.maxStall, pause);
-      if (typeof process !== "undefined" && process.env?.NEST_DEBUG) console.error(`${ok ? "ok  " : "fail"} target ${fmt(target)} shrink ${shrink.toFixed(4)} secs ${(budget.elapsed() - t0).toFixed(2)} at ${budget.elapsed().toFixed(1)} overlap ${search.totalOverlap() / S}`);
       failed = !ok;
       if (ok) {
         best = search.a;

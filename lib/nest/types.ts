@@ -56,6 +56,8 @@ export interface SheetNestInput extends NestControl {
   /** Smallest gap between parts. */
   spacing: number;
   maxSheets?: number;
+  /** Unit name used in the plain-English reasons for parts left out; "mm" when not given. */
+  units?: string;
 }
 
 export interface SheetNestResult {
