@@ -5,23 +5,8 @@
 import type { Pt } from "@/lib/track";
 import type { Ring } from "./types";
 
-export interface Box {
-  minX: number;
-  minY: number;
-  maxX: number;
-  maxY: number;
-}
-
-/** Shoelace formula: positive for a counter-clockwise ring. */
-export function signedArea(ring: readonly Pt[]): number {
-  let s = 0;
-  for (let i = 0, j = ring.length - 1; i < ring.length; j = i++) s += ring[j][0] * ring[i][1] - ring[i][0] * ring[j][1];
-  return s / 2;
-}
-
-export function ringArea(ring: readonly Pt[]): number {
-  return Math.abs(signedArea(ring));
-}
+export { ringArea, signedArea, type Box } from "@/lib/geometry/ring";
+import { signedArea, type Box } from "@/lib/geometry/ring";
 
 export function perimeter(ring: readonly Pt[], closed = true): number {
   let s = 0;

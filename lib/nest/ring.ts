@@ -3,27 +3,8 @@
 import type { Pt } from "@/lib/track";
 import type { Ring } from "@/lib/cut/types";
 
-export interface Box {
-  minX: number;
-  minY: number;
-  maxX: number;
-  maxY: number;
-}
-
-/** Signed area; positive for a counter-clockwise ring. */
-export function signedArea(ring: readonly Pt[]): number {
-  let s = 0;
-  for (let i = 0, n = ring.length; i < n; i++) {
-    const [x0, y0] = ring[i];
-    const [x1, y1] = ring[(i + 1) % n];
-    s += x0 * y1 - x1 * y0;
-  }
-  return s / 2;
-}
-
-export function ringArea(ring: readonly Pt[]): number {
-  return Math.abs(signedArea(ring));
-}
+export { ringArea, signedArea, type Box } from "@/lib/geometry/ring";
+import { signedArea, type Box } from "@/lib/geometry/ring";
 
 /** Drops a repeated closing point and makes the ring counter-clockwise. */
 export function normaliseRing(ring: readonly Pt[]): Ring {
