@@ -220,6 +220,101 @@ export const cutPlans = mysqlTable(
   (t) => [index("cut_plans_revision").on(t.revisionId)],
 );
 
+export const END_TREATMENTS = ["flat", "half", "scale"] as const;
+
+/**
+ * A request for the client's review of one saved revision: the fabricator's message and the run the
+ * mock-up shows (track modes). A review is decided at most once, by a row in `sign_offs`.
+ */
+export const reviews = mysqlTable(
+  "reviews",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    revisionId: int("revision_id").notNull().references(() => revisions.id),
+    projectId: int("project_id").notNull().references(() => projects.id),
+    message: varchar("message", { length: 2000 }).notNull(),
+    /** The site run the mock-up lays out, mm (null for the pair modes, which have no track). */
+    runLengthMm: double("run_length_mm"),
+    endTreatment: mysqlEnum("end_treatment", END_TREATMENTS),
+    requestedById: int("requested_by_id").references(() => users.id),
+    createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
+  },
+  (t) => [index("reviews_revision").on(t.revisionId), index("reviews_project").on(t.projectId)],
+);
+
+/** The thread on a review. `atMm` pins a comment to a place along the run (a pair: the driver's turn in degrees). */
+export const reviewComments = mysqlTable(
+  "review_comments",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    reviewId: int("review_id").notNull().references(() => reviews.id),
+    authorId: int("author_id").notNull().references(() => users.id),
+    text: varchar("text", { length: 4000 }).notNull(),
+    at: double("at"),
+    createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
+  },
+  (t) => [index("review_comments_review").on(t.reviewId, t.createdAt)],
+);
+
+export const REVIEW_DECISIONS = ["approve", "request-changes"] as const;
+export type ReviewDecision = (typeof REVIEW_DECISIONS)[number];
+
+/**
+ * The client's decision on a review, one row per review (unique), never changed: a database
+ * trigger (drizzle/0003_reviews_sign_offs.sql) refuses UPDATE and DELETE. The spec hash is the one
+ * recomputed on the server from the stored spec when the client signed.
+ */
+export const signOffs = mysqlTable(
+  "sign_offs",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    reviewId: int("review_id").notNull().references(() => reviews.id),
+    revisionId: int("revision_id").notNull().references(() => revisions.id),
+    specHash: char("spec_hash", { length: 64 }).notNull(),
+    engineVersion: varchar("engine_version", { length: 32 }).notNull(),
+    decision: mysqlEnum("decision", REVIEW_DECISIONS).notNull(),
+    typedName: varchar("typed_name", { length: 160 }).notNull(),
+    userId: int("user_id").notNull().references(() => users.id),
+    /** The comment that came with the decision (required when changes are requested). */
+    commentId: int("comment_id").references(() => reviewComments.id),
+    signedAt: timestamp("signed_at", { fsp: 3 }).notNull().defaultNow(),
+    address: varchar("address", { length: 64 }).notNull(),
+    userAgent: varchar("user_agent", { length: 500 }).notNull(),
+  },
+  (t) => [uniqueIndex("sign_offs_review").on(t.reviewId), index("sign_offs_revision").on(t.revisionId, t.decision)],
+);
+
+export const DEPOSIT_STATUSES = ["on-approval", "due", "paid"] as const;
+export type DepositStatus = (typeof DEPOSIT_STATUSES)[number];
+
+/** A deposit asked for on a review: due once the client approves, paid when the payment service says so. */
+export const deposits = mysqlTable(
+  "deposits",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    reviewId: int("review_id").notNull().references(() => reviews.id),
+    projectId: int("project_id").notNull().references(() => projects.id),
+    /** In the currency's minor unit (pence, cents). */
+    amountMinor: int("amount_minor").notNull(),
+    currency: char("currency", { length: 3 }).notNull(),
+    status: mysqlEnum("status", DEPOSIT_STATUSES).notNull().default("on-approval"),
+    checkoutSessionId: varchar("checkout_session_id", { length: 255 }),
+    paidAt: timestamp("paid_at", { fsp: 3 }),
+    createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
+    updatedAt: timestamp("updated_at", { fsp: 3 }).notNull().defaultNow().onUpdateNow(),
+  },
+  (t) => [uniqueIndex("deposits_review").on(t.reviewId), index("deposits_project").on(t.projectId)],
+);
+
+/** Payment-service events already acted on, by their id, so a replayed event changes nothing. */
+export const paymentEvents = mysqlTable("payment_events", {
+  id: int("id").autoincrement().primaryKey(),
+  eventId: varchar("event_id", { length: 255 }).notNull().unique(),
+  type: varchar("type", { length: 100 }).notNull(),
+  depositId: int("deposit_id").references(() => deposits.id),
+  receivedAt: timestamp("received_at", { fsp: 3 }).notNull().defaultNow(),
+});
+
 export const usersRelations = relations(users, ({ one, many }) => ({
   organisation: one(organisations, { fields: [users.organisationId], references: [organisations.id] }),
   memberships: many(projectMembers),
@@ -244,6 +339,10 @@ export const revisionsRelations = relations(revisions, ({ one }) => ({
   design: one(designs, { fields: [revisions.designId], references: [designs.id] }),
 }));
 
+export type Review = typeof reviews.$inferSelect;
+export type ReviewComment = typeof reviewComments.$inferSelect;
+export type SignOff = typeof signOffs.$inferSelect;
+export type Deposit = typeof deposits.$inferSelect;
 export type User = typeof users.$inferSelect;
 export type Material = typeof materials.$inferSelect;
 export type StockSheet = typeof stockSheets.$inferSelect;
