@@ -5,6 +5,7 @@ import "next-auth/jwt";
 import NextAuth, { CredentialsSignin, type DefaultSession } from "next-auth";
 import Credentials from "next-auth/providers/credentials";
 import { authConfig } from "./auth.config";
+import { clientAddress } from "./lib/server/request";
 import { checkCredentials } from "./lib/server/sign-in";
 import { signInSchema } from "./lib/validation/auth";
 
@@ -35,8 +36,3 @@ export const { handlers, auth, signIn, signOut } = NextAuth({
     }),
   ],
 });
-
-function clientAddress(request: Request | undefined): string {
-  const forwarded = request?.headers.get("x-forwarded-for")?.split(",")[0]?.trim();
-  return (forwarded || request?.headers.get("x-real-ip") || "unknown").slice(0, 64);
-}

@@ -221,6 +221,7 @@ export const cutPlans = mysqlTable(
 );
 
 export const END_TREATMENTS = ["flat", "half", "scale"] as const;
+export type EndTreatment = (typeof END_TREATMENTS)[number];
 
 /**
  * A request for the client's review of one saved revision: the fabricator's message and the run the

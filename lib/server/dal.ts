@@ -115,3 +115,23 @@ export async function requireCutPlanAccess(revisionId: number) {
   if (!access.canManage) throw new AppError("forbidden", "Cut plans and cut files are for the shop: the project's fabricator or an admin.");
   return access;
 }
+
+/** Access to a review goes through its project: any member (and an admin) may read it and comment; 404 for the rest. */
+export async function requireReviewAccess(reviewId: number) {
+  await requireUser();
+  const { findReview } = await import("@/db/queries/reviews");
+  const review = await findReview(reviewId);
+  if (!review) throw new AppError("not_found", "No such review.");
+  const access = await requireProjectAccess(review.projectId).catch((e) => {
+    if (e instanceof AppError && e.kind === "not_found") throw new AppError("not_found", "No such review.");
+    throw e;
+  });
+  return { ...access, review };
+}
+
+/** Only the project's client members decide a review: the shop cannot sign for its client (403). */
+export async function requireReviewSigner(reviewId: number) {
+  const access = await requireReviewAccess(reviewId);
+  if (access.memberRole !== "client") throw new AppError("forbidden", "Only the project's client can approve or ask for changes; the shop cannot sign for them.");
+  return access;
+}

@@ -2,7 +2,7 @@
 // messages for bad input). Route handlers turn it into JSON; server actions into form state.
 import { z } from "zod";
 
-export type ErrorKind = "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "too_large" | "too_many" | "timeout" | "internal";
+export type ErrorKind = "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "unprocessable" | "method_not_allowed" | "too_large" | "too_many" | "timeout" | "internal";
 
 const STATUS: Record<ErrorKind, number> = {
   bad_request: 400,
@@ -10,6 +10,8 @@ const STATUS: Record<ErrorKind, number> = {
   forbidden: 403,
   not_found: 404,
   conflict: 409,
+  unprocessable: 422,
+  method_not_allowed: 405,
   too_large: 413,
   too_many: 429,
   timeout: 408,
@@ -22,6 +24,8 @@ const DEFAULT_MESSAGE: Record<ErrorKind, string> = {
   forbidden: "Your role does not allow this.",
   not_found: "Not found.",
   conflict: "That conflicts with what is already there.",
+  unprocessable: "The request is understood but cannot be carried out as it stands.",
+  method_not_allowed: "That cannot be done to this record.",
   too_large: "The request is too large.",
   too_many: "Too many requests; please wait and try again.",
   timeout: "The work took too long and was stopped.",

@@ -16,8 +16,17 @@ function getTransport() {
   return transport;
 }
 
-/** Sends a plain-text message. A mail failure is logged and does not undo the change that caused it. */
-export async function sendMail(message: { to: string; subject: string; text: string }): Promise<boolean> {
+export interface MailMessage {
+  to: string;
+  subject: string;
+  text: string;
+  /** An HTML alternative to the text; images in it are attachments referred to by `cid:`. */
+  html?: string;
+  attachments?: { filename: string; content: Buffer; contentType: string; cid?: string }[];
+}
+
+/** Sends a message. A mail failure is logged and does not undo the change that caused it. */
+export async function sendMail(message: MailMessage): Promise<boolean> {
   try {
     await getTransport().sendMail({ from: process.env.MAIL_FROM ?? "Axlewright <no-reply@example.test>", ...message });
     return true;
