@@ -3,7 +3,7 @@
 import { demoSettings } from "./lib/env.mjs";
 import {
   buildApp, createAppDatabase, readJson, debian, ensureDebianPackages, ensureNodeModules, fail, log, onInterrupt,
-  startApp, startMailSink, startMariaDb, tsx, waitForStopped,
+  startApp, startMailSink, startMariaDb, startPaymentService, tsx, waitForStopped,
 } from "./lib/services.mjs";
 
 async function main() {
@@ -20,6 +20,7 @@ async function main() {
   tsx("scripts/db/migrate.ts", s.env);
   tsx("scripts/db/seed.ts", s.env);
   await startMailSink(s.env);
+  await startPaymentService(s.env);
   buildApp(s.env, ".next");
   await startApp(s.env, s.appPort);
 

@@ -5,7 +5,7 @@ import path from "node:path";
 import { testSettings } from "./lib/env.mjs";
 import {
   buildApp, createAppDatabase, debian, ensureDebianPackages, ensureNodeModules, log, onInterrupt, root, run,
-  startApp, startMailSink, startMariaDb, tsx, waitForStopped,
+  startApp, startMailSink, startMariaDb, startPaymentService, tsx, waitForStopped,
 } from "./lib/services.mjs";
 
 const vitest = path.join(root, "node_modules/.bin/vitest");
@@ -31,6 +31,7 @@ async function main() {
   tsx("scripts/db/migrate.ts", env);
   tsx("scripts/db/seed.ts", env);
   await startMailSink(env);
+  await startPaymentService(env);
 
   if (!skipChecks) {
     log("type check (tsc --noEmit)…");

@@ -29,7 +29,7 @@ export interface StoredPlanView {
   id: number;
   createdAt: string;
   createdBy: string | null;
-  summary: { sheets: number; utilisation: number; perSheet: number[]; copies: number; material: string; sheet: string; machine: string; warnings: string[] };
+  summary: { sheets: number; utilisation: number; perSheet: number[]; copies: number; material: string; sheet: string; machine: string; warnings: string[]; purpose?: "review" | "production"; unapprovedReason?: string | null };
   files: string[];
 }
 
@@ -40,6 +40,8 @@ interface Props {
   library: PlannerLibrary;
   initialForm: PlanForm;
   stored: StoredPlanView | null;
+  /** The client has approved this revision: plans are for production. Otherwise the shop chooses, and production needs a reason. */
+  approved: boolean;
 }
 
 const pct = (v: number) => `${(v * 100).toFixed(1)} %`;
@@ -67,7 +69,7 @@ function sheetParts(preview: PartsPreview, placements: SheetNestResult["sheets"]
   });
 }
 
-export function CutPlanner({ revision, designName, projectName, library, initialForm, stored }: Props) {
+export function CutPlanner({ revision, designName, projectName, library, initialForm, stored, approved }: Props) {
   const router = useRouter();
   const [form, setForm] = useState<PlanForm>(initialForm);
   const [seconds, setSeconds] = useState("15");
@@ -103,13 +105,13 @@ export function CutPlanner({ revision, designName, projectName, library, initial
   const [nestedKey, setNestedKey] = useState<string | null>(null);
   const stale = nest !== null && nestedKey !== nestSettingsKey;
 
-  async function saveNest() {
+  async function saveNest(intent: { purpose: "review" | "production"; reason?: string }) {
     if (!nest) return;
     setSave({ state: "saving" });
     const response = await fetch(`/api/revisions/${revision.id}/cut-plans`, {
       method: "POST",
       headers: { "content-type": "application/json" },
-      body: JSON.stringify({ ...choice, nest: nest.nest }),
+      body: JSON.stringify({ ...choice, nest: nest.nest, ...intent }),
     });
     const body = await response.json().catch(() => ({}));
     if (!response.ok) {
@@ -246,11 +248,7 @@ export function CutPlanner({ revision, designName, projectName, library, initial
                   </figcaption>
                 </figure>
               ))}
-              <div className="flex items-center gap-3">
-                <Button type="button" onClick={saveNest} disabled={unplaced.length > 0 || stale || save.state === "saving"}>
-                  {save.state === "saving" ? "Checking and storing…" : "Store as this revision's cut plan"}
-                </Button>
-              </div>
+              <StoreButtons approved={approved} revisionNumber={revision.number} disabled={unplaced.length > 0 || stale || save.state === "saving"} saving={save.state === "saving"} onStore={saveNest} />
               {save.message ? (
                 <Notice tone={save.state === "failed" ? "problem" : "done"} testId="save-message">
                   {save.message}
@@ -262,6 +260,50 @@ export function CutPlanner({ revision, designName, projectName, library, initial
 
         <StoredPlan stored={stored} designName={designName} revisionNumber={revision.number} />
       </div>
+    </div>
+  );
+}
+
+/**
+ * Storing the plan. With the client's approval it is for production. Without it the shop stores it
+ * for review (files marked NOT APPROVED), or for production after confirming with a reason, which
+ * the server logs.
+ */
+function StoreButtons({ approved, revisionNumber, disabled, saving, onStore }: { approved: boolean; revisionNumber: number; disabled: boolean; saving: boolean; onStore: (intent: { purpose: "review" | "production"; reason?: string }) => void }) {
+  const [asking, setAsking] = useState(false);
+  const [reason, setReason] = useState("");
+  if (approved)
+    return (
+      <div className="flex items-center gap-3">
+        <Button type="button" onClick={() => onStore({ purpose: "production" })} disabled={disabled}>
+          {saving ? "Checking and storing…" : "Store as this revision's cut plan"}
+        </Button>
+      </div>
+    );
+  return (
+    <div className="flex flex-col gap-2">
+      <div className="flex flex-wrap items-center gap-3">
+        <Button type="button" onClick={() => onStore({ purpose: "review" })} disabled={disabled}>
+          {saving ? "Checking and storing…" : "Store as this revision's cut plan"}
+        </Button>
+        <Button type="button" variant="caution" onClick={() => setAsking((a) => !a)} disabled={disabled} aria-expanded={asking}>
+          Store for production without approval…
+        </Button>
+      </div>
+      <p className="text-xs text-ink-soft">R{revisionNumber} is not approved by the client: a stored plan is for review, and its files say NOT APPROVED — FOR REVIEW ONLY.</p>
+      {asking ? (
+        <div className="flex flex-col gap-2 rounded-plate border border-caution bg-caution-soft p-3" role="group" aria-label="Store for production without approval">
+          <label htmlFor="unapproved-reason" className="text-sm font-medium text-caution">
+            Why does this go to production before the client approves it? (logged)
+          </label>
+          <textarea id="unapproved-reason" rows={2} maxLength={500} value={reason} onChange={(e) => setReason(e.target.value)} className="w-full rounded-plate border border-ink-line bg-white/80 px-2.5 py-1.5 text-sm" />
+          <div>
+            <Button type="button" variant="caution" disabled={disabled || reason.trim() === ""} onClick={() => onStore({ purpose: "production", reason: reason.trim() })}>
+              Confirm: store for production
+            </Button>
+          </div>
+        </div>
+      ) : null}
     </div>
   );
 }
@@ -281,6 +323,7 @@ function StoredPlan({ stored, designName, revisionNumber }: { stored: StoredPlan
     <Panel title="Cut files">
       <p className="mb-2 text-sm" data-testid="stored-plan">
         Cut plan {stored.id}, stored {new Date(stored.createdAt).toLocaleString()} by {stored.createdBy ?? "—"}: {s.copies} parts on {s.sheets} × {s.sheet}, {pct(s.utilisation)} used; {s.machine}.
+        {s.purpose ? <> Stored for {s.purpose}{s.unapprovedReason ? ` without the client's approval (reason: ${s.unapprovedReason})` : ""}.</> : null}
       </p>
       <a href={`/api/cut-plans/${stored.id}/files/job.zip`} className="inline-block rounded-plate border border-ink bg-ink px-3 py-1.5 text-sm font-medium text-paper" data-testid="download-zip" download>
         Download everything (ZIP)

@@ -163,3 +163,14 @@ export async function revisionByNumber(designId: number, number: number) {
   const [row] = await db.select().from(revisions).where(and(eq(revisions.designId, designId), eq(revisions.number, number))).limit(1);
   return row ?? null;
 }
+
+/** Every saved revision in a project, newest design change first, newest revision first within a design. */
+export async function listProjectRevisions(projectId: number): Promise<{ id: number; number: number; designId: number; designName: string; mode: DesignMode; createdAt: string }[]> {
+  const rows = await db
+    .select({ id: revisions.id, number: revisions.number, designId: designs.id, designName: designs.name, mode: designs.mode, createdAt: revisions.createdAt })
+    .from(revisions)
+    .innerJoin(designs, eq(designs.id, revisions.designId))
+    .where(eq(designs.projectId, projectId))
+    .orderBy(desc(designs.updatedAt), desc(designs.id), desc(revisions.number));
+  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
+}

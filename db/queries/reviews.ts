@@ -22,6 +22,7 @@ import {
   type MemberRole,
   type ReviewDecision,
 } from "@/db/schema";
+import { approvalReference, type ApprovalStamp } from "@/lib/review/reference";
 import { audit } from "@/lib/server/audit";
 import type { CurrentUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
@@ -342,4 +343,11 @@ export async function insertSignOff(actor: CurrentUser, review: ReviewRow, input
 export async function projectDeposit(projectId: number): Promise<DepositRow | null> {
   const [row] = await db.select().from(deposits).where(eq(deposits.projectId, projectId)).orderBy(desc(deposits.id)).limit(1);
   return row ? toDeposit(row) : null;
+}
+
+/** The approval stamp every later file of a revision carries, or null: the files say NOT APPROVED. */
+export async function approvalStamp(revision: { id: number; number: number }): Promise<ApprovalStamp | null> {
+  const s = await approvalOf(revision.id);
+  if (!s) return null;
+  return { reference: approvalReference(s), revision: revision.number, typedName: s.typedName, organisation: s.organisation, signedAt: s.signedAt };
 }

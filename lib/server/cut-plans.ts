@@ -5,6 +5,7 @@ import "server-only";
 // the stored plan, so the app keeps no files of its own.
 import { findCutPlan, insertCutPlan, type CutPlanRow } from "@/db/queries/cut-plans";
 import { getProjectSummary } from "@/db/queries/projects";
+import { approvalOf, approvalStamp } from "@/db/queries/reviews";
 import { getShopRows } from "@/db/queries/shop";
 import type { Revision } from "@/db/schema";
 import { buildCutParts, isCutError, kerfParts, nestItemsFor, slug, type CutPlanResult } from "@/lib/cut";
@@ -13,6 +14,7 @@ import { loadHersheyFont } from "@/lib/cut/labels/font-file";
 import type { JobInput } from "@/lib/cut/export/job";
 import { composeSettings, type PlanChoice } from "@/lib/cut-plan/compose";
 import { checkNest } from "@/lib/cut-plan/verify-nest";
+import { approvalReference } from "@/lib/review/reference";
 import type { SheetNestResult } from "@/lib/nest/types";
 import { isEngineError, solve, type SolveResult } from "@/lib/track";
 import type { CurrentUser } from "./dal";
@@ -65,6 +67,11 @@ export interface CutPlanSummary {
   machine: string;
   seconds: number;
   warnings: string[];
+  /** What the plan was stored for, and the approval it was stored under (null: none yet). */
+  purpose?: "review" | "production";
+  approvalReference?: string | null;
+  /** The shop's reason for storing a production plan of a revision the client has not approved. */
+  unapprovedReason?: string | null;
 }
 
 export async function storeCutPlan(
@@ -72,7 +79,16 @@ export async function storeCutPlan(
   target: { revision: Revision; projectId: number },
   choice: PlanChoice,
   nest: Pick<SheetNestResult, "sheets" | "unplaced" | "seconds" | "cancelled">,
+  intent: { purpose?: "review" | "production"; reason?: string } = {},
 ): Promise<{ id: number; summary: CutPlanSummary }> {
+  // The gate: a plan for production of a revision the client has not approved needs a reason.
+  const approval = await approvalOf(target.revision.id);
+  const purpose = intent.purpose ?? (approval ? "production" : "review");
+  const reason = intent.reason?.trim() || null;
+  if (purpose === "production" && !approval && !reason)
+    throw new AppError("unprocessable", `R${target.revision.number} has no client approval. To store this cut plan for production anyway, give your reason: it is logged, and the files stay marked NOT APPROVED.`, {
+      reason: ["Say why this plan goes to production before the client's approval."],
+    });
   const { library, settings } = await composeFromLibrary(choice, target.projectId);
   const built = buildPlanParts(target.revision, settings, { labels: false });
   const s = built.plan.settings;
@@ -100,6 +116,9 @@ export async function storeCutPlan(
     machine: library.machine.name,
     seconds: nest.seconds,
     warnings: built.plan.warnings.filter((w) => w.code !== "no-font").map((w) => w.message),
+    purpose,
+    approvalReference: approval ? approvalReference(approval) : null,
+    unapprovedReason: !approval && purpose === "production" ? reason : null,
   };
   const stored = { sheets: sheets.map((sh, index) => ({ index, utilisation: perSheet[index], placements: sh.placements.map((p) => ({ ...p, sheet: index })) })), unplaced: [], seconds: nest.seconds, cancelled: nest.cancelled };
   const id = await insertCutPlan(actor, { revisionId: target.revision.id, projectId: target.projectId }, {
@@ -121,7 +140,10 @@ export async function jobForPlan(plan: CutPlanRow, revision: Revision, designNam
   const composed = (plan.settings as { composed?: unknown }).composed;
   const built = buildPlanParts(revision, composed);
   const { paths } = await kerfParts(built.plan.parts, built.plan.settings);
+  // The approval is read now, not when the plan was stored: a revision approved later gets its reference on every file.
   return {
+    approval: await approvalStamp(revision),
+    unapprovedReason: (plan.summary as Partial<CutPlanSummary>).unapprovedReason ?? null,
     baseName: slug(`${built.plan.settings.project} ${designName} r${revision.number}`),
     design: designName,
     revision: revision.number,

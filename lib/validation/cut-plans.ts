@@ -18,6 +18,16 @@ export const nestSchema = z.strictObject({
   utilisation: z.number().finite().optional(),
 });
 
-export const newCutPlanSchema = planChoiceSchema.extend({ nest: nestSchema });
+export const CUT_PLAN_PURPOSES = ["review", "production"] as const;
+
+export const newCutPlanSchema = planChoiceSchema.extend({
+  nest: nestSchema,
+  /**
+   * What the plan is for. Default: production once the client has approved the revision, review
+   * until then. Production on a revision without an approval needs the shop's reason (logged).
+   */
+  purpose: z.enum(CUT_PLAN_PURPOSES, { error: `The purpose must be "review" or "production".` }).optional(),
+  reason: z.string({ error: "The reason must be text." }).trim().max(500, { error: "A reason has at most 500 characters." }).optional(),
+});
 
 export const CUT_PLAN_BODY_LIMIT = 512 * 1024;

@@ -9,17 +9,65 @@ import demo from "../../db/demo-data.json";
 import library from "../../db/shop-library.json";
 import * as schema from "../../db/schema";
 import { summarise } from "../../lib/revision-summary";
+import { toMinor, type Currency } from "../../lib/money/currency";
 import { hashPassword } from "../../lib/server/passwords";
 import { ENGINE_VERSION, parseSpec, solve, specHash } from "../../lib/track";
 
 const connection = await mysql.createConnection({ uri: process.env.DATABASE_URL! });
 const db = drizzle({ client: connection, schema, mode: "default" });
-const { organisations, users, projects, projectMembers, designs, revisions, materials, stockSheets, machines } = schema;
+const { organisations, users, projects, projectMembers, designs, revisions, materials, stockSheets, machines, reviews, reviewComments, signOffs, deposits, paymentEvents } = schema;
 type SourceKind = (typeof schema.SOURCE_KINDS)[number];
 let added = 0;
 
 async function idOf<T extends { id: number }>(rows: Promise<T[]>): Promise<number | undefined> {
   return (await rows)[0]?.id;
+}
+
+interface DemoReview {
+  sentBy: string;
+  sentAt: string;
+  message: string;
+  runLength: number;
+  endTreatment: schema.EndTreatment;
+  deposit?: { amount: number; currency: Currency; paidAt?: string };
+  comments: { by: string; at: number | null; text: string; createdAt: string }[];
+  decision?: { by: string; decision: schema.ReviewDecision; typedName: string; signedAt: string; address: string; userAgent: string };
+}
+
+/**
+ * A review of the design's first revision, as the app would have written it: the request, the
+ * thread, and (for the approved project) the client's sign-off, the deposit and its payment. Only
+ * when the revision has no review yet, so a re-run adds nothing.
+ */
+async function seedReview(projectId: number, designId: number, r: DemoReview, userIds: Map<string, number>) {
+  const [revision] = await db.select().from(revisions).where(and(eq(revisions.designId, designId), eq(revisions.number, 1))).limit(1);
+  if (!revision || (await idOf(db.select({ id: reviews.id }).from(reviews).where(eq(reviews.revisionId, revision.id))))) return;
+  await db.transaction(async (tx) => {
+    const [res] = await tx.insert(reviews).values({
+      revisionId: revision.id, projectId, message: r.message, runLengthMm: r.runLength, endTreatment: r.endTreatment, requestedById: userIds.get(r.sentBy), createdAt: new Date(r.sentAt),
+    });
+    const reviewId = res.insertId;
+    for (const c of r.comments) await tx.insert(reviewComments).values({ reviewId, authorId: userIds.get(c.by)!, text: c.text, at: c.at, createdAt: new Date(c.createdAt) });
+    let depositId: number | undefined;
+    if (r.deposit) {
+      const paid = r.decision?.decision === "approve" && r.deposit.paidAt;
+      const [dep] = await tx.insert(deposits).values({
+        reviewId, projectId, amountMinor: toMinor(r.deposit.amount, r.deposit.currency)!, currency: r.deposit.currency,
+        status: paid ? "paid" : r.decision?.decision === "approve" ? "due" : "on-approval",
+        checkoutSessionId: paid ? `cs_demo_seed_${reviewId}` : null, paidAt: paid ? new Date(r.deposit.paidAt!) : null,
+      });
+      depositId = dep.insertId;
+      if (paid) await tx.insert(paymentEvents).values({ eventId: `evt_demo_seed_${reviewId}`, type: "checkout.session.completed", depositId, receivedAt: new Date(r.deposit.paidAt!) });
+    }
+    if (r.decision) {
+      // The hash is recomputed from the stored spec, as the decision route does.
+      await tx.insert(signOffs).values({
+        reviewId, revisionId: revision.id, specHash: specHash(revision.spec), engineVersion: ENGINE_VERSION, decision: r.decision.decision, typedName: r.decision.typedName,
+        userId: userIds.get(r.decision.by)!, signedAt: new Date(r.decision.signedAt), address: r.decision.address, userAgent: r.decision.userAgent,
+      });
+    }
+  });
+  added++;
 }
 
 try {
@@ -93,17 +141,21 @@ try {
       }
     }
     for (const d of p.designs ?? []) {
-      if (await idOf(db.select({ id: designs.id }).from(designs).where(and(eq(designs.projectId, id), eq(designs.name, d.name))))) continue;
-      // The same path as saving in the studio: the engine's schema, its solve, its canonical hash.
-      const spec = parseSpec(d.spec);
-      const [res] = await db.insert(designs).values({
-        projectId: id, name: d.name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, createdById: fabricatorId,
-      });
-      await db.insert(revisions).values({
-        designId: res.insertId, number: 1, spec: spec as unknown as Record<string, unknown>, specHash: specHash(spec),
-        engineVersion: ENGINE_VERSION, summary: summarise(solve(spec)) as unknown as Record<string, unknown>, note: d.note, createdById: fabricatorId,
-      });
-      added += 2;
+      let designId = await idOf(db.select({ id: designs.id }).from(designs).where(and(eq(designs.projectId, id), eq(designs.name, d.name))));
+      if (designId === undefined) {
+        // The same path as saving in the studio: the engine's schema, its solve, its canonical hash.
+        const spec = parseSpec(d.spec);
+        const [res] = await db.insert(designs).values({
+          projectId: id, name: d.name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, createdById: fabricatorId,
+        });
+        designId = res.insertId;
+        await db.insert(revisions).values({
+          designId, number: 1, spec: spec as unknown as Record<string, unknown>, specHash: specHash(spec),
+          engineVersion: ENGINE_VERSION, summary: summarise(solve(spec)) as unknown as Record<string, unknown>, note: d.note, createdById: fabricatorId,
+        });
+        added += 2;
+      }
+      if ("review" in d && d.review) await seedReview(id, designId, d.review as DemoReview, userIds);
     }
   }
   console.log(`[axlewright] demo data seeded (${added} new rows)`);

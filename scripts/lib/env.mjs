@@ -21,9 +21,10 @@ function readEnvFile() {
 function persistentSecrets() {
   const saved = readEnvFile();
   let changed = false;
-  for (const key of ["AUTH_SECRET", "DB_PASSWORD"]) {
+  const make = { AUTH_SECRET: () => randomBytes(32).toString("base64url"), DB_PASSWORD: () => randomBytes(32).toString("base64url"), ...paymentSecrets() };
+  for (const [key, value] of Object.entries(make)) {
     if (!saved[key]) {
-      saved[key] = randomBytes(32).toString("base64url");
+      saved[key] = typeof value === "function" ? value() : value;
       changed = true;
     }
   }
@@ -34,9 +35,14 @@ function persistentSecrets() {
   return saved;
 }
 
+/** Made-up keys for the local payment service: a secret API key and the webhook endpoint's signing secret. */
+function paymentSecrets() {
+  return { STRIPE_SECRET_KEY: `sk_test_${randomBytes(24).toString("hex")}`, STRIPE_WEBHOOK_SECRET: `whsec_${randomBytes(24).toString("hex")}` };
+}
+
 const num = (value, fallback) => (value ? Number(value) : fallback);
 
-function appEnv({ dbPort, database, password, appPort, smtpPort, mailHttpPort, authSecret, dataDir }) {
+function appEnv({ dbPort, database, password, appPort, smtpPort, mailHttpPort, paymentPort, payment, authSecret, dataDir }) {
   return {
     dataDir,
     dbPort,
@@ -55,6 +61,15 @@ function appEnv({ dbPort, database, password, appPort, smtpPort, mailHttpPort, a
       SMTP_PORT: String(smtpPort),
       MAIL_SINK_HTTP_PORT: String(mailHttpPort),
       MAIL_FROM: "Axlewright <no-reply@example.test>",
+      // The stripe SDK talks to the local payment service here; in production these point the same
+      // SDK at the real service (STRIPE_API_* unset) with the shop's own keys.
+      STRIPE_SECRET_KEY: payment.STRIPE_SECRET_KEY,
+      STRIPE_WEBHOOK_SECRET: payment.STRIPE_WEBHOOK_SECRET,
+      STRIPE_API_HOST: "127.0.0.1",
+      STRIPE_API_PORT: String(paymentPort),
+      STRIPE_API_PROTOCOL: "http",
+      PAYMENT_SERVICE_PORT: String(paymentPort),
+      PAYMENT_WEBHOOK_URL: `http://127.0.0.1:${appPort}/api/payments/webhook`,
       PORT: String(appPort),
       NEXT_TELEMETRY_DISABLED: "1",
     },
@@ -72,6 +87,8 @@ export function demoSettings() {
     appPort: num(e.PORT, 3000),
     smtpPort: num(e.SMTP_PORT, 2525),
     mailHttpPort: num(e.MAIL_SINK_HTTP_PORT, 2526),
+    paymentPort: num(e.PAYMENT_SERVICE_PORT, 2527),
+    payment: { STRIPE_SECRET_KEY: e.STRIPE_SECRET_KEY || saved.STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET: e.STRIPE_WEBHOOK_SECRET || saved.STRIPE_WEBHOOK_SECRET },
     authSecret: e.AUTH_SECRET || saved.AUTH_SECRET,
   });
 }
@@ -87,6 +104,8 @@ export function testSettings() {
     appPort: num(e.AXLEWRIGHT_TEST_PORT, 3101),
     smtpPort: num(e.AXLEWRIGHT_TEST_SMTP_PORT, 2535),
     mailHttpPort: num(e.AXLEWRIGHT_TEST_MAIL_HTTP_PORT, 2536),
+    paymentPort: num(e.AXLEWRIGHT_TEST_PAYMENT_PORT, 2537),
+    payment: paymentSecrets(),
     authSecret: randomBytes(32).toString("base64url"),
   });
 }

@@ -246,6 +246,18 @@ export async function startMailSink(env) {
   log(`mail sink: SMTP 127.0.0.1:${smtpPort}, messages at http://127.0.0.1:${httpPort}/messages`);
 }
 
+/** The local payment service (scripts/fakes/payment-service.mjs), which the stripe SDK is pointed at. */
+export async function startPaymentService(env) {
+  const port = Number(env.PAYMENT_SERVICE_PORT);
+  if (!(await portIsFree(port))) fail(`port ${port} on 127.0.0.1 is taken (the local payment service wants it).`);
+  startProcess("payment service", process.execPath, [path.join(root, "scripts/fakes/payment-service.mjs")], {
+    env,
+    onUnexpectedExit: (code) => fail(`the local payment service exited (code ${code})`),
+  });
+  await waitFor("the local payment service", () => canConnect(port));
+  log(`payment service (local fake): http://127.0.0.1:${port}`);
+}
+
 function newestMtime(entries) {
   let newest = 0;
   const visit = (p) => {

@@ -10,21 +10,16 @@ import * as planFilesRoute from "@/app/api/cut-plans/[id]/files/[name]/route";
 import * as planListRoute from "@/app/api/cut-plans/[id]/files/route";
 import * as cutPlansRoute from "@/app/api/revisions/[id]/cut-plans/route";
 import { db, pool } from "@/db";
-import { cutPlans, machines, materials, stockSheets, designs } from "@/db/schema";
+import { cutPlans, designs, stockSheets } from "@/db/schema";
 import { saveRevision } from "@/db/queries/designs";
-import { buildCutParts, nestItemsFor, shelfLayout } from "@/lib/cut";
-import { composeSettings, type PlanChoice } from "@/lib/cut-plan/compose";
-import { getShopRows } from "@/db/queries/shop";
-import { solve } from "@/lib/track";
+import type { PlanChoice } from "@/lib/cut-plan/compose";
+import { demoChoice, SQUARE, validNest } from "./support/cut-plan";
 import { actAs } from "./support/session";
 import { auditCount, makeProject, makeUser } from "./support/fixtures";
 
 vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
 vi.mock("next/cache", async () => (await import("./support/session")).mockCache);
 
-// The demo job (BRIEF.md): 400 mm square wheels on a 6.0 m run, 18 mm birch plywood on
-// 2440 × 1220 mm sheets, a 6 mm router.
-const SQUARE = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 } };
 const who = {} as Record<"fabricator" | "client" | "installer" | "outsider" | "admin", number>;
 let revisionId = 0;
 let projectId = 0;
@@ -33,22 +28,6 @@ let choice: PlanChoice;
 const json = (method: string, body?: unknown) =>
   new Request("http://test.local/api", { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
 const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
-
-async function idByName(table: typeof materials | typeof stockSheets | typeof machines, name: string) {
-  const [row] = await db.select({ id: table.id }).from(table).where(eq(table.name, name));
-  return row.id;
-}
-
-/** A nest that holds, made the way a browser would (here the plain shelf layout of lib/cut). */
-async function validNest(c: PlanChoice) {
-  const library = await getShopRows(c);
-  const settings = composeSettings(c, library, "Cut plan test");
-  const result = solve(SQUARE);
-  const plan = buildCutParts(SQUARE, result, settings);
-  const items = await nestItemsFor(plan.parts, plan.settings);
-  const s = plan.settings;
-  return { nest: shelfLayout({ items, sheet: { width: s.sheet.length, height: s.sheet.width }, margin: s.margin, spacing: s.spacing }), plan };
-}
 
 const planCount = async () => (await db.select({ n: count() }).from(cutPlans).where(eq(cutPlans.revisionId, revisionId)))[0].n;
 
@@ -64,12 +43,7 @@ beforeAll(async () => {
   const [d] = await db.insert(designs).values({ projectId, name: "Trike track", mode: "track-for-wheel", draft: SQUARE });
   const actor = { id: who.fabricator, role: "fabricator" as const, name: "f", email: "f@example.test", active: true };
   revisionId = (await saveRevision(actor as never, d.insertId, projectId, { spec: SQUARE, note: "" })).id;
-  choice = {
-    materialId: await idByName(materials, "Birch plywood 18 mm"),
-    stockSheetId: await idByName(stockSheets, "Birch plywood 18 mm, 2440 x 1220"),
-    machineId: await idByName(machines, "CNC router, 6 mm cutter"),
-    settings: { runLength: 6000, endTreatment: "flat", trackLines: 2, wheelCount: 2 },
-  };
+  choice = await demoChoice();
 });
 
 afterAll(async () => {

@@ -2,7 +2,7 @@
 
 import { Arrow, Group, Line, Text } from "react-konva";
 import { fmt, toScreen, type View } from "@/lib/studio/view-math";
-import type { Scene } from "./scene";
+import type { Scene } from "@/lib/studio/scene";
 import { INK } from "./palette";
 
 // Drafting-style dimension lines on the canvas: the period under the track, the centre distance

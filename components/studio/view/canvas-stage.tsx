@@ -16,7 +16,7 @@ import { CanvasGrid } from "./canvas-grid";
 import { CanvasReadout } from "./canvas-readout";
 import { AxleMark, HighlightMark, PosedBodies, drawnAxles, flat } from "./canvas-bodies";
 import { INK, monoFamily } from "./palette";
-import { sceneOf } from "./scene";
+import { sceneOf } from "@/lib/studio/scene";
 import { FrameMeter, publishProbe } from "./studio-probe";
 import { stepFrame } from "./use-rolling-clock";
 import { useViewTransform } from "./use-view-transform";

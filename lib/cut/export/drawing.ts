@@ -23,6 +23,8 @@ export interface Drawing {
   rings: Array<{ layer: LayerName; points: Pt[] }>;
   circles: Array<{ layer: LayerName; x: number; y: number; r: number }>;
   lines: Array<{ layer: LayerName; a: Pt; b: Pt }>;
+  /** Notes on the REFERENCE layer (the approval line), never cut: baseline start and cap height, in the output unit. */
+  texts: Array<{ layer: LayerName; x: number; y: number; height: number; text: string }>;
 }
 
 export interface PlacedPart {
@@ -40,7 +42,10 @@ const key = (p: readonly [number, number]) => `${Math.round(p[0] * 1000)},${Math
  * Draws placed parts. With `toolPaths` (kerf in the file) the cut rings are the tool-centre paths,
  * otherwise the nominal outlines. `frames` are sheet outlines (REFERENCE), in mm.
  */
-export function buildDrawing(placed: PlacedPart[], opts: { units: OutputUnits; toolPaths?: Map<string, ToolPath>; frames?: Box[] }): Drawing {
+/** Cap height of the REFERENCE notes, mm, and the gap between lines and above the drawing. */
+const NOTE_HEIGHT = 10;
+
+export function buildDrawing(placed: PlacedPart[], opts: { units: OutputUnits; toolPaths?: Map<string, ToolPath>; frames?: Box[]; notes?: string[] }): Drawing {
   const u = (v: number) => fromMm(v, opts.units);
   const U = (p: Pt): Pt => [u(p[0]), u(p[1])];
   const rings: Drawing["rings"] = [];
@@ -91,7 +96,18 @@ export function buildDrawing(placed: PlacedPart[], opts: { units: OutputUnits; t
     }
   }
   const b = all.length ? bounds(all) : { minX: 0, minY: 0, maxX: 0, maxY: 0 };
-  return { units: opts.units, width: u(Math.max(0, b.maxX)), height: u(Math.max(0, b.maxY)), rings, circles, lines };
+  // Notes sit above everything drawn, one line each, so they never touch a part.
+  const texts: Drawing["texts"] = [];
+  let top = Math.max(0, b.maxY);
+  for (const text of [...(opts.notes ?? [])].reverse()) {
+    const y = top + NOTE_HEIGHT;
+    texts.push({ layer: "REFERENCE", x: u(Math.max(0, b.minX)), y: u(y), height: u(NOTE_HEIGHT), text });
+    top = y + NOTE_HEIGHT;
+  }
+  texts.reverse();
+  // The notes' width, estimated at 0.6 cap heights a character (common practice for a monospace face).
+  const notesWidth = Math.max(0, ...texts.map((t) => t.x + 0.6 * t.height * t.text.length));
+  return { units: opts.units, width: Math.max(u(Math.max(0, b.maxX)), notesWidth), height: u(top), rings, circles, lines, texts };
 }
 
 /** Each part once, left to right along one row, `gap` mm apart, all above y = 0. */

@@ -1,7 +1,8 @@
 // DXF out with @tarikjabiri/dxf (AC1021, i.e. AutoCAD 2007): $INSUNITS 4 (mm) or 1 (in) in the
 // header (Autodesk DXF Reference, "$INSUNITS"), one LAYER table entry per layer, every ring a
 // closed LWPOLYLINE (group 70 flag 1), drill holes as CIRCLE, engraving as LINE entities so that
-// every polyline in the file is a closed contour (FAB.md §3.2: open paths read as slits).
+// every polyline in the file is a closed contour (FAB.md §3.2: open paths read as slits); notes (the
+// approval line) as TEXT on REFERENCE, which is never cut.
 import { DxfWriter, LWPolylineFlags, Units } from "@tarikjabiri/dxf";
 import { LAYERS, type Drawing, type LayerName } from "./drawing";
 
@@ -22,6 +23,7 @@ export function drawingToDxf(d: Drawing): string {
       { flags: LWPolylineFlags.Closed, layerName: r.layer },
     );
   for (const c of d.circles) dxf.addCircle({ x: c.x, y: c.y, z: 0 }, c.r, { layerName: c.layer });
+  for (const t of d.texts) dxf.addText({ x: t.x, y: t.y, z: 0 }, t.height, t.text, { layerName: t.layer });
   for (const l of d.lines) dxf.addLine({ x: l.a[0], y: l.a[1], z: 0 }, { x: l.b[0], y: l.b[1], z: 0 }, { layerName: l.layer });
   return dxf.stringify();
 }

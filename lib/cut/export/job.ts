@@ -2,6 +2,7 @@
 // a parts DXF and SVG (each part once, in a row), a DXF and SVG per nested sheet, the bill of
 // materials and the README. File names carry the output unit, as shops ask (FAB.md §3.1).
 import type { SheetNestResult } from "@/lib/nest/types";
+import { approvalLine, type ApprovalStamp } from "@/lib/review/reference";
 import type { SolveResult } from "@/lib/track";
 import type { ToolPath } from "../kerf";
 import type { CutPlanResult } from "../plan";
@@ -21,6 +22,10 @@ export interface JobInput {
   toolPaths: Map<string, ToolPath>;
   nest: SheetNestResult | null;
   nestNote?: string;
+  /** The client's approval of the revision; null or absent: the files are marked NOT APPROVED. */
+  approval?: ApprovalStamp | null;
+  /** Why the shop stored this plan for production without an approval, if it did. */
+  unapprovedReason?: string | null;
 }
 
 export interface JobFile {
@@ -54,9 +59,14 @@ export function jobTextFiles(j: JobInput): JobTextFiles {
   const toolPaths = s.kerfInFile ? j.toolPaths : undefined;
   const files: JobFile[] = [];
   const previews: JobTextFiles["previews"] = [];
-  const row = buildDrawing(partsRow(j.plan.parts, { gap: 20 + s.machine.kerf, toolPaths: j.toolPaths }), { units: u, toolPaths });
+  const stamp = j.approval ?? null;
+  const revisionNote = `${j.design ?? "design"}${j.revision !== undefined ? ` R${j.revision}` : ""}, spec ${j.result.specHash.slice(0, 12)}`;
+  // Every drawing carries the approval (or its absence) on REFERENCE, which is never cut.
+  const notes = [approvalLine(stamp, { ascii: true }), revisionNote];
+  const titled = (what: string) => `${s.project}: ${what} — ${approvalLine(stamp)}`;
+  const row = buildDrawing(partsRow(j.plan.parts, { gap: 20 + s.machine.kerf, toolPaths: j.toolPaths }), { units: u, toolPaths, notes });
   files.push({ name: `${base}-parts-${u}.dxf`, data: drawingToDxf(row) });
-  files.push({ name: `${base}-parts-${u}.svg`, data: drawingToSvg(row, { title: `${s.project}: parts` }) });
+  files.push({ name: `${base}-parts-${u}.svg`, data: drawingToSvg(row, { title: titled("parts") }) });
   previews.push({ name: `${base}-parts-preview.png`, svg: drawingToSvg(row, { preview: true }) });
   for (const sheet of j.nest?.sheets ?? []) {
     const n = sheet.index + 1;
@@ -64,9 +74,10 @@ export function jobTextFiles(j: JobInput): JobTextFiles {
       units: u,
       toolPaths,
       frames: [{ minX: 0, minY: 0, maxX: s.sheet.length, maxY: s.sheet.width }],
+      notes,
     });
     files.push({ name: `${base}-sheet-${n}-${u}.dxf`, data: drawingToDxf(d) });
-    files.push({ name: `${base}-sheet-${n}-${u}.svg`, data: drawingToSvg(d, { title: `${s.project}: sheet ${n}` }) });
+    files.push({ name: `${base}-sheet-${n}-${u}.svg`, data: drawingToSvg(d, { title: titled(`sheet ${n}`) }) });
     previews.push({ name: `${base}-sheet-${n}-preview.png`, svg: drawingToSvg(d, { preview: true }) });
   }
   files.push({ name: `${base}-bom.csv`, data: bomCsv(j.plan.parts, { material: s.material, thickness: s.sheet.thickness, units: u, nest: j.nest }) });
@@ -84,6 +95,8 @@ export function jobTextFiles(j: JobInput): JobTextFiles {
       nest: j.nest,
       files: names,
       nestNote: j.nestNote,
+      approval: stamp,
+      unapprovedReason: j.unapprovedReason ?? null,
     }),
   });
   return { files, previews };

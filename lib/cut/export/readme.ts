@@ -8,6 +8,7 @@ import type { RunPlan } from "../plan";
 import { insideRadius, type CutSettings } from "../settings";
 import type { CutWarning, Part } from "../types";
 import { fmtLen } from "../units";
+import { NOT_APPROVED, approvalLine, type ApprovalStamp } from "@/lib/review/reference";
 import { cautionsFor } from "./cautions";
 
 export interface ReadmeInput {
@@ -22,6 +23,8 @@ export interface ReadmeInput {
   files: string[];
   /** A note on how the nest was made (the nester, or the simple row layout). */
   nestNote?: string;
+  approval?: ApprovalStamp | null;
+  unapprovedReason?: string | null;
 }
 
 const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
@@ -33,6 +36,15 @@ export function jobReadme(j: ReadmeInput): string {
   const out: string[] = [];
   const title = `AXLEWRIGHT CUT JOB: ${s.project}`;
   out.push(title, "=".repeat(title.length), "");
+  if (j.approval) {
+    out.push(`Approval:    ${approvalLine(j.approval)}`);
+    out.push(`             signed ${j.approval.signedAt.replace("T", " ").slice(0, 19)} UTC; the reference is the spec hash's first 12 digits and the date`);
+  } else {
+    const banner = `*** ${NOT_APPROVED} ***`;
+    out.push(banner, "The client has not approved this revision. Do not cut production parts from these files.");
+    if (j.unapprovedReason) out.push(`Stored for production without approval; the shop's reason: ${j.unapprovedReason}`);
+  }
+  out.push("");
   out.push(`Design:      ${j.design ?? "(unnamed)"}; mode ${j.result.mode}, drawn in ${j.result.units}`);
   out.push(`Revision:    ${j.revision ?? "not stored (made from a spec file)"}`);
   out.push(`Spec hash:   ${j.result.specHash} (SHA-256 of the canonical spec)`);

@@ -39,6 +39,9 @@ export function drawingToSvg(d: Drawing, opts: { preview?: boolean; title?: stri
     for (const c of d.circles) if (c.layer === layer) body.push(`<circle cx="${f(c.x)}" cy="${f(H - c.y)}" r="${f(c.r)}"/>`);
     const segs = d.lines.filter((l) => l.layer === layer).map((l) => `M${P(l.a[0], l.a[1])}L${P(l.b[0], l.b[1])}`);
     if (segs.length) body.push(`<path d="${segs.join("")}"/>`);
+    for (const t of d.texts)
+      if (t.layer === layer)
+        body.push(`<text x="${f(t.x)}" y="${f(H - t.y)}" font-size="${f(t.height * 1.4)}" font-family="IBM Plex Mono, DejaVu Sans Mono, monospace" fill="${LAYER_COLOUR[layer]}" stroke="none">${escapeXml(t.text)}</text>`);
     out.push(
       `<g id="${layer}" fill="none" stroke="${LAYER_COLOUR[layer]}" stroke-width="${f(stroke)}" stroke-linejoin="round" stroke-linecap="round"${layer === "REFERENCE" && !opts.preview ? ' stroke-dasharray="5 5"' : ""}>`,
     );

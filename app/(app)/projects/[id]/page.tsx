@@ -6,7 +6,13 @@ import { MODE_LABELS } from "@/components/studio/spec-form/defaults";
 import { AddMemberForm, RemoveMemberButton } from "@/components/member-forms";
 import { Badge, Panel } from "@/components/ui/panel";
 import { Table } from "@/components/ui/table";
-import { listDesigns } from "@/db/queries/designs";
+import { ReviewList } from "@/components/review/review-list";
+import { depositText } from "@/components/review/review-status";
+import { SendReviewForm, type SendableRevision } from "@/components/review/send-review-form";
+import { latestCutPlan } from "@/db/queries/cut-plans";
+import { listDesigns, listProjectRevisions } from "@/db/queries/designs";
+import { clientMembers, listProjectReviews, projectDeposit } from "@/db/queries/reviews";
+import { reviewStatus, showsRun } from "@/lib/review/review-state";
 import { listMembers } from "@/db/queries/members";
 import { getProjectSummary } from "@/db/queries/projects";
 import { listAssignableUsers } from "@/db/queries/users";
@@ -15,21 +21,45 @@ import { AppError } from "@/lib/server/errors";
 
 export const metadata: Metadata = { title: "Project" };
 
-// What each later stage will put here; said plainly, with no sample data.
-const COMING = [
-  { title: "Client review", text: "The client watches the mock-up, comments, and signs off one frozen revision." },
-  { title: "Build log and assembly sheet", text: "Notes, site photos and the printable assembly sheet for the installer." },
-];
+// What a later stage will put here; said plainly, with no sample data.
+const COMING = [{ title: "Build log and assembly sheet", text: "Notes, site photos and the printable assembly sheet for the installer." }];
 
-export default async function ProjectPage({ params }: { params: Promise<{ id: string }> }) {
+/** What the send form offers: each saved revision, the run its mock-up would show, and why it cannot go now. */
+async function sendable(projectId: number, reviews: Awaited<ReturnType<typeof listProjectReviews>>): Promise<SendableRevision[]> {
+  const revisions = await listProjectRevisions(projectId);
+  return Promise.all(
+    revisions.map(async (r) => {
+      const mine = reviews.filter((x) => x.revisionId === r.id);
+      const blocked = mine.some((x) => x.decision?.decision === "approve") ? "approved already" : mine.some((x) => !x.decision) ? "waiting for the client" : null;
+      const plan = (await latestCutPlan(r.id))?.settings as { composed?: { runLength: number; endTreatment: "flat" | "half" | "scale" } } | undefined;
+      const earlier = reviews.find((x) => x.designId === r.designId && x.runLengthMm !== null);
+      const run = plan?.composed
+        ? { lengthMm: plan.composed.runLength, endTreatment: plan.composed.endTreatment }
+        : earlier
+          ? { lengthMm: earlier.runLengthMm!, endTreatment: earlier.endTreatment ?? "flat" }
+          : null;
+      return { id: r.id, label: `${r.designName} R${r.number}`, showsRun: showsRun(r.mode), run, blocked };
+    }),
+  );
+}
+
+export default async function ProjectPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ review?: string }> }) {
   await requirePageUser();
   const { id } = await params;
+  const { review: askedRevision } = await searchParams;
   const access = await requireProjectAccess(/^\d{1,10}$/.test(id) ? Number(id) : -1).catch((e) => {
     if (e instanceof AppError && e.kind === "not_found") notFound();
     throw e;
   });
-  const [project, members, designs] = await Promise.all([getProjectSummary(access.projectId), listMembers(access.projectId), listDesigns(access.projectId)]);
+  const [project, members, designs, reviews, deposit] = await Promise.all([
+    getProjectSummary(access.projectId),
+    listMembers(access.projectId),
+    listDesigns(access.projectId),
+    listProjectReviews(access.projectId),
+    projectDeposit(access.projectId),
+  ]);
   if (!project) notFound();
+  const [toSend, clients] = access.canManage ? await Promise.all([sendable(access.projectId, reviews), clientMembers(access.projectId)]) : [[], []];
   const memberIds = new Set(members.map((m) => m.userId));
   const people = access.canManage ? (await listAssignableUsers()).filter((u) => !memberIds.has(u.id)) : [];
 
@@ -48,6 +78,8 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
         <dd className="font-mono text-xs">{formatWhen(project.updatedAt)}</dd>
         <dt className="text-ink-soft">Your part</dt>
         <dd>{access.memberRole ?? "admin (not a member)"}</dd>
+        <dt className="text-ink-soft">Deposit</dt>
+        <dd data-testid="project-deposit">{depositText(deposit)}</dd>
       </dl>
 
       <Panel title="Members">
@@ -114,6 +146,20 @@ export default async function ProjectPage({ params }: { params: Promise<{ id: st
             ))}
           </Table>
         )}
+      </Panel>
+
+      <Panel title="Client review">
+        <div className="flex flex-col gap-4">
+          <ReviewList
+            reviews={reviews.map((r) => ({ id: r.id, projectId: r.projectId, designName: r.designName, revisionNumber: r.revisionNumber, createdAt: r.createdAt, requestedBy: r.requestedBy, status: reviewStatus(r), decision: r.decision, deposit: r.deposit }))}
+          />
+          {access.canManage ? (
+            <div id="send-review" className="border-t border-paper-edge pt-4">
+              <h3 className="mb-2 text-sm font-semibold">Send a revision for the client&apos;s review</h3>
+              <SendReviewForm revisions={toSend} clients={clients.map((c) => c.name)} initialRevisionId={askedRevision && /^\d{1,10}$/.test(askedRevision) ? Number(askedRevision) : undefined} />
+            </div>
+          ) : null}
+        </div>
       </Panel>
 
       <div className="grid gap-4 sm:grid-cols-2">

@@ -13,7 +13,7 @@ export const GET = route<{ id: string }>(async (_request, params) => {
 /** Stores a nest made in the browser as the revision's cut plan, once the server's own check holds. */
 export const POST = route<{ id: string }>(async (request, params) => {
   const access = await requireCutPlanAccess(idParam(params.id, "revision"));
-  const { nest, ...choice } = await jsonBody(request, newCutPlanSchema, CUT_PLAN_BODY_LIMIT);
-  const stored = await storeCutPlan(access.user, { revision: access.revision, projectId: access.projectId }, choice, nest);
+  const { nest, purpose, reason, ...choice } = await jsonBody(request, newCutPlanSchema, CUT_PLAN_BODY_LIMIT);
+  const stored = await storeCutPlan(access.user, { revision: access.revision, projectId: access.projectId }, choice, nest, { purpose, reason });
   return created({ cutPlan: stored });
 });

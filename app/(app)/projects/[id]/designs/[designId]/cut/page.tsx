@@ -6,6 +6,8 @@ import { NoAccess } from "@/components/no-access";
 import { Notice } from "@/components/ui/notice";
 import { latestCutPlan } from "@/db/queries/cut-plans";
 import { findRevision, listRevisions } from "@/db/queries/designs";
+import { approvalStamp } from "@/db/queries/reviews";
+import { approvalLine } from "@/lib/review/reference";
 import { getProjectSummary } from "@/db/queries/projects";
 import { listShopLibrary } from "@/db/queries/shop";
 import { jobTextFiles } from "@/lib/cut/export/job";
@@ -58,7 +60,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
   if (!found) notFound();
   const revision = found.revision;
 
-  const [library, plan, project] = await Promise.all([listShopLibrary({ activeOnly: true }), latestCutPlan(revision.id), getProjectSummary(access.projectId)]);
+  const [library, plan, project, approval] = await Promise.all([listShopLibrary({ activeOnly: true }), latestCutPlan(revision.id), getProjectSummary(access.projectId), approvalStamp(revision)]);
   const storedChoice = plan?.settings as (PlanChoice & { composed?: CutSettings }) | undefined;
   const ids = storedChoice ? { materialId: storedChoice.materialId, stockSheetId: storedChoice.stockSheetId, machineId: storedChoice.machineId } : firstIds(library);
   let stored: StoredPlanView | null = null;
@@ -92,6 +94,19 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
           </nav>
         ) : null}
       </div>
+      {approval ? (
+        <p className="rounded-plate border border-pass/40 bg-white/60 px-3 py-2 text-sm text-pass" data-testid="approval-reference">
+          Client approval: {approvalLine(approval)}, signed {new Date(approval.signedAt).toISOString().slice(0, 16).replace("T", " ")} UTC. Every file of this revision carries the reference.
+        </p>
+      ) : (
+        <div className="flex flex-wrap items-center gap-3 rounded-plate border border-caution bg-caution-soft px-3 py-2 text-sm text-caution" data-testid="approval-reference">
+          <span className="font-semibold">{approvalLine(null)}</span>
+          <span>The client has not approved R{revision.number}; its files are marked so.</span>
+          <Link href={`/projects/${access.projectId}?review=${revision.id}#send-review`} className="underline">
+            Send R{revision.number} for review
+          </Link>
+        </div>
+      )}
       <p className="max-w-3xl text-sm text-ink-soft">
         CAUTION: a rolling exhibit has pinch points where the wheel meets the track. Check the parts, joints and supports with your local codes, the
         authority having jurisdiction and a licensed engineer before anyone rides or touches it.
@@ -109,6 +124,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
           }}
           initialForm={formFromSettings((storedChoice?.settings ?? {}) as Partial<CutSettings>, ids)}
           stored={stored}
+          approved={approval !== null}
         />
       </div>
     </>

@@ -2,8 +2,8 @@
 // to fit, the nominal axle lines. Pure, so it is computed once per result.
 
 import type { SolvedGeometry } from "@/lib/track";
-import { RUN_PERIODS, axleLineY, cycleOf, isPairResult } from "@/lib/studio/motion";
-import { boundsOf, discBounds, tileTrack, unionBounds, type Bounds, type Pt } from "@/lib/studio/view-math";
+import { RUN_PERIODS, axleLineY, cycleOf, isPairResult } from "./motion";
+import { boundsOf, discBounds, tileTrack, unionBounds, type Bounds, type Pt } from "./view-math";
 
 export interface Scene {
   pair: boolean;
