@@ -7,7 +7,7 @@ import { Badge } from "./ui/panel";
 export function AppHeader({ user }: { user: CurrentUser }) {
   return (
     <header className="no-print border-b border-paper-edge bg-paper/95">
-      <div className="mx-auto flex max-w-6xl items-center gap-6 px-4 py-2">
+      <div className="mx-auto flex max-w-6xl flex-wrap items-center gap-x-6 gap-y-1 px-4 py-2">
         <Link href="/projects" className="flex items-center gap-2 font-semibold tracking-tight">
           <Image src="/logo.svg" alt="" width={40} height={25} />
           Axlewright
@@ -28,11 +28,11 @@ export function AppHeader({ user }: { user: CurrentUser }) {
           ) : null}
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">
-          <span data-testid="current-user">
+          <span data-testid="current-user" className="whitespace-nowrap">
             {user.name} <Badge>{user.role}</Badge>
           </span>
           <form action={signOutAction}>
-            <button type="submit" className="text-ink-soft hover:underline">
+            <button type="submit" className="whitespace-nowrap text-ink-soft hover:underline">
               Sign out
             </button>
           </form>

@@ -6,6 +6,9 @@ import {
   startApp, startMailSink, startMariaDb, startPaymentService, tsx, waitForStopped,
 } from "./lib/services.mjs";
 
+// `npm start -- --dev` serves with `next dev` (rebuilds on change) instead of a production build.
+const dev = process.argv.includes("--dev");
+
 async function main() {
   ensureNodeModules();
   ensureDebianPackages([debian.mariadb]);
@@ -21,8 +24,11 @@ async function main() {
   tsx("scripts/db/seed.ts", s.env);
   await startMailSink(s.env);
   await startPaymentService(s.env);
-  buildApp(s.env, ".next");
-  await startApp(s.env, s.appPort);
+  if (dev) await startApp({ ...s.env, NEXT_DIST_DIR: ".next-dev" }, s.appPort, { dev: true });
+  else {
+    buildApp(s.env, ".next");
+    await startApp(s.env, s.appPort);
+  }
 
   log(`Axlewright is running at ${s.env.APP_URL}`);
   const demo = readJson("db/demo-data.json");

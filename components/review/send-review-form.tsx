@@ -75,7 +75,7 @@ export function SendReviewForm({ revisions, initialRevisionId, clients }: { revi
         The client{clients.length === 1 ? "" : "s"} {clients.length ? clients.join(", ") : "(none yet: add one to the project)"} will get an e-mail with a link and a moving picture of the piece.
       </p>
       <SelectField label="Revision" name="revisionId" value={revisionId} onChange={(e) => pick(e.target.value)} options={revisions.map((r) => ({ value: String(r.id), label: r.blocked ? `${r.label} — ${r.blocked}` : r.label }))} />
-      {revision.blocked ? <Notice tone="problem">{revision.label} cannot be sent now: {revision.blocked}.</Notice> : null}
+      {revision.blocked ? <Notice>{revision.label} cannot be sent now: {revision.blocked}.</Notice> : null}
       <div className="flex flex-col gap-1 text-sm">
         <label htmlFor="field-message" className="font-medium">
           Message to the client

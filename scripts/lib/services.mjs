@@ -284,10 +284,10 @@ export function buildApp(env, distDir) {
   run(path.join(root, "node_modules/.bin/next"), ["build"], { env: { ...env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: "1" } });
 }
 
-export async function startApp(env, port) {
+export async function startApp(env, port, { dev = false } = {}) {
   if (!(await portIsFree(port))) fail(`port ${port} on 127.0.0.1 is taken (the app wants it). Set PORT to use another.`);
   // Run next's own entry with node, so the pid we hold is the server itself.
-  startProcess("app", process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), "start", "-H", "127.0.0.1", "-p", String(port)], {
+  startProcess("app", process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(port)], {
     env,
     onUnexpectedExit: (code) => fail(`the app exited (code ${code})`),
   });
@@ -298,7 +298,7 @@ export async function startApp(env, port) {
     } catch {
       return false;
     }
-  }, { timeoutMs: 120_000 });
+  }, { timeoutMs: dev ? 300_000 : 120_000 });
 }
 
 export function readJson(file) {

@@ -3,7 +3,7 @@
 ezdxf.readfile, then doc.audit(). Prints one JSON object per file with the header's $INSUNITS, the
 LAYER table's names and every modelspace entity: type, layer, closed flag, vertices (x, y, bulge)
 and area for polylines (arcs from bulges flattened by ezdxf.path), centre and radius for circles,
-end points for lines. The test (tests/unit/cut/dxf.test.ts) makes its assertions on this output.
+end points for lines, content, insertion point and height for text. The test (tests/unit/cut/dxf.test.ts) makes its assertions on this output.
 Usage: /usr/bin/python3 dxf_check.py FILE.dxf [FILE.dxf ...]"""
 import json
 import sys
@@ -38,6 +38,10 @@ def entity(e):
     elif t == "LINE":
         out["start"] = [e.dxf.start.x, e.dxf.start.y]
         out["end"] = [e.dxf.end.x, e.dxf.end.y]
+    elif t == "TEXT":
+        out["text"] = e.dxf.text
+        out["insert"] = [e.dxf.insert.x, e.dxf.insert.y]
+        out["height"] = e.dxf.height
     return out
 
 

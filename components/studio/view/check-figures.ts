@@ -4,12 +4,9 @@
 import type { SolveResult } from "@/lib/track";
 import { fmt } from "@/lib/studio/view-math";
 
-/** Friction coefficient above which many dry material pairs slip (the engine flags the same figure). */
-export const FRICTION_GUIDE = 0.6;
-/** A bend tighter than this share of the wheel size is flagged (as the engine does). */
-export const SHARP_SHARE = 0.02;
-/** Closure error (rad) above which the wheel visibly fails to close after its turn. */
-export const CLOSURE_LIMIT = 1e-6;
+import { CLOSURE_LIMIT, FRICTION_GUIDE, SHARP_SHARE, lengthTolerance } from "@/lib/studio/check-limits";
+
+export { CLOSURE_LIMIT, FRICTION_GUIDE, SHARP_SHARE };
 
 export type FigureState = "pass" | "warn" | "info";
 
@@ -26,8 +23,6 @@ export interface Figure {
 const radius = (r: number | undefined, units: string) =>
   r === undefined ? "—" : r === 0 ? "0 (corner)" : Number.isFinite(r) ? `${fmt(r)} ${units}` : "∞ (straight)";
 
-/** Lengths below which the roll counts as exact: the default chord tolerance of the outputs. */
-const lengthTolerance = (units: string) => (units === "in" ? 0.0005 : 0.01);
 
 export function checkFigures(r: SolveResult): Figure[] {
   const c = r.check;

@@ -98,6 +98,8 @@ describe("BOM, README and ZIP", () => {
     expect(readme).toContain("local codes, the authority having jurisdiction and a licensed engineer");
     // The square needs μ ≥ tan(π/4) = 1 at its corners (SAFETY.md §2.1).
     expect(readme).toMatch(/friction coefficient of 1\.00/);
+    // No approval came with this job: it says so at the top.
+    expect(readme.split("\n").slice(0, 4).join("\n")).toContain("*** NOT APPROVED — FOR REVIEW ONLY ***");
   });
 
   it("bundles everything in one ZIP that unzip reads back", async () => {
@@ -123,6 +125,8 @@ describe("BOM, README and ZIP", () => {
     expect([...png.subarray(0, 8)]).toEqual([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]); // PNG signature (RFC 2083)
     const meta = await sharp(png).metadata();
     expect(meta.width).toBe(400);
-    expect(meta.height).toBe(200); // 2440 × 1220 is 2 : 1
+    // The 2440 × 1220 sheet (2 : 1) and, above it, the two REFERENCE notes (approval line and revision),
+    // each 10 mm high with 10 mm above it.
+    expect(meta.height).toBe(Math.round((400 * (1220 + 2 * 20)) / 2440));
   });
 });

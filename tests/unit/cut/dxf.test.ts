@@ -49,7 +49,12 @@ function checkStructure(f: EzFile, insunits: number) {
   let zero = 0;
   for (const e of f.entities) {
     expect(f.layers).toContain(e.layer);
-    expect(["LWPOLYLINE", "CIRCLE", "LINE"]).toContain(e.type);
+    expect(["LWPOLYLINE", "CIRCLE", "LINE", "TEXT"]).toContain(e.type);
+    // Notes (the approval line) are text on REFERENCE, which is never cut.
+    if (e.type === "TEXT") {
+      expect(e.layer).toBe("REFERENCE");
+      continue;
+    }
     if (e.type === "LWPOLYLINE" || e.type === "POLYLINE") {
       expect(e.closed).toBe(true);
       expect(e.points!.every((v) => v[2] === 0)).toBe(true); // straight edges only
@@ -90,6 +95,7 @@ describe("DXF export", () => {
       sheet: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), { units: "mm", frames: frame }),
       inches: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), { units: "in", frames: frame }),
       kerfed: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), { units: "mm", frames: frame, toolPaths: paths }),
+      noted: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), { units: "in", frames: frame, notes: ["APPROVED R1 0123456789ab/2026-12-02 by A. Client", "Trike run track R1"] }),
     };
     const dir = mkdtempSync(join(tmpdir(), "axlewright-dxf-"));
     texts = {};
@@ -109,6 +115,18 @@ describe("DXF export", () => {
     checkStructure(sheet, 4);
     checkStructure(inches, 1);
     checkStructure(kerfed, 4);
+    checkStructure(files[4], 1);
+  });
+
+  it("writes notes as TEXT on REFERENCE, above the sheet and in the drawing's unit", () => {
+    const notes = files[4].entities.filter((e) => e.type === "TEXT");
+    expect(notes.map((e) => e.text)).toEqual(["APPROVED R1 0123456789ab/2026-12-02 by A. Client", "Trike run track R1"]);
+    for (const n of notes) {
+      // 10 mm cap height in inches (25.4 mm to the inch), above the 1220 mm sheet.
+      expect(n.height).toBeCloseTo(10 / 25.4, 9);
+      expect(n.insert![1]).toBeGreaterThan(1220 / 25.4);
+    }
+    expect(notes[0].insert![1]).toBeGreaterThan(notes[1].insert![1]);
   });
 
   it("places every part's outline, holes, drills and engraving where the nest put them", () => {

@@ -18,6 +18,9 @@ export interface EzEntity {
   radius?: number;
   start?: [number, number];
   end?: [number, number];
+  text?: string;
+  insert?: [number, number];
+  height?: number;
 }
 
 export interface EzFile {

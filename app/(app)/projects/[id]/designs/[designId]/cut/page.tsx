@@ -6,7 +6,7 @@ import { NoAccess } from "@/components/no-access";
 import { Notice } from "@/components/ui/notice";
 import { latestCutPlan } from "@/db/queries/cut-plans";
 import { findRevision, listRevisions } from "@/db/queries/designs";
-import { approvalStamp } from "@/db/queries/reviews";
+import { approvalStamp, listRevisionReviews } from "@/db/queries/reviews";
 import { approvalLine } from "@/lib/review/reference";
 import { getProjectSummary } from "@/db/queries/projects";
 import { listShopLibrary } from "@/db/queries/shop";
@@ -60,7 +60,16 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
   if (!found) notFound();
   const revision = found.revision;
 
-  const [library, plan, project, approval] = await Promise.all([listShopLibrary({ activeOnly: true }), latestCutPlan(revision.id), getProjectSummary(access.projectId), approvalStamp(revision)]);
+  const [library, plan, project, approval, reviews] = await Promise.all([
+    listShopLibrary({ activeOnly: true }),
+    latestCutPlan(revision.id),
+    getProjectSummary(access.projectId),
+    approvalStamp(revision),
+    listRevisionReviews(revision.id),
+  ]);
+  // With no plan yet, start from the run the client reviewed.
+  const reviewed = reviews.find((r) => r.runLengthMm !== null);
+  const reviewedRun: Partial<CutSettings> = reviewed ? { runLength: reviewed.runLengthMm!, endTreatment: reviewed.endTreatment ?? "flat" } : {};
   const storedChoice = plan?.settings as (PlanChoice & { composed?: CutSettings }) | undefined;
   const ids = storedChoice ? { materialId: storedChoice.materialId, stockSheetId: storedChoice.stockSheetId, machineId: storedChoice.machineId } : firstIds(library);
   let stored: StoredPlanView | null = null;
@@ -122,7 +131,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
             sheets: library.stockSheets.map((s) => ({ id: s.id, name: s.name, lengthMm: s.lengthMm, widthMm: s.widthMm, grain: s.grain, materialId: s.materialId })),
             machines: library.machines.map((k) => ({ id: k.id, name: k.name, kind: k.kind, kerfMm: k.kerfMm, bedLengthMm: k.bedLengthMm, bedWidthMm: k.bedWidthMm, minInsideRadiusMm: k.minInsideRadiusMm })),
           }}
-          initialForm={formFromSettings((storedChoice?.settings ?? {}) as Partial<CutSettings>, ids)}
+          initialForm={formFromSettings((storedChoice?.settings ?? reviewedRun) as Partial<CutSettings>, ids)}
           stored={stored}
           approved={approval !== null}
         />
