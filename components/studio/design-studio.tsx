@@ -168,7 +168,7 @@ export function DesignStudio({ designId, projectId, revisionNumber }: { designId
       </div>
 
       <Panel title="Revisions">
-        <RevisionList revisions={design.data.revisions} base={base} openNumber={revisionNumber} />
+        <RevisionList revisions={design.data.revisions} base={base} openNumber={revisionNumber} reviewBase={canEdit ? `/projects/${design.data.design.projectId}` : undefined} />
       </Panel>
     </div>
   );

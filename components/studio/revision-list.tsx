@@ -5,8 +5,8 @@ import type { RevisionRow } from "@/db/queries/designs";
 import { formatWhen } from "@/components/format";
 import { Button } from "@/components/ui/button";
 
-/** The design's saved revisions, newest first: open one read-only, or tick two to compare. */
-export function RevisionList({ revisions, base, openNumber }: { revisions: RevisionRow[]; base: string; openNumber?: number }) {
+/** The design's saved revisions, newest first: open one read-only, tick two to compare, or (the shop) send one for the client's review. */
+export function RevisionList({ revisions, base, openNumber, reviewBase }: { revisions: RevisionRow[]; base: string; openNumber?: number; reviewBase?: string }) {
   const [picked, setPicked] = useState<number[]>([]);
   if (revisions.length === 0) return <p className="text-sm text-ink-soft">No revisions yet. Save one to freeze the current design.</p>;
   const toggle = (n: number) => setPicked((p) => (p.includes(n) ? p.filter((x) => x !== n) : [...p, n].slice(-2)));
@@ -28,6 +28,11 @@ export function RevisionList({ revisions, base, openNumber }: { revisions: Revis
             <span className="font-mono text-xs text-ink-faint" title={`SHA-256 of the canonical spec: ${r.specHash}`}>
               {r.specHash.slice(0, 10)}…
             </span>
+            {reviewBase ? (
+              <Link href={`${reviewBase}?review=${r.id}#send-review`} className="text-xs underline decoration-ink-line underline-offset-2" aria-label={`Send revision ${r.number} for the client's review`}>
+                Review…
+              </Link>
+            ) : null}
           </li>
         ))}
       </ol>
