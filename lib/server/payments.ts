@@ -5,6 +5,8 @@ import "server-only";
 // production those are unset and the SDK talks to the real service with the shop's own keys.
 import Stripe from "stripe";
 import { eventSeen, findDeposit, markDepositPaid, recordEvent, setCheckoutSession } from "@/db/queries/deposits";
+import { getProjectSummary } from "@/db/queries/projects";
+import type { ReviewRow } from "@/db/queries/reviews";
 import { AppError } from "./errors";
 import { appUrl } from "./request";
 
@@ -22,32 +24,24 @@ function stripe(): Stripe {
   return client;
 }
 
-export interface DepositCheckout {
-  depositId: number;
-  reviewId: number;
-  projectId: number;
-  amountMinor: number;
-  currency: string;
-  customerEmail: string;
-  description: string;
-}
-
-/** A payment page for a due deposit: the open session already made for it, or a new one. */
-export async function checkoutForDeposit(input: DepositCheckout): Promise<{ url: string; sessionId: string }> {
-  const deposit = await findDeposit(input.depositId);
+/** A payment page for the review's due deposit: the open session already made for it, or a new one. */
+export async function checkoutForDeposit(review: ReviewRow, depositId: number, customerEmail: string): Promise<{ url: string; sessionId: string }> {
+  const deposit = await findDeposit(depositId);
   if (!deposit) throw new AppError("not_found", "This review asks for no deposit.");
   if (deposit.status !== "due") throw new AppError("conflict", deposit.status === "paid" ? "The deposit is paid already." : "The deposit falls due when the client approves.");
   if (deposit.checkoutSessionId) {
     const open = await stripe().checkout.sessions.retrieve(deposit.checkoutSessionId).catch(() => null);
     if (open?.status === "open" && open.url) return { url: open.url, sessionId: open.id };
   }
-  const back = `/projects/${input.projectId}/reviews/${input.reviewId}`;
+  const back = `/projects/${review.projectId}/reviews/${review.id}`;
+  const project = await getProjectSummary(review.projectId);
+  const description = `Deposit for ${project?.name ?? "the project"}: ${review.designName} R${review.revisionNumber}`;
   const session = await stripe().checkout.sessions.create({
     mode: "payment",
-    line_items: [{ quantity: 1, price_data: { currency: deposit.currency.toLowerCase(), unit_amount: deposit.amountMinor, product_data: { name: input.description } } }],
-    customer_email: input.customerEmail,
+    line_items: [{ quantity: 1, price_data: { currency: deposit.currency.toLowerCase(), unit_amount: deposit.amountMinor, product_data: { name: description } } }],
+    customer_email: customerEmail,
     client_reference_id: `deposit-${deposit.id}`,
-    metadata: { depositId: String(deposit.id), reviewId: String(input.reviewId), projectId: String(input.projectId) },
+    metadata: { depositId: String(deposit.id), reviewId: String(review.id), projectId: String(review.projectId) },
     success_url: appUrl(`${back}?deposit=paid&session={CHECKOUT_SESSION_ID}`),
     cancel_url: appUrl(`${back}?deposit=cancelled`),
   });

@@ -185,19 +185,9 @@ export async function decideReview(
 
 /** Sends the client on to pay a due deposit; a payment-service failure leaves the decision standing and the page offers to try again. */
 async function startDepositPayment(review: ReviewRow, detail: ReviewDetail, user: CurrentUser): Promise<{ url: string } | null> {
-  const deposit = detail.deposit!;
   try {
     const { checkoutForDeposit } = await import("./payments");
-    const project = await getProjectSummary(review.projectId);
-    const { url } = await checkoutForDeposit({
-      depositId: deposit.id,
-      reviewId: review.id,
-      projectId: review.projectId,
-      amountMinor: deposit.amountMinor,
-      currency: deposit.currency,
-      customerEmail: user.email,
-      description: `Deposit for ${project?.name ?? "the project"}: ${review.designName} R${review.revisionNumber}`,
-    });
+    const { url } = await checkoutForDeposit(review, detail.deposit!.id, user.email);
     return { url };
   } catch (error) {
     console.error("[axlewright] deposit checkout not started:", error instanceof Error ? error.message : error);

@@ -15,14 +15,13 @@ import { saveRevision } from "@/db/queries/designs";
 import { insertReview } from "@/db/queries/reviews";
 import { eq } from "drizzle-orm";
 import { actAs } from "./support/session";
-import { auditCount, makeProject, makeUser } from "./support/fixtures";
+import { CALLERS, clientOnly, makeCallers, projectManage, projectView, type Caller, type CallerIds } from "./support/callers";
+import { auditCount } from "./support/fixtures";
 
 vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
 vi.mock("next/cache", async () => (await import("./support/session")).mockCache);
 
-const CALLERS = ["anonymous", "admin", "fabricator member", "fabricator non-member", "client member", "client non-member", "installer member", "installer non-member"] as const;
-type Caller = (typeof CALLERS)[number];
-const ids = {} as Record<Exclude<Caller, "anonymous">, number>;
+let ids: CallerIds;
 let projectId = 0;
 let designId = 0;
 let decidedReviewId = 0;
@@ -48,19 +47,6 @@ async function freshReview(): Promise<number> {
 async function rowCounts(): Promise<number[]> {
   return Promise.all([auditCount(), ...[reviews, reviewComments, signOffs, deposits].map(async (t) => (await db.select({ n: count() }).from(t))[0].n)]);
 }
-
-const projectView = (ok: number): Record<Caller, number> => ({
-  anonymous: 401, admin: ok, "fabricator member": ok, "fabricator non-member": 404, "client member": ok,
-  "client non-member": 404, "installer member": ok, "installer non-member": 404,
-});
-const projectManage = (ok: number): Record<Caller, number> => ({
-  anonymous: 401, admin: ok, "fabricator member": ok, "fabricator non-member": 404, "client member": 403,
-  "client non-member": 404, "installer member": 403, "installer non-member": 404,
-});
-const clientOnly = (ok: number): Record<Caller, number> => ({
-  anonymous: 401, admin: 403, "fabricator member": 403, "fabricator non-member": 404, "client member": ok,
-  "client non-member": 404, "installer member": 403, "installer non-member": 404,
-});
 
 interface Case {
   name: string;
@@ -115,22 +101,7 @@ const CASES: Case[] = [
 ];
 
 beforeAll(async () => {
-  ids.admin = (await makeUser("admin", "rv-admin")).id;
-  for (const role of ["fabricator", "client", "installer"] as const) {
-    ids[`${role} member`] = (await makeUser(role, `rv-${role}-member`)).id;
-    ids[`${role} non-member`] = (await makeUser(role, `rv-${role}-outsider`)).id;
-  }
-  projectId = await makeProject("Review matrix project", [
-    { userId: ids["fabricator member"], role: "fabricator" },
-    { userId: ids["client member"], role: "client" },
-    { userId: ids["installer member"], role: "installer" },
-  ]);
-  // The outsiders belong to a project of their own, so "non-member" means "of another project".
-  await makeProject("Review matrix other project", [
-    { userId: ids["fabricator non-member"], role: "fabricator" },
-    { userId: ids["client non-member"], role: "client" },
-    { userId: ids["installer non-member"], role: "installer" },
-  ]);
+  ({ ids, projectId } = await makeCallers("Review matrix"));
   const [d] = await db.insert(designs).values({ projectId, name: "Matrix track", mode: "track-for-wheel", draft: SQUARE });
   designId = d.insertId;
   decidedReviewId = await freshReview();

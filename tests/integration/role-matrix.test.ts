@@ -13,13 +13,12 @@ import type { ActionState } from "@/lib/server/action";
 import { db, pool } from "@/db";
 import { materials } from "@/db/schema";
 import { actAs } from "./support/session";
+import { CALLERS, projectManage, projectView as viewTable, type Caller } from "./support/callers";
 import { addMembership, auditCount, makeProject, makeUser, runTag } from "./support/fixtures";
 
 vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
 vi.mock("next/cache", async () => (await import("./support/session")).mockCache);
 
-const CALLERS = ["anonymous", "admin", "fabricator member", "fabricator non-member", "client member", "client non-member", "installer member", "installer non-member"] as const;
-type Caller = (typeof CALLERS)[number];
 
 const ids = {} as Record<Exclude<Caller, "anonymous">, number>;
 let projectId = 0;
@@ -82,14 +81,7 @@ const adminOnly = (status: number): Record<Caller, number> => ({
   anonymous: 401, admin: status, "fabricator member": 403, "fabricator non-member": 403, "client member": 403,
   "client non-member": 403, "installer member": 403, "installer non-member": 403,
 });
-const projectView: Record<Caller, number> = {
-  anonymous: 401, admin: 200, "fabricator member": 200, "fabricator non-member": 404, "client member": 200,
-  "client non-member": 404, "installer member": 200, "installer non-member": 404,
-};
-const projectManage = (status: number): Record<Caller, number> => ({
-  anonymous: 401, admin: status, "fabricator member": status, "fabricator non-member": 404, "client member": 403,
-  "client non-member": 404, "installer member": 403, "installer non-member": 404,
-});
+const projectView = viewTable(200);
 
 /** A throw-away installer and their membership of the matrix project, for calls that change or remove one. */
 async function throwawayMember(): Promise<number> {

@@ -1,5 +1,4 @@
 import { depositOfReview } from "@/db/queries/deposits";
-import { getProjectSummary } from "@/db/queries/projects";
 import { requireReviewAccess, requireReviewSigner } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
 import { checkoutForDeposit } from "@/lib/server/payments";
@@ -18,15 +17,6 @@ export const POST = route<{ id: string }>(async (_request, params) => {
   const { review, user } = await requireReviewSigner(idParam(params.id, "review"));
   const deposit = await depositOfReview(review.id);
   if (!deposit) throw new AppError("not_found", "This review asks for no deposit.");
-  const project = await getProjectSummary(review.projectId);
-  const { url } = await checkoutForDeposit({
-    depositId: deposit.id,
-    reviewId: review.id,
-    projectId: review.projectId,
-    amountMinor: deposit.amountMinor,
-    currency: deposit.currency,
-    customerEmail: user.email,
-    description: `Deposit for ${project?.name ?? "the project"}: ${review.designName} R${review.revisionNumber}`,
-  });
+  const { url } = await checkoutForDeposit(review, deposit.id, user.email);
   return created({ url });
 });
