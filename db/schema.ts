@@ -316,6 +316,54 @@ export const paymentEvents = mysqlTable("payment_events", {
   receivedAt: timestamp("received_at", { fsp: 3 }).notNull().defaultNow(),
 });
 
+/** What a build-log entry is about. People write the first eight; the app writes the last three itself. */
+export const LOG_KINDS = ["note", "cut", "assembled", "shipped", "installed", "inspection", "problem", "fixed", "status", "review", "cut-plan"] as const;
+export type LogKind = (typeof LOG_KINDS)[number];
+export const PEOPLE_LOG_KINDS = ["note", "cut", "assembled", "shipped", "installed", "inspection", "problem", "fixed"] as const;
+
+/**
+ * The project's build log, newest first: notes and milestones from the shop and the crew, and the
+ * app's own entries for status changes, review decisions and stored cut plans. `parts` names the
+ * part ids (as engraved) an entry concerns; `detail` holds what the app's own entries need (e.g. the
+ * cut plan and item of an installation tick).
+ */
+export const buildLogEntries = mysqlTable(
+  "build_log_entries",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    projectId: int("project_id").notNull().references(() => projects.id),
+    kind: mysqlEnum("kind", LOG_KINDS).notNull(),
+    text: varchar("text", { length: 4000 }).notNull(),
+    parts: json("parts").$type<string[]>().notNull(),
+    cutPlanId: int("cut_plan_id").references(() => cutPlans.id),
+    detail: json("detail").$type<Record<string, unknown>>(),
+    authorId: int("author_id").references(() => users.id),
+    createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
+  },
+  (t) => [index("build_log_project").on(t.projectId, t.createdAt), index("build_log_cut_plan").on(t.cutPlanId)],
+);
+
+/** A site photo of a build-log entry. The bytes live only in object storage, under `objectKey` (and its thumbnail's). */
+export const buildLogPhotos = mysqlTable(
+  "build_log_photos",
+  {
+    id: int("id").autoincrement().primaryKey(),
+    entryId: int("entry_id").notNull().references(() => buildLogEntries.id),
+    projectId: int("project_id").notNull().references(() => projects.id),
+    objectKey: varchar("object_key", { length: 200 }).notNull().unique(),
+    thumbKey: varchar("thumb_key", { length: 200 }).notNull().unique(),
+    contentType: varchar("content_type", { length: 40 }).notNull(),
+    bytes: int("bytes").notNull(),
+    thumbBytes: int("thumb_bytes").notNull(),
+    width: int("width").notNull(),
+    height: int("height").notNull(),
+    originalName: varchar("original_name", { length: 200 }).notNull().default(""),
+    uploadedById: int("uploaded_by_id").references(() => users.id),
+    createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
+  },
+  (t) => [index("build_log_photos_entry").on(t.entryId)],
+);
+
 export const usersRelations = relations(users, ({ one, many }) => ({
   organisation: one(organisations, { fields: [users.organisationId], references: [organisations.id] }),
   memberships: many(projectMembers),
@@ -340,6 +388,8 @@ export const revisionsRelations = relations(revisions, ({ one }) => ({
   design: one(designs, { fields: [revisions.designId], references: [designs.id] }),
 }));
 
+export type BuildLogEntry = typeof buildLogEntries.$inferSelect;
+export type BuildLogPhoto = typeof buildLogPhotos.$inferSelect;
 export type Review = typeof reviews.$inferSelect;
 export type ReviewComment = typeof reviewComments.$inferSelect;
 export type SignOff = typeof signOffs.$inferSelect;

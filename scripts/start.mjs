@@ -3,7 +3,7 @@
 import { demoSettings } from "./lib/env.mjs";
 import {
   buildApp, createAppDatabase, readJson, debian, ensureDebianPackages, ensureNodeModules, fail, log, onInterrupt,
-  startApp, startMailSink, startMariaDb, startPaymentService, tsx, waitForStopped,
+  startApp, startMailSink, startMariaDb, startObjectStore, startPaymentService, tsx, waitForStopped,
 } from "./lib/services.mjs";
 
 // `npm start -- --dev` serves with `next dev` (rebuilds on change) instead of a production build.
@@ -21,6 +21,7 @@ async function main() {
   const server = await startMariaDb({ dataDir: s.dataDir, port: s.dbPort });
   createAppDatabase(server, { database: s.database, user: s.dbUser, password: s.dbPassword });
   tsx("scripts/db/migrate.ts", s.env);
+  await startObjectStore(s.env);
   tsx("scripts/db/seed.ts", s.env);
   await startMailSink(s.env);
   await startPaymentService(s.env);

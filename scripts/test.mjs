@@ -5,7 +5,7 @@ import path from "node:path";
 import { testSettings } from "./lib/env.mjs";
 import {
   buildApp, createAppDatabase, debian, ensureDebianPackages, ensureNodeModules, log, onInterrupt, root, run,
-  startApp, startMailSink, startMariaDb, startPaymentService, tsx, waitForStopped,
+  startApp, startMailSink, startMariaDb, startObjectStore, startPaymentService, tsx, waitForStopped,
 } from "./lib/services.mjs";
 
 const vitest = path.join(root, "node_modules/.bin/vitest");
@@ -29,6 +29,7 @@ async function main() {
   const server = await startMariaDb({ dataDir: s.dataDir, port: s.dbPort, fresh: true });
   createAppDatabase(server, { database: s.database, user: s.dbUser, password: s.dbPassword });
   tsx("scripts/db/migrate.ts", env);
+  await startObjectStore(env, { fresh: true });
   tsx("scripts/db/seed.ts", env);
   await startMailSink(env);
   await startPaymentService(env);

@@ -4,7 +4,9 @@ import "server-only";
 import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { deposits, paymentEvents, type Deposit } from "@/db/schema";
+import { formatMoney } from "@/lib/money/currency";
 import { audit } from "@/lib/server/audit";
+import { writeLogEntry } from "./build-log";
 
 export async function findDeposit(id: number): Promise<Deposit | null> {
   const [row] = await db.select().from(deposits).where(eq(deposits.id, id)).limit(1);
@@ -41,6 +43,7 @@ export async function markDepositPaid(deposit: Deposit, event: { id: string; typ
       .where(and(eq(deposits.id, deposit.id), eq(deposits.status, "due")));
     // Throwing undoes the event row too, so a lost race leaves nothing behind.
     if (res.affectedRows !== 1) throw new NotDue();
+    await writeLogEntry(tx, null, deposit.projectId, { kind: "review", text: `Deposit of ${formatMoney(deposit.amountMinor, deposit.currency)} paid.`, detail: { reviewId: deposit.reviewId, depositId: deposit.id } });
     await audit(tx, {
       actorId: null,
       action: "deposit-paid",

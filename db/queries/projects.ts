@@ -1,10 +1,12 @@
 import "server-only";
-import { desc, eq, inArray } from "drizzle-orm";
+import { and, desc, eq, inArray } from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
 import { db } from "@/db";
-import { organisations, projectMembers, projects, type ProjectStatus } from "@/db/schema";
+import { organisations, projectMembers, projects, users, type ProjectStatus } from "@/db/schema";
 import { audit } from "@/lib/server/audit";
 import type { CurrentUser } from "@/lib/server/dal";
+import { STATUS_LABEL } from "@/lib/project-status";
+import { writeLogEntry } from "./build-log";
 import { clientOrganisationId } from "./organisations";
 
 export interface ProjectSummary {
@@ -67,7 +69,25 @@ export async function updateProject(
     const { clientOrganisation, ...rest } = input;
     const changes: Partial<typeof projects.$inferInsert> = { ...rest };
     if (clientOrganisation !== undefined) changes.clientOrganisationId = await clientOrganisationId(tx, clientOrganisation);
+    const [before] = await tx.select({ status: projects.status }).from(projects).where(eq(projects.id, projectId)).limit(1);
     await tx.update(projects).set(changes).where(eq(projects.id, projectId));
     await audit(tx, { actorId: actor.id, action: "update", entity: "projects", entityId: projectId, projectId, detail: input });
+    // A change of stage goes into the build log too.
+    if (input.status && before && input.status !== before.status)
+      await writeLogEntry(tx, actor.id, projectId, { kind: "status", text: `Status changed from ${STATUS_LABEL[before.status]} to ${STATUS_LABEL[input.status]}.`, detail: { from: before.status, to: input.status } });
   });
+}
+
+/** The shop on a project: its fabricator members and their organisation, for the contact on printed sheets. */
+export async function projectShop(projectId: number): Promise<{ name: string; contact: string }> {
+  const rows = await db
+    .select({ name: users.name, email: users.email, organisation: organisations.name })
+    .from(projectMembers)
+    .innerJoin(users, eq(users.id, projectMembers.userId))
+    .leftJoin(organisations, eq(organisations.id, users.organisationId))
+    .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.role, "fabricator"), eq(users.active, true)));
+  return {
+    name: rows.find((r) => r.organisation)?.organisation ?? "The shop",
+    contact: rows.length ? rows.map((r) => `${r.name} <${r.email}>`).join(", ") : "the project's fabricator",
+  };
 }

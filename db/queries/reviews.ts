@@ -6,6 +6,7 @@ import "server-only";
 import { and, asc, desc, eq, inArray, isNull } from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
 import { db } from "@/db";
+import { isDuplicateKey } from "@/db/duplicate-key";
 import {
   deposits,
   designs,
@@ -23,9 +24,11 @@ import {
   type ReviewDecision,
 } from "@/db/schema";
 import { approvalReference, type ApprovalStamp } from "@/lib/review/reference";
+import { formatMoney } from "@/lib/money/currency";
 import { audit } from "@/lib/server/audit";
 import type { CurrentUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
+import { writeLogEntry } from "./build-log";
 
 export interface ReviewRow {
   id: number;
@@ -261,6 +264,11 @@ export async function insertReview(actor: CurrentUser, input: NewReviewRow): Pro
     const id = res.insertId;
     if (input.deposit) await tx.insert(deposits).values({ reviewId: id, projectId: input.projectId, amountMinor: input.deposit.amountMinor, currency: input.deposit.currency });
     await tx.update(projects).set({ status: "review" }).where(eq(projects.id, input.projectId));
+    await writeLogEntry(tx, actor.id, input.projectId, {
+      kind: "review",
+      text: `${actor.name} sent R${input.revisionNumber} for the client's review${input.deposit ? `, with a deposit of ${formatMoney(input.deposit.amountMinor, input.deposit.currency)} due on approval` : ""}. Status: Client review.`,
+      detail: { reviewId: id, revisionId: input.revisionId },
+    });
     await audit(tx, {
       actorId: actor.id,
       action: "request-review",
@@ -291,16 +299,12 @@ export interface NewSignOff {
   userAgent: string;
 }
 
-/** MariaDB's duplicate-key error: another decision on this review got there first. */
-function isDuplicate(error: unknown): boolean {
-  const e = error as { code?: string; cause?: { code?: string } };
-  return e?.code === "ER_DUP_ENTRY" || e?.cause?.code === "ER_DUP_ENTRY";
-}
-
 export async function insertSignOff(actor: CurrentUser, review: ReviewRow, input: NewSignOff): Promise<SignOffRow> {
   let id: number;
   try {
     id = await db.transaction(async (tx) => {
+      // One clock for the record and the log line that quotes its reference.
+      const signedAt = new Date();
       let commentId: number | null = null;
       if (input.comment) {
         const [c] = await tx.insert(reviewComments).values({ reviewId: review.id, authorId: actor.id, text: input.comment, at: null });
@@ -317,9 +321,18 @@ export async function insertSignOff(actor: CurrentUser, review: ReviewRow, input
         commentId,
         address: input.address,
         userAgent: input.userAgent,
+        signedAt,
       });
       const status = input.decision === "approve" ? "approved" : "design";
       await tx.update(projects).set({ status }).where(eq(projects.id, review.projectId));
+      await writeLogEntry(tx, actor.id, review.projectId, {
+        kind: "review",
+        text:
+          input.decision === "approve"
+            ? `${input.typedName} approved ${review.designName} R${review.revisionNumber} for fabrication (reference ${approvalReference({ specHash: input.specHash, signedAt })}). Status: Approved.`
+            : `${input.typedName} asked for changes to ${review.designName} R${review.revisionNumber}: ${input.comment ?? ""} Status: In design.`,
+        detail: { reviewId: review.id, revisionId: review.revisionId, decision: input.decision },
+      });
       if (input.decision === "approve") await tx.update(deposits).set({ status: "due" }).where(and(eq(deposits.reviewId, review.id), eq(deposits.status, "on-approval")));
       await audit(tx, {
         actorId: actor.id,
@@ -332,7 +345,8 @@ export async function insertSignOff(actor: CurrentUser, review: ReviewRow, input
       return res.insertId;
     });
   } catch (error) {
-    if (isDuplicate(error)) throw new AppError("conflict", "This review has been decided already; a decision cannot be changed.");
+    // Another decision on this review got there first.
+    if (isDuplicateKey(error)) throw new AppError("conflict", "This review has been decided already; a decision cannot be changed.");
     throw error;
   }
   const [row] = await signOffQuery().where(eq(signOffs.id, id)).limit(1);

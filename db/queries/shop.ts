@@ -3,6 +3,7 @@ import "server-only";
 // cut plan made with a row can still name it, and a retired row can be brought back.
 import { asc, eq } from "drizzle-orm";
 import { db } from "@/db";
+import { isDuplicateKey } from "@/db/duplicate-key";
 import { machines, materials, stockSheets, type Machine, type Material, type StockSheet } from "@/db/schema";
 import { audit } from "@/lib/server/audit";
 import type { CurrentUser } from "@/lib/server/dal";
@@ -41,11 +42,6 @@ export async function listShopLibrary({ activeOnly = false } = {}): Promise<Shop
   };
 }
 
-function duplicateName(error: unknown): boolean {
-  const cause = (error as { cause?: { code?: string } })?.cause ?? error;
-  return (cause as { code?: string })?.code === "ER_DUP_ENTRY";
-}
-
 async function nameIsFree<T extends ShopTable>(table: T, name: string, exceptId?: number) {
   const t = tables[table];
   const [row] = await db.select({ id: t.id }).from(t).where(eq(t.name, name)).limit(1);
@@ -82,7 +78,7 @@ export async function saveShopRow<T extends ShopTable>(actor: CurrentUser, table
       return rowId;
     });
   } catch (error) {
-    if (duplicateName(error)) throw new AppError("conflict", "That name is already in the library.", { name: ["Already in use."] });
+    if (isDuplicateKey(error)) throw new AppError("conflict", "That name is already in the library.", { name: ["Already in use."] });
     throw error;
   }
 }

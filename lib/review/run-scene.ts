@@ -234,7 +234,7 @@ export function poseOnRun(result: SolvedGeometry, scene: RunScene, p: number): R
   }
   const x = scene.rollStart + t * (scene.rollEnd - scene.rollStart);
   const designX = scene.designStart + (x - scene.rollStart) / scene.k;
-  const angle = wheelAngleAt(result, designX);
+  const angle = wheelTurnAt(result, scene, x);
   const contactY = trackYAtX(result, designX) * scene.k;
   const rest = contactY + rayReach(scene.wheel, downInBody(angle));
   const pose: RunPose = { along: x, wheelAxle: [x, rest], wheelAngle: angle, contact: [x, contactY], axleLineY: scene.axleY, offLine: rest - scene.axleY };
@@ -244,6 +244,11 @@ export function poseOnRun(result: SolvedGeometry, scene: RunScene, p: number): R
     pose.partnerAngle = lower;
   }
   return pose;
+}
+
+/** The wheel's clockwise turn with its axle at run x (mm), on the run as designed (a run layout only). */
+export function wheelTurnAt(result: SolvedGeometry, scene: RunLayout, x: number): number {
+  return wheelAngleAt(result, scene.designStart + (x - scene.rollStart) / scene.k);
 }
 
 /** The roll position of a pinned place (mm along the run, or a pair's degrees), clamped to the roll. */

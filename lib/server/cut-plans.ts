@@ -9,10 +9,10 @@ import { approvalOf, approvalStamp } from "@/db/queries/reviews";
 import { getShopRows } from "@/db/queries/shop";
 import type { Revision } from "@/db/schema";
 import { buildCutParts, isCutError, kerfParts, nestItemsFor, slug, type CutPlanResult } from "@/lib/cut";
-import { ringArea } from "@/lib/cut/geometry";
 import { loadHersheyFont } from "@/lib/cut/labels/font-file";
 import type { JobInput } from "@/lib/cut/export/job";
 import { composeSettings, type PlanChoice } from "@/lib/cut-plan/compose";
+import { summariseCutPlan, type CutPlanSummary } from "@/lib/cut-plan/summary";
 import { checkNest } from "@/lib/cut-plan/verify-nest";
 import { approvalReference } from "@/lib/review/reference";
 import type { SheetNestResult } from "@/lib/nest/types";
@@ -54,25 +54,7 @@ export function buildPlanParts(revision: Revision, settings: unknown, { labels =
   }
 }
 
-export interface CutPlanSummary {
-  sheets: number;
-  utilisation: number;
-  perSheet: number[];
-  parts: number;
-  copies: number;
-  runLength: number | null;
-  periods: number | null;
-  material: string;
-  sheet: string;
-  machine: string;
-  seconds: number;
-  warnings: string[];
-  /** What the plan was stored for, and the approval it was stored under (null: none yet). */
-  purpose?: "review" | "production";
-  approvalReference?: string | null;
-  /** The shop's reason for storing a production plan of a revision the client has not approved. */
-  unapprovedReason?: string | null;
-}
+export type { CutPlanSummary };
 
 export async function storeCutPlan(
   actor: CurrentUser,
@@ -98,41 +80,19 @@ export async function storeCutPlan(
     const shown = problems.slice(0, 5).join(" ");
     throw new AppError("bad_request", `The nest was not stored: ${shown}${problems.length > 5 ? ` (and ${problems.length - 5} more)` : ""}`);
   }
-  const sheets = nest.sheets.filter((sh) => sh.placements.length > 0);
-  const sheetArea = s.sheet.length * s.sheet.width;
-  const partArea = new Map(built.plan.parts.map((p) => [p.id, regionArea(p.region)]));
-  const perSheet = sheets.map((sh) => sh.placements.reduce((sum, pl) => sum + (partArea.get(pl.id) ?? 0), 0) / sheetArea);
-  const summary: CutPlanSummary = {
-    sheets: sheets.length,
-    // The parts' own area over the stock's: the same figure the page shows.
-    utilisation: perSheet.reduce((a, b) => a + b, 0) / Math.max(1, sheets.length),
-    perSheet,
-    parts: built.plan.parts.length,
-    copies: built.plan.parts.reduce((n, p) => n + p.quantity, 0),
-    runLength: built.plan.run?.runLength ?? null,
-    periods: built.plan.run?.periods ?? null,
-    material: library.material.name,
-    sheet: library.sheet.name,
-    machine: library.machine.name,
-    seconds: nest.seconds,
-    warnings: built.plan.warnings.filter((w) => w.code !== "no-font").map((w) => w.message),
-    purpose,
-    approvalReference: approval ? approvalReference(approval) : null,
-    unapprovedReason: !approval && purpose === "production" ? reason : null,
-  };
-  const stored = { sheets: sheets.map((sh, index) => ({ index, utilisation: perSheet[index], placements: sh.placements.map((p) => ({ ...p, sheet: index })) })), unplaced: [], seconds: nest.seconds, cancelled: nest.cancelled };
+  const { summary, nest: stored } = summariseCutPlan(
+    built.plan,
+    nest,
+    { material: library.material.name, sheet: library.sheet.name, machine: library.machine.name },
+    { purpose, approvalReference: approval ? approvalReference(approval) : null, unapprovedReason: !approval && purpose === "production" ? reason : null },
+  );
   const id = await insertCutPlan(actor, { revisionId: target.revision.id, projectId: target.projectId }, {
     // The library figures are copied in, so a later edit of a library row cannot change this plan.
     settings: { ...choice, composed: s } as unknown as Record<string, unknown>,
-    nest: stored as unknown as Record<string, unknown>,
+    nest: stored,
     summary: summary as unknown as Record<string, unknown>,
   });
   return { id, summary };
-}
-
-/** Area of a region: the outer ring less its holes. */
-function regionArea(region: { outer: [number, number][]; holes: [number, number][][] }): number {
-  return ringArea(region.outer) - region.holes.reduce((a, h) => a + ringArea(h), 0);
 }
 
 /** Everything the exporters need for a stored plan, rebuilt from its revision and its own settings (labels included). */

@@ -2,7 +2,7 @@
 // messages for bad input). Route handlers turn it into JSON; server actions into form state.
 import { z } from "zod";
 
-export type ErrorKind = "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "unprocessable" | "method_not_allowed" | "too_large" | "too_many" | "timeout" | "internal";
+export type ErrorKind = "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "unprocessable" | "method_not_allowed" | "too_large" | "unsupported" | "too_many" | "timeout" | "unavailable" | "internal";
 
 const STATUS: Record<ErrorKind, number> = {
   bad_request: 400,
@@ -13,8 +13,10 @@ const STATUS: Record<ErrorKind, number> = {
   unprocessable: 422,
   method_not_allowed: 405,
   too_large: 413,
+  unsupported: 415,
   too_many: 429,
   timeout: 408,
+  unavailable: 503,
   internal: 500,
 };
 
@@ -27,8 +29,10 @@ const DEFAULT_MESSAGE: Record<ErrorKind, string> = {
   unprocessable: "The request is understood but cannot be carried out as it stands.",
   method_not_allowed: "That cannot be done to this record.",
   too_large: "The request is too large.",
+  unsupported: "That kind of file is not accepted here.",
   too_many: "Too many requests; please wait and try again.",
   timeout: "The work took too long and was stopped.",
+  unavailable: "A service the app needs did not answer. Nothing was changed.",
   internal: "Something went wrong on our side. Nothing was changed.",
 };
 

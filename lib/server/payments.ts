@@ -4,6 +4,7 @@ import "server-only";
 // the local fake (scripts/fakes/payment-service.mjs) named by STRIPE_API_HOST/PORT/PROTOCOL; in
 // production those are unset and the SDK talks to the real service with the shop's own keys.
 import Stripe from "stripe";
+import { isDuplicateKey } from "@/db/duplicate-key";
 import { eventSeen, findDeposit, markDepositPaid, recordEvent, setCheckoutSession } from "@/db/queries/deposits";
 import { getProjectSummary } from "@/db/queries/projects";
 import type { ReviewRow } from "@/db/queries/reviews";
@@ -85,7 +86,6 @@ export async function handlePaymentWebhook(rawBody: string, signature: string | 
 
 /** Two deliveries of one event at once: the second loses on the unique event id, and is a replay. */
 function duplicateAsReplay(error: unknown): never {
-  const e = error as { code?: string; cause?: { code?: string } };
-  if (e?.code === "ER_DUP_ENTRY" || e?.cause?.code === "ER_DUP_ENTRY") throw new AppError("bad_request", "This payment event was processed already; a replay changes nothing.");
+  if (isDuplicateKey(error)) throw new AppError("bad_request", "This payment event was processed already; a replay changes nothing.");
   throw error;
 }

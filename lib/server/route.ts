@@ -4,6 +4,7 @@ import "server-only";
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { AppError, toAppError } from "./errors";
+import { rawTextBody } from "./raw-body";
 
 type Params = Record<string, string | string[] | undefined>;
 type Handler<P extends Params> = (request: Request, params: P) => Promise<Response | unknown>;
@@ -23,12 +24,9 @@ export function route<P extends Params = Params>(handler: Handler<P>) {
 
 export const DEFAULT_BODY_LIMIT = 64 * 1024;
 
-/** Reads and validates a JSON body; refuses anything over `limit` bytes before parsing it. */
+/** Reads and validates a JSON body; refuses anything over `limit` bytes (counted as it arrives) before parsing it. */
 export async function jsonBody<T extends z.ZodType>(request: Request, schema: T, limit = DEFAULT_BODY_LIMIT): Promise<z.infer<T>> {
-  const declared = Number(request.headers.get("content-length") ?? "0");
-  if (declared > limit) throw new AppError("too_large", `The request body is over ${Math.round(limit / 1024)} KiB.`);
-  const text = await request.text();
-  if (Buffer.byteLength(text) > limit) throw new AppError("too_large", `The request body is over ${Math.round(limit / 1024)} KiB.`);
+  const text = await rawTextBody(request, limit);
   let data: unknown;
   try {
     data = JSON.parse(text);

@@ -10,6 +10,7 @@ import library from "../../db/shop-library.json";
 import * as schema from "../../db/schema";
 import { summarise } from "../../lib/revision-summary";
 import { toMinor, type Currency } from "../../lib/money/currency";
+import { seedDemoBuild, type DemoBuild } from "./demo-build";
 import { hashPassword } from "../../lib/server/passwords";
 import { ENGINE_VERSION, parseSpec, solve, specHash } from "../../lib/track";
 
@@ -156,6 +157,7 @@ try {
         added += 2;
       }
       if ("review" in d && d.review) await seedReview(id, designId, d.review as DemoReview, userIds);
+      if ("build" in d && d.build) added += await seedDemoBuild(db, id, d.name, p.name, d.build as DemoBuild, userIds);
     }
   }
   console.log(`[axlewright] demo data seeded (${added} new rows)`);

@@ -42,7 +42,7 @@ function paymentSecrets() {
 
 const num = (value, fallback) => (value ? Number(value) : fallback);
 
-function appEnv({ dbPort, database, password, appPort, smtpPort, mailHttpPort, paymentPort, payment, authSecret, dataDir }) {
+function appEnv({ dbPort, database, password, appPort, smtpPort, mailHttpPort, paymentPort, payment, s3Port, s3DataDir, authSecret, dataDir }) {
   return {
     dataDir,
     dbPort,
@@ -70,6 +70,15 @@ function appEnv({ dbPort, database, password, appPort, smtpPort, mailHttpPort, p
       STRIPE_API_PROTOCOL: "http",
       PAYMENT_SERVICE_PORT: String(paymentPort),
       PAYMENT_WEBHOOK_URL: `http://127.0.0.1:${appPort}/api/payments/webhook`,
+      // Photos go to object storage through @aws-sdk/client-s3: the local fake here, a hosted
+      // store in production (same variables, the store's own address and keys).
+      S3_ENDPOINT: `http://127.0.0.1:${s3Port}`,
+      S3_PORT: String(s3Port),
+      S3_REGION: "us-east-1",
+      S3_BUCKET: "axlewright",
+      S3_ACCESS_KEY_ID: "S3RVER",
+      S3_SECRET_ACCESS_KEY: "S3RVER",
+      S3_DATA_DIR: s3DataDir,
       PORT: String(appPort),
       NEXT_TELEMETRY_DISABLED: "1",
     },
@@ -88,6 +97,8 @@ export function demoSettings() {
     smtpPort: num(e.SMTP_PORT, 2525),
     mailHttpPort: num(e.MAIL_SINK_HTTP_PORT, 2526),
     paymentPort: num(e.PAYMENT_SERVICE_PORT, 2527),
+    s3Port: num(e.S3_PORT, 2528),
+    s3DataDir: path.join(root, ".data/objects"),
     payment: { STRIPE_SECRET_KEY: e.STRIPE_SECRET_KEY || saved.STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET: e.STRIPE_WEBHOOK_SECRET || saved.STRIPE_WEBHOOK_SECRET },
     authSecret: e.AUTH_SECRET || saved.AUTH_SECRET,
   });
@@ -105,6 +116,8 @@ export function testSettings() {
     smtpPort: num(e.AXLEWRIGHT_TEST_SMTP_PORT, 2535),
     mailHttpPort: num(e.AXLEWRIGHT_TEST_MAIL_HTTP_PORT, 2536),
     paymentPort: num(e.AXLEWRIGHT_TEST_PAYMENT_PORT, 2537),
+    s3Port: num(e.AXLEWRIGHT_TEST_S3_PORT, 2538),
+    s3DataDir: path.join(root, ".data/test-objects"),
     payment: paymentSecrets(),
     authSecret: randomBytes(32).toString("base64url"),
   });

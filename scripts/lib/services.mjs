@@ -258,6 +258,20 @@ export async function startPaymentService(env) {
   log(`payment service (local fake): http://127.0.0.1:${port}`);
 }
 
+/** The local object store (scripts/fakes/object-store.mjs, s3rver) with its data in env.S3_DATA_DIR; `fresh` empties it first. */
+export async function startObjectStore(env, { fresh = false } = {}) {
+  const port = Number(env.S3_PORT);
+  if (fresh) rmSync(env.S3_DATA_DIR, { recursive: true, force: true });
+  mkdirSync(env.S3_DATA_DIR, { recursive: true });
+  if (!(await portIsFree(port))) fail(`port ${port} on 127.0.0.1 is taken (the local object store wants it).`);
+  startProcess("object store", process.execPath, [path.join(root, "scripts/fakes/object-store.mjs")], {
+    env,
+    onUnexpectedExit: (code) => fail(`the local object store exited (code ${code})`),
+  });
+  await waitFor("the local object store", () => canConnect(port));
+  log(`object store (local fake): http://127.0.0.1:${port}, bucket ${env.S3_BUCKET}, data in ${path.relative(root, env.S3_DATA_DIR)}`);
+}
+
 function newestMtime(entries) {
   let newest = 0;
   const visit = (p) => {

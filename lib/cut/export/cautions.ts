@@ -4,7 +4,8 @@
 // Thresholds: friction demand for a regular n-gon on its road is tan(π/n), so a square needs
 // μ ≥ 1 (SAFETY.md §2.1, friction cone); ISO 13854 minimum gaps for crushing (finger 25 mm, hand
 // 100 mm, foot 120 mm; SAFETY.md §1.1); ASTM F963 §4.18.1 moving-part clearance (admits 5 mm →
-// must admit 13 mm; SAFETY.md §1.5).
+// must admit 13 mm; SAFETY.md §1.5); dry wood on wood about 0.5 (S. A. Hill, "Coefficients of
+// friction"; SAFETY.md §2.2).
 import type { SolveResult } from "@/lib/track";
 import { fmtLen } from "../units";
 
@@ -25,7 +26,7 @@ export function cautionsFor(result: Pick<SolveResult, "mode" | "check" | "warnin
   if (mu > 0.6)
     out.push({
       signal: "WARNING",
-      text: `The contact needs a friction coefficient of ${mu.toFixed(2)} at its steepest point; many dry material pairs give less (SAFETY.md §2.2). The wheel may slip, jolt and tip a rider. Use a high-grip tread, keep the track clean and dry, or use a wheel with more sides.`,
+      text: `The contact needs a friction coefficient of ${mu.toFixed(2)} at its steepest point; many dry material pairs give less (wood on wood is about 0.5). The wheel may slip, jolt and tip a rider. Use a high-grip tread, keep the track clean and dry, or use a wheel with more sides.`,
     });
   if (result.warnings.some((w) => w.code === "sharp-corner"))
     out.push({

@@ -9,7 +9,9 @@ import { Table } from "@/components/ui/table";
 import { ReviewList } from "@/components/review/review-list";
 import { depositText } from "@/components/review/review-status";
 import { SendReviewForm, type SendableRevision } from "@/components/review/send-review-form";
-import { latestCutPlan } from "@/db/queries/cut-plans";
+import { LogList } from "@/components/build-log/log-list";
+import { listLog } from "@/db/queries/build-log";
+import { latestCutPlan, listProjectCutPlans } from "@/db/queries/cut-plans";
 import { listDesigns, listProjectRevisions } from "@/db/queries/designs";
 import { clientMembers, listProjectReviews, projectDeposit } from "@/db/queries/reviews";
 import { reviewStatus, showsRun } from "@/lib/review/review-state";
@@ -21,8 +23,6 @@ import { AppError } from "@/lib/server/errors";
 
 export const metadata: Metadata = { title: "Project" };
 
-// What a later stage will put here; said plainly, with no sample data.
-const COMING = [{ title: "Build log and assembly sheet", text: "Notes, site photos and the printable assembly sheet for the installer." }];
 
 /** What the send form offers: each saved revision, the run its mock-up would show, and why it cannot go now. */
 async function sendable(projectId: number, reviews: Awaited<ReturnType<typeof listProjectReviews>>): Promise<SendableRevision[]> {
@@ -51,12 +51,14 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
     if (e instanceof AppError && e.kind === "not_found") notFound();
     throw e;
   });
-  const [project, members, designs, reviews, deposit] = await Promise.all([
+  const [project, members, designs, reviews, deposit, log, plans] = await Promise.all([
     getProjectSummary(access.projectId),
     listMembers(access.projectId),
     listDesigns(access.projectId),
     listProjectReviews(access.projectId),
     projectDeposit(access.projectId),
+    listLog(access.projectId, { limit: 5 }),
+    listProjectCutPlans(access.projectId),
   ]);
   if (!project) notFound();
   const [toSend, clients] = access.canManage ? await Promise.all([sendable(access.projectId, reviews), clientMembers(access.projectId)]) : [[], []];
@@ -162,13 +164,33 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
         </div>
       </Panel>
 
-      <div className="grid gap-4 sm:grid-cols-2">
-        {COMING.map((c) => (
-          <Panel key={c.title} title={c.title}>
-            <p className="text-sm text-ink-soft">Not built yet. {c.text}</p>
-          </Panel>
-        ))}
-      </div>
+      <Panel title="Assembly sheets">
+        {plans.length === 0 ? (
+          <p className="text-sm text-ink-soft">No cut plan is stored yet: the assembly sheet comes from a stored cut plan.</p>
+        ) : (
+          <ul className="flex flex-col gap-1 text-sm" data-testid="assembly-sheets">
+            {plans.map((p) => (
+              <li key={p.id}>
+                <Link href={`/projects/${access.projectId}/cut-plans/${p.id}/assembly`} className="font-medium underline decoration-ink-line underline-offset-2">
+                  Assembly sheet: {p.designName} R{p.revisionNumber}
+                </Link>{" "}
+                <span className="text-xs text-ink-soft">(cut plan {p.id}, {String((p.summary as { purpose?: string }).purpose ?? "review")})</span>
+              </li>
+            ))}
+          </ul>
+        )}
+      </Panel>
+
+      <Panel
+        title="Build log"
+        actions={
+          <Link href={`/projects/${access.projectId}/log`} className="text-sm font-medium underline">
+            {access.canManage || access.memberRole === "installer" ? "Whole log, add an entry" : "Whole log"}
+          </Link>
+        }
+      >
+        <LogList entries={log} />
+      </Panel>
     </>
   );
 }

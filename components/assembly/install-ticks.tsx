@@ -1,0 +1,91 @@
+"use client";
+// The installer's ticks on the assembly sheet: a box per part and per joint. Each tick (or untick)
+// is written to the build log with the part ids; the bar shows how many of all are installed.
+import { createContext, useContext, useState, type ReactNode } from "react";
+import { postJson } from "@/components/review/review-api";
+
+interface TickState {
+  done: Record<string, boolean>;
+  installed: number;
+  total: number;
+}
+
+interface Ticks {
+  state: TickState;
+  canTick: boolean;
+  busy: string | null;
+  error: string | null;
+  toggle: (item: string) => void;
+}
+
+const TicksContext = createContext<Ticks | null>(null);
+
+export function InstallTicks({ cutPlanId, initial, canTick, children }: { cutPlanId: number; initial: TickState; canTick: boolean; children: ReactNode }) {
+  const [state, setState] = useState(initial);
+  const [busy, setBusy] = useState<string | null>(null);
+  const [error, setError] = useState<string | null>(null);
+  const toggle = async (item: string) => {
+    if (!canTick || busy) return;
+    setBusy(item);
+    setError(null);
+    const answer = await postJson<{ items: { item: string; done: boolean }[]; installed: number; total: number }>(`/api/cut-plans/${cutPlanId}/ticks`, { item, done: !state.done[item] });
+    setBusy(null);
+    if (!answer.ok) {
+      setError(answer.message);
+      return;
+    }
+    setState({ done: Object.fromEntries(answer.body.items.map((i) => [i.item, i.done])), installed: answer.body.installed, total: answer.body.total });
+  };
+  return <TicksContext.Provider value={{ state, canTick, busy, error, toggle }}>{children}</TicksContext.Provider>;
+}
+
+function useTicks(): Ticks {
+  const t = useContext(TicksContext);
+  if (!t) throw new Error("TickBox must sit inside InstallTicks");
+  return t;
+}
+
+/** The box in a table row: a checkbox on screen for those who tick, an empty square on paper. */
+export function TickBox({ item, label }: { item: string; label: string }) {
+  const { state, canTick, busy, toggle } = useTicks();
+  const done = !!state.done[item];
+  return (
+    <>
+      <input
+        type="checkbox"
+        className="no-print size-4 accent-ink"
+        checked={done}
+        disabled={!canTick || busy === item}
+        onChange={() => toggle(item)}
+        aria-label={`${label} installed`}
+        data-testid={`tick-${item}`}
+      />
+      <span className="print-only inline-block size-3.5 border border-ink align-middle" aria-hidden>
+        {done ? "✓" : ""}
+      </span>
+    </>
+  );
+}
+
+export function InstallProgress() {
+  const { state, error, canTick } = useTicks();
+  const share = state.total ? state.installed / state.total : 0;
+  return (
+    <div className="flex flex-col gap-1" data-testid="install-progress">
+      <div role="progressbar" aria-label="Installed" aria-valuemin={0} aria-valuemax={state.total} aria-valuenow={state.installed} className="h-2 w-full overflow-hidden rounded-plate bg-paper-deep">
+        <div className="h-full bg-ink" style={{ width: `${share * 100}%` }} />
+      </div>
+      <p className="text-sm">
+        <span className="font-mono" data-testid="install-count">
+          {state.installed} of {state.total}
+        </span>{" "}
+        parts and joints installed{canTick ? " · each tick goes into the build log" : ""}
+      </p>
+      {error ? (
+        <p role="alert" className="text-sm text-caution">
+          {error}
+        </p>
+      ) : null}
+    </div>
+  );
+}

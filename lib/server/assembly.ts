@@ -1,0 +1,34 @@
+import "server-only";
+// The installer's assembly sheet on the server: who may open it (every member of the project —
+// unlike the cut files, which are the shop's), and its content from the stored cut plan.
+import { getProjectSummary, projectShop } from "@/db/queries/projects";
+import { buildAssemblySheet } from "@/lib/assembly/build";
+import type { AssemblySheet } from "@/lib/assembly/sheet";
+import type { CutPlanRow } from "@/db/queries/cut-plans";
+import { jobForPlan, requireStoredPlan } from "./cut-plans";
+import { requireRevisionAccess, requireUser } from "./dal";
+import { AppError } from "./errors";
+
+/** The plan and the caller's access to its project: any member; 404 for the rest, as if it did not exist. */
+export async function requireSheetAccess(cutPlanId: number) {
+  await requireUser();
+  const plan = await requireStoredPlan(cutPlanId);
+  const access = await requireRevisionAccess(plan.revisionId).catch((e) => {
+    if (e instanceof AppError && e.kind === "not_found") throw new AppError("not_found", "No such cut plan.");
+    throw e;
+  });
+  return { ...access, plan };
+}
+
+export async function assemblySheetFor(plan: CutPlanRow, access: Awaited<ReturnType<typeof requireSheetAccess>>, opts: { inches?: boolean } = {}): Promise<AssemblySheet> {
+  const [job, project, shop] = await Promise.all([jobForPlan(plan, access.revision, access.designName), getProjectSummary(access.projectId), projectShop(access.projectId)]);
+  return buildAssemblySheet({
+    job,
+    cutPlanId: plan.id,
+    project: { name: project?.name ?? "Project", site: project?.site ?? "", client: project?.clientOrganisation ?? null },
+    approval: job.approval ?? null,
+    shop,
+    date: new Date(),
+    inches: opts.inches,
+  });
+}
