@@ -21,7 +21,7 @@ const filterArgs = filters.length ? ["--passWithNoTests", ...filters] : [];
 
 async function main() {
   ensureNodeModules();
-  ensureDebianPackages([debian.mariadb, debian.chromium, debian.mpmath, debian.scipy, debian.ezdxf, debian.unzip]);
+  ensureDebianPackages([debian.mariadb, debian.chromium, debian.mpmath, debian.scipy, debian.ezdxf, debian.unzip, debian.poppler]);
   const s = testSettings();
   const env = { ...s.env, AXLEWRIGHT_TEST_OUTPUT: path.join(root, "test-results") };
   onInterrupt(() => waitForStopped());

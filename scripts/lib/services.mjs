@@ -76,6 +76,7 @@ export const debian = {
   scipy: { name: "python3-scipy", present: () => pythonHas("scipy") },
   ezdxf: { name: "python3-ezdxf", present: () => pythonHas("ezdxf") },
   unzip: { name: "unzip", present: () => existsSync("/usr/bin/unzip") },
+  poppler: { name: "poppler-utils", present: () => existsSync("/usr/bin/pdftotext") },
 };
 
 function pythonHas(module) {
