@@ -20,7 +20,22 @@ export function installationBody(result: SolvedGeometry, scene: RunLayout): Roll
   return { outline: densified(scene.wheel, OUTLINE_SPACING_MM), turnAt: (x) => wheelTurnAt(result, scene, x) };
 }
 
+// The same plan asks for the same figures every time its sheet is opened or printed: remember the
+// last few (in memory only; they follow from the frozen revision and the plan, so they never go stale).
+const remembered = new Map<string, RunTolerances>();
+const REMEMBER = 32;
+
 export function runTolerances(result: SolvedGeometry, run: RunChoice, stations: { joints: number[]; supports: number[] }, limit = DEFAULT_BUMP_LIMIT_MM): RunTolerances {
+  const key = JSON.stringify([result.specHash, run.runLength, run.endTreatment, stations.joints, stations.supports, limit]);
+  const hit = remembered.get(key);
+  if (hit) return hit;
+  const worked = workOut(result, run, stations, limit);
+  remembered.set(key, worked);
+  if (remembered.size > REMEMBER) remembered.delete(remembered.keys().next().value!);
+  return worked;
+}
+
+function workOut(result: SolvedGeometry, run: RunChoice, stations: { joints: number[]; supports: number[] }, limit: number): RunTolerances {
   const scene = runScene(result, run);
   if (scene.kind !== "run") return { joints: [], supports: [] };
   const body = installationBody(result, scene);

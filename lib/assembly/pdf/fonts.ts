@@ -1,12 +1,10 @@
-// The shipped IBM Plex faces (fonts/, SIL Open Font License 1.1), registered with pdfkit from their
-// WOFF2 files, decoded to TrueType first (see woff2.ts for why), so they are embedded as subsets
-// and the text stays real, extractable text.
-// The files are fontsource's "latin" subsets, so a few characters our wording may carry (→, ≥, μ)
-// have no glyph; printable() spells those in characters the faces do have, rather than let a blank
-// box (the .notdef glyph) reach the shop floor.
-import { existsSync, readFileSync } from "node:fs";
+// The shipped IBM Plex faces for print (fonts/ibm-plex-print: IBM's complete WOFF 1.0 files, SIL
+// Open Font License 1.1), registered with pdfkit, which embeds the glyphs used as subsets so the
+// text stays real, extractable text. (pdfkit's font reader cannot read the subset WOFF2 files the web
+// pages use.) printable() spells the few characters our wording may carry that a sheet should not
+// depend on (→, ≥, μ) in plain ones, rather than let a blank box (the .notdef glyph) reach the shop floor.
+import { existsSync } from "node:fs";
 import path from "node:path";
-import { woff2ToSfnt } from "./woff2";
 
 export const FONT = {
   sans: "plex-sans",
@@ -21,13 +19,13 @@ export const FONT = {
 export type FontName = (typeof FONT)[keyof typeof FONT];
 
 const FILES: Record<FontName, string> = {
-  [FONT.sans]: "ibm-plex-sans/ibm-plex-sans-latin-400-normal.woff2",
-  [FONT.sansMedium]: "ibm-plex-sans/ibm-plex-sans-latin-500-normal.woff2",
-  [FONT.sansSemibold]: "ibm-plex-sans/ibm-plex-sans-latin-600-normal.woff2",
-  [FONT.sansBold]: "ibm-plex-sans/ibm-plex-sans-latin-700-normal.woff2",
-  [FONT.mono]: "ibm-plex-mono/ibm-plex-mono-latin-400-normal.woff2",
-  [FONT.monoMedium]: "ibm-plex-mono/ibm-plex-mono-latin-500-normal.woff2",
-  [FONT.monoSemibold]: "ibm-plex-mono/ibm-plex-mono-latin-600-normal.woff2",
+  [FONT.sans]: "ibm-plex-print/IBMPlexSans-Regular.woff",
+  [FONT.sansMedium]: "ibm-plex-print/IBMPlexSans-Medium.woff",
+  [FONT.sansSemibold]: "ibm-plex-print/IBMPlexSans-SemiBold.woff",
+  [FONT.sansBold]: "ibm-plex-print/IBMPlexSans-Bold.woff",
+  [FONT.mono]: "ibm-plex-print/IBMPlexMono-Regular.woff",
+  [FONT.monoMedium]: "ibm-plex-print/IBMPlexMono-Medium.woff",
+  [FONT.monoSemibold]: "ibm-plex-print/IBMPlexMono-SemiBold.woff",
 };
 
 /** The font files by name, resolved under `fontsDir`; throws naming the first one missing. */
@@ -41,19 +39,12 @@ export function fontFiles(fontsDir: string): Record<FontName, string> {
   return out;
 }
 
-// Decoded once per file for the life of the process: the files ship with the app and do not change.
-const decoded = new Map<string, Buffer>();
-
 export function registerFonts(doc: PDFKit.PDFDocument, files: Record<FontName, string>): void {
-  for (const [name, file] of Object.entries(files)) {
-    let ttf = decoded.get(file);
-    if (!ttf) decoded.set(file, (ttf = woff2ToSfnt(readFileSync(file))));
-    doc.registerFont(name, ttf);
-  }
+  for (const [name, file] of Object.entries(files)) doc.registerFont(name, file);
 }
 
-// Every face ships these beyond printable ASCII (checked against each file's cmap): Latin-1, ı Œ œ,
-// a few modifier letters, – — ‘ ’ ‚ “ ” „ • … ′ ″ ‹ › ⁄ € ™ ↑ ↓ − ∕.
+// Characters the sheet prints as they are: printable ASCII, Latin-1, ı Œ œ, – — ‘ ’ ‚ “ ” „ • … ′ ″ ‹ › ⁄ € ™ ↑ ↓ − ∕
+// (every IBM Plex face has them); anything else is spelled out below.
 const HAS_GLYPH = /[\u0020-\u007e\u00a0-\u00ff\u0131\u0152\u0153\u2013\u2014\u2018-\u201a\u201c-\u201e\u2022\u2026\u2032\u2033\u2039\u203a\u2044\u20ac\u2122\u2191\u2193\u2212\u2215]/u;
 
 const SPELLED: Record<string, string> = {
