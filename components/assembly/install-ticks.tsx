@@ -26,12 +26,17 @@ export function InstallTicks({ cutPlanId, initial, canTick, children }: { cutPla
   const [error, setError] = useState<string | null>(null);
   const toggle = async (item: string) => {
     if (!canTick || busy) return;
+    const done = !state.done[item];
+    const before = state;
+    // The box shows the tick at once; the server's answer then sets the count (or undoes the tick).
+    setState({ ...state, done: { ...state.done, [item]: done }, installed: state.installed + (done ? 1 : -1) });
     setBusy(item);
     setError(null);
-    const answer = await postJson<{ items: { item: string; done: boolean }[]; installed: number; total: number }>(`/api/cut-plans/${cutPlanId}/ticks`, { item, done: !state.done[item] });
+    const answer = await postJson<{ items: { item: string; done: boolean }[]; installed: number; total: number }>(`/api/cut-plans/${cutPlanId}/ticks`, { item, done });
     setBusy(null);
     if (!answer.ok) {
-      setError(answer.message);
+      setState(before);
+      setError(`${item} was not recorded: ${answer.message}`);
       return;
     }
     setState({ done: Object.fromEntries(answer.body.items.map((i) => [i.item, i.done])), installed: answer.body.installed, total: answer.body.total });
@@ -55,7 +60,7 @@ export function TickBox({ item, label }: { item: string; label: string }) {
         type="checkbox"
         className="no-print size-4 accent-ink"
         checked={done}
-        disabled={!canTick || busy === item}
+        disabled={!canTick || (busy !== null && busy !== item)}
         onChange={() => toggle(item)}
         aria-label={`${label} installed`}
         data-testid={`tick-${item}`}

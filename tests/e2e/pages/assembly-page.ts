@@ -23,11 +23,12 @@ export class AssemblyPage {
     return this.page.getByTestId("install-count").innerText();
   }
 
-  /** Ticks an item and waits until the count says so. */
+  /** Ticks an item and waits until the server has recorded it (the log entry's answer re-enables the boxes). */
   async tick(item: string) {
-    const before = await this.installedCount();
+    const recorded = this.page.waitForResponse((r) => r.url().includes("/ticks") && r.request().method() === "POST");
     await this.page.getByTestId(`tick-${item}`).check();
-    await this.page.waitForFunction((b) => document.querySelector("[data-testid=install-count]")?.textContent !== b, before);
+    const res = await recorded;
+    if (res.status() !== 201) throw new Error(`the tick of ${item} was refused: ${res.status()}`);
   }
 
   async openLog() {
