@@ -20,7 +20,15 @@ export async function requireSheetAccess(cutPlanId: number) {
   return { ...access, plan };
 }
 
-export async function assemblySheetFor(plan: CutPlanRow, access: Awaited<ReturnType<typeof requireSheetAccess>>, opts: { inches?: boolean } = {}): Promise<AssemblySheet> {
+/** The bump limit a request asks for, mm: 0.1 to 10, else the default. */
+export function bumpLimitParam(raw: string | null | undefined): number | undefined {
+  if (raw === null || raw === undefined || raw === "") return undefined;
+  const v = Number(raw);
+  if (!Number.isFinite(v) || v < 0.1 || v > 10) throw new AppError("bad_request", "The bump limit must be a number of millimetres from 0.1 to 10.", { limit: ["0.1 to 10 mm"] });
+  return v;
+}
+
+export async function assemblySheetFor(plan: CutPlanRow, access: Awaited<ReturnType<typeof requireSheetAccess>>, opts: { inches?: boolean; bumpLimit?: number } = {}): Promise<AssemblySheet> {
   const [job, project, shop] = await Promise.all([jobForPlan(plan, access.revision, access.designName), getProjectSummary(access.projectId), projectShop(access.projectId)]);
   return buildAssemblySheet({
     job,
@@ -30,5 +38,6 @@ export async function assemblySheetFor(plan: CutPlanRow, access: Awaited<ReturnT
     shop,
     date: new Date(),
     inches: opts.inches,
+    bumpLimit: opts.bumpLimit,
   });
 }

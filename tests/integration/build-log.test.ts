@@ -260,6 +260,26 @@ describe("the assembly sheet PDF", () => {
     }
   });
 
+  it("works the tolerances out for the bump limit asked for, and refuses one out of range", async () => {
+    actAs(ids["installer member"]);
+    const dir = mkdtempSync(join(tmpdir(), "axlewright-limit-"));
+    const tolerances = async (limit: string) => {
+      const res = await sheetRoute.GET(new Request(`http://test.local/api/cut-plans/${planId}/assembly-sheet?paper=a4&limit=${limit}`), ctx({ id: String(planId) }));
+      expect(res.status).toBe(200);
+      const file = join(dir, `l${limit}.pdf`);
+      writeFileSync(file, Buffer.from(await res.arrayBuffer()));
+      return [...execFileSync("/usr/bin/pdftotext", ["-layout", file, "-"], { encoding: "utf8" }).matchAll(/± ?(\d+\.\d+) mm/g)].map((m) => Number(m[1]));
+    };
+    const wide = await tolerances("1");
+    const tight = await tolerances("0.5");
+    expect(wide.length).toBeGreaterThan(0);
+    expect(tight.length).toBe(wide.length);
+    // Half the bump allowed, no more than half the tolerance (to the 0.05 mm the figures are rounded down to).
+    tight.forEach((t, i) => expect(t).toBeLessThanOrEqual(wide[i] / 2 + 0.05));
+    const bad = await sheetRoute.GET(new Request(`http://test.local/api/cut-plans/${planId}/assembly-sheet?paper=a4&limit=50`), ctx({ id: String(planId) }));
+    expect(bad.status).toBe(400);
+  });
+
   it("is there for every member of the project and nobody else", async () => {
     for (const caller of CALLERS) {
       actAs(caller === "anonymous" ? null : ids[caller]);

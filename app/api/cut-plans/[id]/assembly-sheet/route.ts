@@ -1,18 +1,18 @@
 import { assemblySheetPdf } from "@/lib/assembly/pdf";
 import { PAPER_SIZES, type Paper } from "@/lib/assembly/sheet";
 import { slug } from "@/lib/cut";
-import { assemblySheetFor, requireSheetAccess } from "@/lib/server/assembly";
+import { assemblySheetFor, bumpLimitParam, requireSheetAccess } from "@/lib/server/assembly";
 import { AppError } from "@/lib/server/errors";
 import { idParam, route } from "@/lib/server/route";
 
-/** The assembly sheet as a PDF made on the server (`?paper=a4|letter`, `&units=in` for inches beside mm): any member of the project. */
+/** The assembly sheet as a PDF made on the server (`?paper=a4|letter`, `&units=in` for inches beside mm, `&limit=` the bump in mm the tolerances allow): any member of the project. */
 export const GET = route<{ id: string }>(async (request, params) => {
   const access = await requireSheetAccess(idParam(params.id, "cut plan"));
   const q = new URL(request.url).searchParams;
   const paper = (q.get("paper") ?? "a4").toLowerCase();
   if (!(paper in PAPER_SIZES)) throw new AppError("bad_request", 'The paper must be "a4" or "letter".', { paper: ["a4 or letter"] });
   const units = q.get("units");
-  const sheet = await assemblySheetFor(access.plan, access, { inches: units === "in" ? true : units === "mm" ? false : undefined });
+  const sheet = await assemblySheetFor(access.plan, access, { inches: units === "in" ? true : units === "mm" ? false : undefined, bumpLimit: bumpLimitParam(q.get("limit")) });
   const pdf = await assemblySheetPdf(sheet, { paper: paper as Paper });
   const name = `${slug(`${sheet.project.name} ${sheet.design.name} r${sheet.design.revision}`)}-assembly-${paper}.pdf`;
   return new Response(new Uint8Array(pdf), {

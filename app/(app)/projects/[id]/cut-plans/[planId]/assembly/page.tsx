@@ -8,7 +8,7 @@ import { CautionList } from "@/components/review/caution-list";
 import { formatWhen } from "@/components/format";
 import { Table } from "@/components/ui/table";
 import { PAPER_SIZES, type Paper } from "@/lib/assembly/sheet";
-import { assemblySheetFor, requireSheetAccess } from "@/lib/server/assembly";
+import { assemblySheetFor, bumpLimitParam, requireSheetAccess } from "@/lib/server/assembly";
 import { requirePageUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
 import { ticksOf } from "@/lib/server/installation-ticks";
@@ -28,7 +28,7 @@ function Section({ n, title, children, breakBefore }: { n: number; title: string
   );
 }
 
-export default async function AssemblySheetPage({ params, searchParams }: { params: Promise<{ id: string; planId: string }>; searchParams: Promise<{ paper?: string; units?: string }> }) {
+export default async function AssemblySheetPage({ params, searchParams }: { params: Promise<{ id: string; planId: string }>; searchParams: Promise<{ paper?: string; units?: string; limit?: string }> }) {
   await requirePageUser();
   const { id, planId } = await params;
   const q = await searchParams;
@@ -39,12 +39,21 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
   if (String(access.projectId) !== id) notFound();
   const paper: Paper = q.paper === "letter" ? "letter" : "a4";
   const inchesAsked = q.units === "in" ? true : q.units === "mm" ? false : undefined;
-  const [sheet, ticks] = await Promise.all([assemblySheetFor(access.plan, access, { inches: inchesAsked }), ticksOf(access)]);
+  // A limit out of range falls back to the default rather than failing the page; the form says the range.
+  const bumpLimit = (() => {
+    try {
+      return bumpLimitParam(q.limit);
+    } catch {
+      return undefined;
+    }
+  })();
+  const [sheet, ticks] = await Promise.all([assemblySheetFor(access.plan, access, { inches: inchesAsked, bumpLimit }), ticksOf(access)]);
   const inches = sheet.inches;
   const canTick = access.canManage || access.memberRole === "installer";
   const base = `/projects/${access.projectId}/cut-plans/${access.plan.id}/assembly`;
-  const link = (o: { paper?: Paper; units?: "mm" | "in" }) => `${base}?paper=${o.paper ?? paper}&units=${o.units ?? (inches ? "in" : "mm")}`;
-  const pdf = `/api/cut-plans/${access.plan.id}/assembly-sheet?paper=${paper}&units=${inches ? "in" : "mm"}`;
+  const limitQuery = bumpLimit !== undefined ? `&limit=${bumpLimit}` : "";
+  const link = (o: { paper?: Paper; units?: "mm" | "in" }) => `${base}?paper=${o.paper ?? paper}&units=${o.units ?? (inches ? "in" : "mm")}${limitQuery}`;
+  const pdf = `/api/cut-plans/${access.plan.id}/assembly-sheet?paper=${paper}&units=${inches ? "in" : "mm"}${limitQuery}`;
   const initial = { done: Object.fromEntries(ticks.items.map((i) => [i.item, i.done])), installed: ticks.installed, total: ticks.total };
 
   return (
@@ -68,6 +77,17 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
         <Link href={link({ units: "in" })} className={inches ? "font-semibold" : "underline"}>
           mm and inches
         </Link>
+        <form method="get" className="flex items-center gap-1">
+          <input type="hidden" name="paper" value={paper} />
+          <input type="hidden" name="units" value={inches ? "in" : "mm"} />
+          <label htmlFor="bump-limit" className="text-ink-soft">
+            Bump limit (mm)
+          </label>
+          <input id="bump-limit" name="limit" inputMode="decimal" defaultValue={sheet.tolerance.bumpLimit} className="w-16 rounded-plate border border-ink-line bg-white/70 px-1.5 py-0.5 font-mono" title="0.1 to 10 mm" />
+          <button type="submit" className="underline">
+            Apply
+          </button>
+        </form>
         <span className="flex-1" />
         <PrintButton />
         <a href={pdf} className="rounded-plate border border-ink bg-ink px-3 py-1.5 font-medium text-paper" data-testid="download-pdf" download>
