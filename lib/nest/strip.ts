@@ -66,7 +66,7 @@ export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEF
     const b = boxes[i][0];
     throw new Error(`${items[i].id} is ${fmt(b.maxX - b.minX)} × ${fmt(b.maxY - b.minY)}; it does not fit across the strip (${fmt(height)}) in any allowed rotation`);
   });
-  if (total === 0) return { utilisation: 0, length: 0, placed: 0, seconds: budget.elapsed(), cancelled: budget.aborted, placements: [] };
+  if (total === 0) return { utilisation: 0, length: 0, placed: 0, seconds: budget.elapsed(), iterations: 0, cancelled: budget.aborted, placements: [] };
 
   const lib = await loadClipper();
   const area = items.map((it) => ringArea(it.polygon));
@@ -129,6 +129,7 @@ export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEF
       length: bestLength,
       placed: total,
       seconds: budget.elapsed(),
+      iterations: budget.iterations,
       cancelled: budget.aborted,
       placements,
     };

@@ -80,6 +80,8 @@ export interface StripNestResult {
   length: number;
   placed: number;
   seconds: number;
+  /** Search iterations run: with the seed, this fixes the layout whatever the machine's speed. */
+  iterations: number;
   cancelled: boolean;
   placements: Placement[];
 }

@@ -5,12 +5,19 @@
 // identity κ_w − κ_r = 1/√(r² + r′²) between a wheel and its road (MATH.md §1.7, derived there and
 // checked numerically), or κ₁ + κ₂ = (a/r₂)/√(r₁² + r₁′²) for a pair on fixed axles (MATH.md §5.5).
 // Corners and cusps have radius 0.
+// The contact's own combined radius, 1/(κ₁ + κ₂) with each body convex towards the other positive
+// (the radius Hertz contact is computed at; K. L. Johnson, "Contact Mechanics", 1985, §4.2), follows
+// from the same identities: on a road with the axle level it is √(r² + r′²) = r·sec ψ (r the
+// axle-to-contact distance, ψ the tilt of the contact normal; for a graph track r·√(1 + y′²)), and for
+// a pair on fixed axles (a − r₁)·√(r₁² + r₁′²)/a. A corner or cusp gives 0.
 
 import { extremes, type Extreme } from "./extremes";
 import type { Piecewise } from "./piecewise";
 
 export interface Figures {
   friction: Extreme;
+  /** Smallest combined radius of the contact along the roll, and where (0 at a corner or cusp). */
+  contact: Extreme;
   /** Smallest radius of curvature of each body (0 at a corner). */
   radiusA: number;
   radiusB: number;
@@ -34,6 +41,33 @@ function minRadius(pw: Piecewise, kappa: (t: number, side: -1 | 0 | 1) => number
     best = Math.max(best, e.max.value);
   }
   return best === 0 ? Infinity : 1 / best;
+}
+
+function minOver(pw: Piecewise, g: (t: number, side: -1 | 0 | 1) => number): Extreme {
+  let best: Extreme = { value: Infinity, at: NaN };
+  for (const p of pieces(pw)) {
+    const e = extremes(at(pw, p, g), [p], 24);
+    if (e.min.value < best.value) best = e.min;
+  }
+  return best;
+}
+
+/** Where the one-sided slopes differ first: an inner knot, or the period's ends when they do not meet. */
+export function kinkAt(pw: Piecewise, slope: (t: number, side: -1 | 1) => number): number | null {
+  const differ = (l: number, r: number) => Math.abs(l - r) > 1e-7 * (1 + Math.abs(r));
+  for (let i = 1; i + 1 < pw.knots.length; i++) {
+    const k = pw.knots[i];
+    if (differ(slope(k, -1), slope(k, 1))) return k;
+  }
+  const lo = pw.knots[0];
+  const hi = pw.knots[pw.knots.length - 1];
+  return differ(slope(hi, -1), slope(lo, 1)) ? lo : null;
+}
+
+/** The contact figure of a body with a corner: radius 0 at the corner, else the smooth minimum. */
+function contactOf(pw: Piecewise, hasCorners: boolean, radius: (t: number, side: -1 | 0 | 1) => number): Extreme {
+  if (hasCorners) return { value: 0, at: kinkAt(pw, (t, s) => pw.d1(t, s)) ?? pw.knots[0] };
+  return minOver(pw, radius);
 }
 
 function maxOver(pw: Piecewise, g: (t: number, side: -1 | 0 | 1) => number): Extreme {
@@ -65,7 +99,8 @@ export function wheelAndRoadFigures(w: Piecewise, hasCorners: boolean): Figures 
     const d = w.d1(t, s);
     return kw(t, s) - 1 / Math.sqrt(r * r + d * d);
   };
-  return { friction, radiusA: hasCorners ? 0 : minRadius(w, kw), radiusB: hasCorners ? 0 : minRadius(w, kr) };
+  const contact = contactOf(w, hasCorners, (t, s) => Math.hypot(w.f(t), w.d1(t, s)));
+  return { friction, contact, radiusA: hasCorners ? 0 : minRadius(w, kw), radiusB: hasCorners ? 0 : minRadius(w, kr) };
 }
 
 /**
@@ -84,7 +119,21 @@ export function trackAndWheelFigures(g: Piecewise, h: number, sgn: 1 | -1, hasKi
     // Seen from the wheel's side the track bends the other way when the wheel is below it.
     return sgn * kt(x, s) + 1 / (r * Math.sqrt(1 + d * d));
   };
-  return { friction, radiusA: hasKinks ? 0 : minRadius(g, kt), radiusB: hasKinks ? 0 : minRadius(g, kw) };
+  const contact = contactOf(g, hasKinks, (x, s) => sgn * (h - g.f(x)) * Math.hypot(1, g.d1(x, s)));
+  return { friction, contact, radiusA: hasKinks ? 0 : minRadius(g, kt), radiusB: hasKinks ? 0 : minRadius(g, kw) };
+}
+
+/**
+ * Two wheels made from one track graph, above it at h₁ and below it at h₂, rolling on each other
+ * (twin wheels): the contact is on the track line, r₁ = h₁ − y and r₂ = y − h₂ from the axles, and
+ * the combined radius is r₁r₂/(r₁ + r₂)·√(1 + y′²).
+ */
+export function twinContact(g: Piecewise, h1: number, h2: number, hasKinks: boolean): Extreme {
+  return contactOf(g, hasKinks, (x, s) => {
+    const r1 = h1 - g.f(x);
+    const r2 = g.f(x) - h2;
+    return ((r1 * r2) / (r1 + r2)) * Math.hypot(1, g.d1(x, s));
+  });
 }
 
 /** A driver r₁(t) over one sector and its partner at centre distance a. */
@@ -96,7 +145,8 @@ export function pairFigures(w: Piecewise, a: number, hasCorners: boolean): Figur
     const d = w.d1(t, s);
     return a / (a - r) / Math.sqrt(r * r + d * d) - k1(t, s);
   };
-  return { friction, radiusA: hasCorners ? 0 : minRadius(w, k1), radiusB: hasCorners ? 0 : minRadius(w, k2) };
+  const contact = contactOf(w, hasCorners, (t, s) => ((a - w.f(t)) * Math.hypot(w.f(t), w.d1(t, s))) / a);
+  return { friction, contact, radiusA: hasCorners ? 0 : minRadius(w, k1), radiusB: hasCorners ? 0 : minRadius(w, k2) };
 }
 
 /** True if the one-sided slopes differ at any inner knot (a corner or cusp). */

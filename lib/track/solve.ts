@@ -3,7 +3,7 @@
 
 import { Deadline } from "./deadline";
 import { EngineError } from "./errors";
-import { hasKinks, pairFigures, trackAndWheelFigures, wheelAndRoadFigures, type Figures } from "./figures";
+import { hasKinks, pairFigures, trackAndWheelFigures, twinContact, wheelAndRoadFigures, type Figures } from "./figures";
 import { partnerFor, solveCentreDistance } from "./partner";
 import { piecewise } from "./piecewise";
 import { checkPairRoll, checkTrackRoll, type Curve, type RollCheck } from "./rolling-check";
@@ -134,14 +134,22 @@ function trackForWheelMode(ctx: Ctx, base: Base): Stages {
     });
     const hasCorners = wheel.corners.length > 0;
     const fig = wheelAndRoadFigures(piecewise(wheel.r, 0, T, tfw.breaks, 1), hasCorners);
-    const c = makeCheck(roll, { max: fig.friction.value, at: tfw.x.value(fig.friction.at) }, { wheel: fig.radiusA, track: fig.radiusB });
+    const c = makeCheck(roll, { max: fig.friction.value, at: tfw.x.value(fig.friction.at) }, { wheel: fig.radiusA, track: fig.radiusB }, {
+      min: fig.contact.value,
+      at: tfw.x.value(fig.contact.at),
+    });
     return { check: c, warnings: warnings(c, fig, wheel.rMax, ctx.spec.units, hasCorners, false) };
   };
   return { geometry, check };
 }
 
-function makeCheck(roll: RollCheck, frictionDemand: Check["frictionDemand"], minCurvatureRadius: Check["minCurvatureRadius"]): Check {
-  return { ...roll, frictionDemand, minCurvatureRadius };
+function makeCheck(
+  roll: RollCheck,
+  frictionDemand: Check["frictionDemand"],
+  minCurvatureRadius: Check["minCurvatureRadius"],
+  contactRadius: Check["contactRadius"],
+): Check {
+  return { ...roll, frictionDemand, minCurvatureRadius, contactRadius };
 }
 
 function trackSamples(track: Track, ctx: Ctx) {
@@ -252,7 +260,7 @@ function wheelForTrackMode(ctx: Ctx, base: Base): Stages {
     });
     const kinks = trackKinks(track);
     const fig = trackAndWheelFigures(piecewise(track.yAt, 0, P, inner, P), h, 1, kinks);
-    const c = makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusB, track: fig.radiusA });
+    const c = makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusB, track: fig.radiusA }, { min: fig.contact.value, at: fig.contact.at });
     return { check: c, warnings: warnings(c, fig, rMax, ctx.spec.units, kinks, false) };
   };
   return { geometry, options, check };
@@ -298,7 +306,7 @@ function partnerMode(ctx: Ctx, base: Base): Stages {
     const hasCorners = wheel.corners.length > 0;
     const fig = pairFigures(piecewise(wheel.r, 0, T1, breaks, 1), a, hasCorners);
     const c: Check = {
-      ...makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusA, partner: fig.radiusB }),
+      ...makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusA, partner: fig.radiusB }, { min: fig.contact.value, at: fig.contact.at }),
       speedRatio: { min: wheel.rMin / (a - wheel.rMin), max: wheel.rMax / (a - wheel.rMax) },
     };
     return { check: c, warnings: warnings(c, fig, a - wheel.rMin, ctx.spec.units, hasCorners, true) };
@@ -365,12 +373,18 @@ function twinMode(ctx: Ctx, base: Base): Stages {
     const g = piecewise(track.yAt, 0, P, inner, P);
     const figTop = trackAndWheelFigures(g, h1, 1, kinks);
     const figBottom = trackAndWheelFigures(g, h2, -1, kinks);
+    const contact = twinContact(g, h1, h2, kinks);
     const c: Check = {
-      ...makeCheck(roll, { max: figTop.friction.value, at: figTop.friction.at }, { wheel: figTop.radiusB, partner: figBottom.radiusB, track: figTop.radiusA }),
+      ...makeCheck(
+        roll,
+        { max: figTop.friction.value, at: figTop.friction.at },
+        { wheel: figTop.radiusB, partner: figBottom.radiusB, track: figTop.radiusA },
+        { min: contact.value, at: contact.at },
+      ),
       speedRatio: { min: (h1 - track.yMax) / (track.yMax - h2), max: (h1 - track.yMin) / (track.yMin - h2) },
       symmetryError: sym.error,
     };
-    const warn = warnings(c, { friction: figTop.friction, radiusA: figTop.radiusA, radiusB: Math.min(figTop.radiusB, figBottom.radiusB) }, rMax, ctx.spec.units, kinks, true);
+    const warn = warnings(c, { friction: figTop.friction, contact, radiusA: figTop.radiusA, radiusB: Math.min(figTop.radiusB, figBottom.radiusB) }, rMax, ctx.spec.units, kinks, true);
     if (sym.error > 1e-9 * rMax)
       warn.push({
         code: "not-point-symmetric",

@@ -41,6 +41,11 @@ export interface Check {
   /** Partner / twin: ω_partner / ω_driver. */
   speedRatio?: { min: number; max: number };
   minCurvatureRadius: { wheel: number; track?: number; partner?: number };
+  /**
+   * The tightest combined radius of the contact itself along the roll, 1/(κ₁ + κ₂) with each body
+   * convex towards the other positive (0 where a corner or cusp is in contact), and where (as frictionDemand.at).
+   */
+  contactRadius: { min: number; at: number };
   /** Twin wheels: how far the track is from point-symmetric (units). */
   symmetryError?: number;
 }
