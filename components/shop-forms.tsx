@@ -52,10 +52,31 @@ export function MaterialForm({ row }: { row?: Material }) {
     <form action={action} className="grid gap-3 sm:grid-cols-3" noValidate>
       {row ? <input type="hidden" name="id" value={row.id} /> : null}
       <TextField id={fieldId(p, "name")} label="Name" name="name" maxLength={120} defaultValue={v.name ?? row?.name} errors={f?.name} />
+      <SelectField
+        id={fieldId(p, "kind")}
+        label="Used as"
+        name="kind"
+        defaultValue={v.kind ?? row?.kind ?? "sheet"}
+        errors={f?.kind}
+        options={[
+          { value: "sheet", label: "A sheet parts are cut from" },
+          { value: "tread", label: "A tread on a wheel's rim" },
+        ]}
+      />
       <TextField id={fieldId(p, "thicknessMm")} label="Thickness (mm)" name="thicknessMm" inputMode="decimal" defaultValue={num("thicknessMm")} errors={f?.thicknessMm} />
       <TextField id={fieldId(p, "densityKgM3")} label="Density (kg/m³)" name="densityKgM3" inputMode="decimal" defaultValue={num("densityKgM3")} errors={f?.densityKgM3} />
       <TextField id={fieldId(p, "modulusGpa")} label="Modulus (GPa)" name="modulusGpa" inputMode="decimal" defaultValue={num("modulusGpa")} errors={f?.modulusGpa} />
       <TextField id={fieldId(p, "strengthMpa")} label="Strength (MPa)" name="strengthMpa" inputMode="decimal" defaultValue={num("strengthMpa")} errors={f?.strengthMpa} />
+      <TextField id={fieldId(p, "poisson")} label="Poisson's ratio ν" name="poisson" inputMode="decimal" defaultValue={num("poisson") || "0.3"} errors={f?.poisson} />
+      <TextField
+        id={fieldId(p, "allowableMpa")}
+        label="Allowable contact stress (MPa)"
+        name="allowableMpa"
+        inputMode="decimal"
+        defaultValue={num("allowableMpa")}
+        errors={f?.allowableMpa}
+        hint="For wood: compression perpendicular to the grain. Leave empty if not known."
+      />
       <TextField id={fieldId(p, "frictionStatic")} label="Static friction μ" name="frictionStatic" inputMode="decimal" defaultValue={num("frictionStatic")} errors={f?.frictionStatic} />
       <TextField id={fieldId(p, "frictionKinetic")} label="Kinetic friction μ" name="frictionKinetic" inputMode="decimal" defaultValue={num("frictionKinetic")} errors={f?.frictionKinetic} hint="Leave empty if not known." />
       <TextField id={fieldId(p, "frictionPair")} label="Surfaces the friction is for" name="frictionPair" maxLength={160} defaultValue={v.frictionPair ?? row?.frictionPair} errors={f?.frictionPair} />

@@ -113,6 +113,8 @@ export const designs = mysqlTable(
     mode: mysqlEnum("mode", DESIGN_MODES).notNull(),
     /** The working draft: a design spec as JSON (validated by the engine's schema before it is stored). */
     draft: json("draft").$type<Record<string, unknown>>().notNull(),
+    /** The load-path check's settings (use, load, materials, section, span, gaps; lib/validation/loads.ts), null until set. */
+    loads: json("loads").$type<Record<string, unknown>>(),
     createdById: int("created_by_id").references(() => users.id),
     createdAt: timestamp("created_at").notNull().defaultNow(),
     updatedAt: timestamp("updated_at").notNull().defaultNow().onUpdateNow(),
@@ -135,6 +137,8 @@ export const revisions = mysqlTable(
     specHash: char("spec_hash", { length: 64 }).notNull(),
     engineVersion: varchar("engine_version", { length: 32 }).notNull(),
     summary: json("summary").$type<Record<string, unknown>>().notNull(),
+    /** The load-path check's settings as they were when the revision was saved (null: the library's defaults). */
+    loads: json("loads").$type<Record<string, unknown>>(),
     note: varchar("note", { length: 500 }).notNull().default(""),
     createdById: int("created_by_id").references(() => users.id),
     createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
@@ -145,14 +149,22 @@ export const revisions = mysqlTable(
 /** Where a shop-library figure comes from: a cited source, or the trade's common practice. */
 export const SOURCE_KINDS = ["published", "common-practice", "measured"] as const;
 
+/** A sheet the shop cuts parts from, or a tread fitted to a wheel's rim. */
+export const MATERIAL_KINDS = ["sheet", "tread"] as const;
+export type MaterialKind = (typeof MATERIAL_KINDS)[number];
+
 /** The shop library: materials with the figures the checks use, each with its source. */
 export const materials = mysqlTable("materials", {
   id: int("id").autoincrement().primaryKey(),
   name: varchar("name", { length: 120 }).notNull().unique(),
+  kind: mysqlEnum("kind", MATERIAL_KINDS).notNull().default("sheet"),
   thicknessMm: double("thickness_mm").notNull(),
   densityKgM3: double("density_kg_m3").notNull(),
   modulusGpa: double("modulus_gpa").notNull(),
   strengthMpa: double("strength_mpa").notNull(),
+  poisson: double("poisson").notNull().default(0.3),
+  /** Allowable contact (bearing) stress, MPa: for wood, compression perpendicular to the grain. Null: not known. */
+  allowableMpa: double("allowable_mpa"),
   frictionStatic: double("friction_static").notNull(),
   frictionKinetic: double("friction_kinetic"),
   /** Which surfaces the friction figures are for, e.g. "rubber tread on this material, dry". */

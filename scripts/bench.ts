@@ -11,20 +11,10 @@ import { solveTrackForWheel } from "../lib/track/track-for-wheel";
 import { buildTrack } from "../lib/track/tracks";
 import { solveAxleHeight, wheelFromTrack, closureAngle } from "../lib/track/wheel-for-track";
 import { buildWheel, TAU, type Wheel } from "../lib/track/wheels";
+import { median } from "./bench-median";
 
 const dl = new Deadline();
 
-function median(fn: () => unknown, runs = 15): number {
-  fn();
-  const t: number[] = [];
-  for (let i = 0; i < runs; i++) {
-    const s = performance.now();
-    fn();
-    t.push(performance.now() - s);
-  }
-  t.sort((a, b) => a - b);
-  return t[t.length >> 1];
-}
 
 function trapezoid(f: (t: number) => number, a: number, b: number, n: number): number {
   const h = (b - a) / n;

@@ -1,7 +1,7 @@
 type Signal = "DANGER" | "WARNING" | "CAUTION" | "NOTICE";
 
 // Signal words as ANSI Z535.4 uses them; the one safety orange marks DANGER, WARNING and CAUTION.
-const TONE: Record<Signal, string> = {
+export const SIGNAL_TONE: Record<Signal, string> = {
   DANGER: "border-caution bg-caution text-white",
   WARNING: "border-caution bg-caution-soft text-caution",
   CAUTION: "border-caution text-caution",
@@ -9,15 +9,24 @@ const TONE: Record<Signal, string> = {
 };
 
 /** The cautions that apply to a design, each with its signal word, for people deciding about it. */
-export function CautionList({ cautions }: { cautions: { signal: Signal; text: string }[] }) {
-  return (
+export function CautionList({ cautions, disclaimer }: { cautions: { signal: Signal; text: string }[]; disclaimer?: string }) {
+  const list = (
     <ul className="flex flex-col gap-2" aria-label="Cautions" data-testid="review-cautions">
       {cautions.map((c, i) => (
         <li key={i} className="flex gap-2 text-sm">
-          <span className={`h-fit shrink-0 rounded-plate border px-1.5 py-0.5 font-mono text-[11px] font-semibold tracking-wider ${TONE[c.signal]}`}>{c.signal}</span>
+          <span className={`h-fit shrink-0 rounded-plate border px-1.5 py-0.5 font-mono text-[11px] font-semibold tracking-wider ${SIGNAL_TONE[c.signal]}`}>{c.signal}</span>
           <span>{c.text}</span>
         </li>
       ))}
     </ul>
+  );
+  if (!disclaimer) return list;
+  return (
+    <div className="flex flex-col gap-2">
+      {list}
+      <p className="text-xs text-ink-soft" data-testid="cautions-disclaimer">
+        {disclaimer}
+      </p>
+    </div>
   );
 }

@@ -9,9 +9,13 @@ import { useMemo, useState } from "react";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
-import { clearLocalDraft, loadLocalDraft, sameSpec, saveLocalDraft } from "@/lib/studio/local-draft";
+import type { Suggestion } from "@/lib/loads";
+import { settingsOrDefault, treadsOf, type LibraryMaterial } from "@/lib/loads/settings";
+import { clearLocalDraft, clearLocalLoads, loadLocalDraft, loadLocalLoads, sameSpec, saveLocalDraft, saveLocalLoads } from "@/lib/studio/local-draft";
 import { designSpecSchema, type DesignSpecInput } from "@/lib/track";
+import type { LoadsSettings } from "@/lib/validation/loads";
 import { api } from "./api";
+import { LoadsPanel } from "./loads/loads-panel";
 import { RevisionList } from "./revision-list";
 import { SpecForm } from "./spec-form/spec-form";
 import { useSolver } from "./use-solver";
@@ -22,7 +26,7 @@ function canonical(spec: unknown): unknown {
   return parsed.success ? parsed.data : spec;
 }
 
-export function DesignStudio({ designId, projectId, revisionNumber }: { designId: number; projectId: number; revisionNumber?: number }) {
+export function DesignStudio({ designId, projectId, revisionNumber, library = [] }: { designId: number; projectId: number; revisionNumber?: number; library?: LibraryMaterial[] }) {
   const router = useRouter();
   const queryClient = useQueryClient();
   const base = `/projects/${projectId}/designs/${designId}`;
@@ -50,14 +54,41 @@ export function DesignStudio({ designId, projectId, revisionNumber }: { designId
   });
   const spec: DesignSpecInput | null =
     revisionNumber !== undefined ? (revision.data?.revision.spec ?? null) : canEdit ? working : (latestRevision.data?.revision.spec ?? null);
-  const solver = useSolver(spec ?? { mode: "track-for-wheel" });
+  // The load settings beside the spec: edited here, else kept in this browser, else the saved ones,
+  // else the library's defaults; a revision shows its own.
+  const [editedLoads, setEditedLoads] = useState<LoadsSettings | null>(null);
+  const savedLoads = design.data?.design.loads ?? null;
+  const shownLoads = useMemo((): LoadsSettings => {
+    if (revisionNumber !== undefined) return settingsOrDefault(revision.data?.revision.loads ?? null, library).settings;
+    if (!canEdit) return settingsOrDefault(latestRevision.data?.revision.loads ?? null, library).settings;
+    return editedLoads ?? settingsOrDefault(loadLocalLoads(designId) ?? savedLoads, library).settings;
+  }, [revisionNumber, revision.data, canEdit, latestRevision.data, editedLoads, designId, savedLoads, library]);
+  const loadsRequest = useMemo(() => ({ settings: shownLoads, treads: treadsOf(library) }), [shownLoads, library]);
+  const solver = useSolver(spec ?? { mode: "track-for-wheel" }, spec ? loadsRequest : null);
   // An uploaded outline's axle can also be placed on the canvas.
   const outlineWheel = spec?.wheel?.kind === "outline" ? spec.wheel : undefined;
 
   const unsaved = useMemo(
-    () => canEdit && revisionNumber === undefined && !!working && !!design.data?.design.draft && !sameSpec(canonical(working), canonical(design.data.design.draft)),
-    [canEdit, revisionNumber, working, design.data],
+    () =>
+      canEdit &&
+      revisionNumber === undefined &&
+      !!working &&
+      !!design.data?.design.draft &&
+      (!sameSpec(canonical(working), canonical(design.data.design.draft)) || !sameSpec(shownLoads, settingsOrDefault(savedLoads, library).settings)),
+    [canEdit, revisionNumber, working, design.data, shownLoads, savedLoads, library],
   );
+
+  const changeLoads = (next: LoadsSettings) => {
+    setEditedLoads(next);
+    saveLocalLoads(designId, next);
+    setMessage(null);
+  };
+
+  // The helper's one click: its design change into the draft, its input changes into the load settings.
+  const apply = (s: Suggestion) => {
+    if (s.spec && working) change(s.spec as unknown as DesignSpecInput);
+    if (s.inputs) changeLoads({ ...shownLoads, ...s.inputs } as LoadsSettings);
+  };
 
   const change = (next: DesignSpecInput) => {
     setWorking(next);
@@ -70,9 +101,11 @@ export function DesignStudio({ designId, projectId, revisionNumber }: { designId
     setSaving(true);
     setMessage(null);
     try {
-      await api.saveDraft(designId, working);
-      const { revision: saved } = await api.saveRevision(designId, working, note);
+      await api.saveDraft(designId, working, shownLoads);
+      const { revision: saved } = await api.saveRevision(designId, working, note, shownLoads);
       clearLocalDraft(designId);
+      clearLocalLoads(designId);
+      setEditedLoads(null);
       setNote("");
       await queryClient.invalidateQueries({ queryKey: ["design", designId] });
       setWorking(null);
@@ -162,6 +195,18 @@ export function DesignStudio({ designId, projectId, revisionNumber }: { designId
               error={solver.error ? `${solver.error.message}${solver.error.where ? ` (${solver.error.where})` : ""}` : undefined}
               onPick={readOnly ? undefined : (n: number) => change(spec.mode === "partner-wheel" ? { ...spec, lobes: n } : { ...spec, periodsPerTurn: n })}
               onAxleChange={readOnly || !outlineWheel ? undefined : (axle) => change({ ...spec, wheel: { ...outlineWheel, axle } })}
+              belowCheck={(showAt) => (
+                <LoadsPanel
+                  settings={shownLoads}
+                  library={library}
+                  readOnly={readOnly}
+                  loads={solver.loads}
+                  error={solver.loadsError ? `${solver.loadsError.message}${solver.loadsError.where ? ` (${solver.loadsError.where})` : ""}` : undefined}
+                  onChange={changeLoads}
+                  onApply={apply}
+                  showAt={showAt}
+                />
+              )}
             />
           ) : null}
         </div>

@@ -1,6 +1,6 @@
 // The main thread's side of the solve worker (solve-worker.ts), kept out of React: request ids,
 // "latest request wins", and ending a worker that is stuck on a stale solve.
-import type { SolveReply } from "./solve-worker";
+import type { LoadsRequest, SolveReply } from "./solve-worker";
 
 /**
  * A worker that has said nothing for this long while a newer request waits is busy with a stale,
@@ -26,17 +26,17 @@ export class SolverClient {
    * Posts a spec at once. Replies carry their request id and only those for the newest request
    * reach `onReply`: a reply for an older one is stale and dropped.
    */
-  request(spec: unknown, onReply: (reply: SolveReply) => void): void {
+  request(spec: unknown, onReply: (reply: SolveReply) => void, loads: LoadsRequest | null = null): void {
     const id = ++this.seq;
     this.listener = onReply;
     const busyWithOlder = this.waiting !== null;
     this.waiting = id;
     const w = this.worker ?? this.start();
-    w.postMessage({ id, spec });
+    w.postMessage({ id, spec, loads });
     clearTimeout(this.timer);
     // The worker gives way to a newer request between stages; a single stage that runs long is
     // watched here instead.
-    if (busyWithOlder) this.watch(id, spec, w);
+    if (busyWithOlder) this.watch(id, spec, loads, w);
   }
 
   dispose(): void {
@@ -63,16 +63,16 @@ export class SolverClient {
     this.heardAt = performance.now();
     if (reply.id !== this.seq) return;
     this.answered = reply.id;
-    if (!reply.ok || reply.stage === "check") this.waiting = null;
+    if (!reply.ok || reply.stage === "loads") this.waiting = null;
     this.listener?.(reply);
   }
 
-  private watch(id: number, spec: unknown, w: Worker): void {
+  private watch(id: number, spec: unknown, loads: LoadsRequest | null, w: Worker): void {
     this.timer = setTimeout(() => {
       if (this.answered >= id || this.worker !== w) return;
-      if (performance.now() - this.heardAt < STALE_WORKER_MS) return this.watch(id, spec, w);
+      if (performance.now() - this.heardAt < STALE_WORKER_MS) return this.watch(id, spec, loads, w);
       w.terminate();
-      this.start().postMessage({ id, spec });
+      this.start().postMessage({ id, spec, loads });
     }, STALE_WORKER_MS);
   }
 }

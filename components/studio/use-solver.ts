@@ -5,7 +5,8 @@
 import { useEffect, useState } from "react";
 import type { CheckResult, SolvedGeometry, SolveOption } from "@/lib/track";
 import { SolverClient } from "./solver-client";
-import type { SolveFailure } from "./solve-worker";
+import type { LoadsReport, Suggestion } from "@/lib/loads";
+import type { LoadsRequest, SolveFailure } from "./solve-worker";
 
 export interface SolverState {
   /** The newest geometry solved (kept while a newer spec is being solved). */
@@ -14,6 +15,10 @@ export interface SolverState {
   options?: SolveOption[];
   /** The rolling check of `result`; undefined until it arrives. */
   check?: CheckResult;
+  /** The load-path check of `result` and the helper's suggestions; undefined until they arrive, null without load settings. */
+  loads?: { report: LoadsReport; suggestions: Suggestion[] } | null;
+  /** The load-path check stopped on an error (bad settings, or the engine). */
+  loadsError?: SolveFailure;
   /** The newest spec could not be solved. */
   error?: SolveFailure;
   /** The options or the rolling check of `result` stopped on an error. */
@@ -32,25 +37,32 @@ function newWorker(): Worker {
   return new Worker(new URL("./solve-worker.ts", import.meta.url), { type: "module" });
 }
 
-export function useSolver(spec: unknown): SolverState {
+export function useSolver(spec: unknown, loads: LoadsRequest | null = null): SolverState {
   // The client makes its worker on the first request, so nothing starts during the server render.
   const [client] = useState(() => new SolverClient(newWorker));
   const [solved, setSolved] = useState<Solved>({ key: null, checking: false });
-  const key = JSON.stringify(spec);
+  const key = JSON.stringify([spec, loads]);
 
   useEffect(() => () => client.dispose(), [client]);
 
   useEffect(() => {
     const posted = performance.now();
-    client.request(JSON.parse(key), (reply) => {
-      if (!reply.ok) {
-        const error = reply.error;
-        if (reply.stage === "geometry") setSolved((s) => ({ key, result: s.result, error, checking: false, ms: performance.now() - posted }));
-        else setSolved((s) => ({ ...s, checkError: error, checking: false }));
-      } else if (reply.stage === "geometry") setSolved({ key, result: reply.geometry, checking: true, ms: performance.now() - posted });
-      else if (reply.stage === "options") setSolved((s) => ({ ...s, options: reply.options }));
-      else setSolved((s) => ({ ...s, check: reply.check, checking: false }));
-    });
+    const [specNow, loadsNow] = JSON.parse(key) as [unknown, LoadsRequest | null];
+    client.request(
+      specNow,
+      (reply) => {
+        if (!reply.ok) {
+          const error = reply.error;
+          if (reply.stage === "geometry") setSolved((s) => ({ key, result: s.result, error, checking: false, ms: performance.now() - posted }));
+          else if (reply.stage === "loads") setSolved((s) => ({ ...s, loads: undefined, loadsError: error }));
+          else setSolved((s) => ({ ...s, checkError: error, checking: false }));
+        } else if (reply.stage === "geometry") setSolved({ key, result: reply.geometry, checking: true, ms: performance.now() - posted });
+        else if (reply.stage === "options") setSolved((s) => ({ ...s, options: reply.options }));
+        else if (reply.stage === "check") setSolved((s) => ({ ...s, check: reply.check, checking: false }));
+        else setSolved((s) => ({ ...s, loads: reply.loads, loadsError: undefined }));
+      },
+      loadsNow,
+    );
   }, [client, key]);
 
   const { key: solvedKey, ...state } = solved;

@@ -2,6 +2,7 @@ import "server-only";
 // Designs and their immutable revisions. A revision is solved by the engine on the server before it
 // is stored, so its hash and summary figures are the engine's own.
 import { and, desc, eq, max, sql } from "drizzle-orm";
+import type { LoadsSettings } from "@/lib/validation/loads";
 import { db } from "@/db";
 import { designs, projects, revisions, users, type DesignMode } from "@/db/schema";
 import { audit } from "@/lib/server/audit";
@@ -109,9 +110,10 @@ export async function createDesign(actor: CurrentUser, projectId: number, input:
   });
 }
 
-export async function updateDesign(actor: CurrentUser, designId: number, projectId: number, input: { name?: string; draft?: unknown }): Promise<void> {
+export async function updateDesign(actor: CurrentUser, designId: number, projectId: number, input: { name?: string; draft?: unknown; loads?: LoadsSettings }): Promise<void> {
   const changes: Partial<typeof designs.$inferInsert> = {};
   if (input.name !== undefined) changes.name = input.name;
+  if (input.loads !== undefined) changes.loads = input.loads as unknown as Record<string, unknown>;
   if (input.draft !== undefined) {
     const spec = validSpec(input.draft);
     changes.draft = spec as unknown as Record<string, unknown>;
@@ -119,7 +121,7 @@ export async function updateDesign(actor: CurrentUser, designId: number, project
   }
   await db.transaction(async (tx) => {
     await tx.update(designs).set(changes).where(eq(designs.id, designId));
-    await audit(tx, { actorId: actor.id, action: "update", entity: "designs", entityId: designId, projectId, detail: { name: input.name, draft: input.draft !== undefined } });
+    await audit(tx, { actorId: actor.id, action: "update", entity: "designs", entityId: designId, projectId, detail: { name: input.name, draft: input.draft !== undefined, loads: input.loads !== undefined } });
   });
 }
 
@@ -128,7 +130,7 @@ export async function updateDesign(actor: CurrentUser, designId: number, project
  * solve is refused with the engine's message); the number is taken under a row lock on the design,
  * so two saves at once get consecutive numbers.
  */
-export async function saveRevision(actor: CurrentUser, designId: number, projectId: number, input: { spec: unknown; note: string }): Promise<{ id: number; number: number; specHash: string }> {
+export async function saveRevision(actor: CurrentUser, designId: number, projectId: number, input: { spec: unknown; note: string; loads?: LoadsSettings }): Promise<{ id: number; number: number; specHash: string }> {
   const spec = validSpec(input.spec);
   let result: SolveResult;
   try {
@@ -140,6 +142,8 @@ export async function saveRevision(actor: CurrentUser, designId: number, project
   const hash = specHash(spec);
   return db.transaction(async (tx) => {
     await tx.execute(sql`select id from ${designs} where ${designs.id} = ${designId} for update`);
+    // The load settings go with the revision as they are now, so its cautions never change after it is saved.
+    const loads = input.loads ?? (await tx.select({ loads: designs.loads }).from(designs).where(eq(designs.id, designId)))[0]?.loads ?? null;
     const [{ last }] = await tx.select({ last: max(revisions.number) }).from(revisions).where(eq(revisions.designId, designId));
     const number = (last ?? 0) + 1;
     const [res] = await tx.insert(revisions).values({
@@ -149,6 +153,7 @@ export async function saveRevision(actor: CurrentUser, designId: number, project
       specHash: hash,
       engineVersion: ENGINE_VERSION,
       summary: summarise(result) as unknown as Record<string, unknown>,
+      loads: loads as Record<string, unknown> | null,
       note: input.note,
       createdById: actor.id,
     });

@@ -2,15 +2,15 @@
 // supports, from lib/cut), the parts as engraved with the sheets they were cut from, the order of
 // work, the joint schedule, and the level and position table with the engine's installation
 // tolerances (tolerances.ts). Pure: the caller brings the plan, the approval and the people.
-import type { JobInput } from "@/lib/cut/export/job";
-import { cautionsFor } from "@/lib/cut/export/cautions";
-import { insideRadius } from "@/lib/cut/settings";
+import { loadsOf, type JobInput } from "@/lib/cut/export/job";
+import { cautionText } from "@/lib/loads";
 import type { ApprovalStamp } from "@/lib/review/reference";
 import type { AssemblySheet, LevelRow, SheetJoint } from "./sheet";
 import { DEFAULT_BUMP_LIMIT_MM, runTolerances } from "./tolerances";
 
-export const DISCLAIMER =
-  "This sheet gives the geometry and the installation figures of the design as cut. It is not a structural design or a safety certification. Supports, fixings, guards and the loads of riders and crowds must be checked against local codes, with the authority having jurisdiction, by a licensed engineer, before the piece is opened to the public.";
+/** What the sheet is not, before the load-path check's own disclaimer (lib/loads/caution.ts). */
+const SHEET_SCOPE = "This sheet gives the geometry and the installation figures of the design as cut; it is not a structural design.";
+
 
 export interface SheetContext {
   job: JobInput;
@@ -72,8 +72,8 @@ export function buildAssemblySheet(c: SheetContext): AssemblySheet {
       ]
     : ["The design is a pair of wheels on fixed axles: mount both axles at the centre distance and check that the wheels turn without slipping or binding.", "Fit the guard that keeps hands away from the nip between the wheels.", "Sign the block at the end of this sheet."];
 
-  const spans = run ? run.supports.slice(1).map((x, i) => x - run.supports[i]) : [];
-  const cautions = cautionsFor(result, { insideRadius: insideRadius(s), maxSupportSpan: spans.length ? Math.max(...spans) : undefined }).map((x) => ({ signal: x.signal, text: x.text }));
+  const loads = loadsOf(c.job);
+  const cautions = loads.cautions.map((x) => ({ signal: x.signal, text: cautionText(x) }));
 
   return {
     title: `Assembly sheet: ${c.project.name}`,
@@ -84,7 +84,7 @@ export function buildAssemblySheet(c: SheetContext): AssemblySheet {
     shop: c.shop,
     cutPlanId: c.cutPlanId,
     cautions,
-    disclaimer: DISCLAIMER,
+    disclaimer: `${SHEET_SCOPE} ${loads.disclaimer}`,
     inches: c.inches ?? s.outputUnits === "in",
     run: run
       ? {

@@ -44,3 +44,9 @@ export function cautionLine(c: Caution): string {
   const fig = c.figure ? ` (${c.figure}; ${c.limit})` : c.limit ? ` (${c.limit})` : "";
   return `${c.signal}  ${c.hazard} ${c.consequence} ${c.avoid}${fig}`;
 }
+
+/** A caution as one paragraph: hazard, consequence, how to avoid it, then the figure, its limit and the source. */
+export function cautionText(c: Caution): string {
+  const figures = [c.figure, c.limit].filter(Boolean).join("; ");
+  return `${c.hazard} ${c.consequence} ${c.avoid} (${figures ? `${figures}. ` : ""}Source: ${c.source}.)`;
+}

@@ -293,9 +293,11 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
   const contact = contactOf(input, result, ci, k);
   const hertzSource = "Hertz line contact (K. L. Johnson, Contact Mechanics, 1985, §4.2; R. L. Norton, Machine Design, Example 7-2)";
   if (contact.radiusMm === 0) {
-    contact.cornerRadiusNeeded = opts.cornerSearch === false ? undefined : cornerRadiusFor(input, result);
-    const avoid =
-      contact.cornerRadiusNeeded != null
+    // A rubber-like tread is outside Hertz: no radius can be worked out, only tested.
+    contact.cornerRadiusNeeded = opts.cornerSearch === false || !contact.hertzApplies ? undefined : cornerRadiusFor(input, result);
+    const avoid = !contact.hertzApplies
+      ? "Needs a corner radius: round the wheel's corners; the tread is rubber-like, so test a sample of it on the track under the wheel load."
+      : contact.cornerRadiusNeeded != null
         ? `Needs a corner radius: round the wheel's corners to at least ${fmt(contact.cornerRadiusNeeded)} ${unit} and solve again.`
         : ci.allowable !== null
           ? `Needs a corner radius, and no radius up to half the wheel's size is enough at this load: the contact needs a combined radius of at least ${fmt(radiusFor(V, ci.length, ci.eStar, ci.allowable), 0)} mm. Use a wider tread, a harder track surface or a lower load, then round the corners.`

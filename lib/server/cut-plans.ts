@@ -11,6 +11,8 @@ import type { Revision } from "@/db/schema";
 import { buildCutParts, isCutError, kerfParts, nestItemsFor, slug, type CutPlanResult } from "@/lib/cut";
 import { loadHersheyFont } from "@/lib/cut/labels/font-file";
 import type { JobInput } from "@/lib/cut/export/job";
+import { cutFactsOf } from "@/lib/cut/load-facts";
+import { loadsForRevision } from "./loads";
 import { composeSettings, type PlanChoice } from "@/lib/cut-plan/compose";
 import { summariseCutPlan, type CutPlanSummary } from "@/lib/cut-plan/summary";
 import { checkNest } from "@/lib/cut-plan/verify-nest";
@@ -100,8 +102,12 @@ export async function jobForPlan(plan: CutPlanRow, revision: Revision, designNam
   const composed = (plan.settings as { composed?: unknown }).composed;
   const built = buildPlanParts(revision, composed);
   const { paths } = await kerfParts(built.plan.parts, built.plan.settings);
+  const loads = await loadsForRevision(revision, built.result, cutFactsOf(built.plan));
   // The approval is read now, not when the plan was stored: a revision approved later gets its reference on every file.
   return {
+    spec: revision.spec,
+    loads: loads.report,
+    loadsFromDefaults: !loads.stored,
     approval: await approvalStamp(revision),
     unapprovedReason: (plan.summary as Partial<CutPlanSummary>).unapprovedReason ?? null,
     baseName: slug(`${built.plan.settings.project} ${designName} r${revision.number}`),

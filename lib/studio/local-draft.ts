@@ -30,3 +30,27 @@ export function sameSpec(a: unknown, b: unknown): boolean {
     Array.isArray(v) ? v.map(sorted) : v && typeof v === "object" ? Object.fromEntries(Object.entries(v).sort(([x], [y]) => (x < y ? -1 : 1)).map(([k, x]) => [k, sorted(x)])) : v;
   return JSON.stringify(sorted(a)) === JSON.stringify(sorted(b));
 }
+
+const loadsKey = (designId: number) => `axlewright:loads:${designId}`;
+
+/** The working load settings, kept beside the working spec (unchecked here: the caller parses them). */
+export function loadLocalLoads(designId: number): unknown {
+  try {
+    const raw = globalThis.localStorage?.getItem(loadsKey(designId));
+    return raw ? JSON.parse(raw) : null;
+  } catch {
+    return null;
+  }
+}
+
+export function saveLocalLoads(designId: number, loads: unknown): void {
+  try {
+    globalThis.localStorage?.setItem(loadsKey(designId), JSON.stringify(loads));
+  } catch {
+    /* storage full or disabled: the change stays in memory only */
+  }
+}
+
+export function clearLocalLoads(designId: number): void {
+  globalThis.localStorage?.removeItem(loadsKey(designId));
+}

@@ -280,6 +280,11 @@ export function interferenceLocation(r: SolveResult): Location | null {
 
 /** Where the contact needs the most friction: a cycle position and the contact point there. */
 export function frictionLocation(r: SolveResult): Location {
-  const position = positionAt(r, r.check.frictionDemand.at);
+  return contactLocation(r, r.check.frictionDemand.at);
+}
+
+/** The contact at a place given as the engine's figures give it (axle x, or the driver's turn for pairs). */
+export function contactLocation(r: SolvedGeometry, along: number): Location {
+  const position = positionAt(r, along);
   return { position, point: poseAt(r, position).contact };
 }

@@ -14,7 +14,11 @@ export const USE_LABELS: Record<Use, string> = {
 };
 
 const positive = z.number().finite().positive();
-const poisson = z.number().finite().min(0).max(0.49);
+const poisson = z
+  .number({ error: "Poisson's ratio must be a number." })
+  .finite()
+  .min(0, { error: "Poisson's ratio must be from 0 to 0.49." })
+  .max(0.49, { error: "Poisson's ratio must be from 0 to 0.49." });
 
 const tread = z.strictObject({
   /** Name shown in the helper's suggestion, e.g. the library row. */
@@ -46,6 +50,8 @@ export const loadsInputSchema = z.strictObject({
   /** Design speed of the axle, m/s (with the wheel's density it gives the wheel's own inertia load). */
   speedMps: positive.max(20).optional(),
   wheel: z.strictObject({
+    /** The library row the figures came from (tread, or the wheel's own sheet). */
+    material: z.string().trim().max(120).optional(),
     modulusGpa: positive.max(1000),
     poisson,
     treadWidthMm: positive.max(10000),
@@ -53,6 +59,7 @@ export const loadsInputSchema = z.strictObject({
     densityKgM3: positive.max(30000).optional(),
   }),
   track: z.strictObject({
+    material: z.string().trim().max(120).optional(),
     modulusGpa: positive.max(1000),
     poisson,
     widthMm: positive.max(10000),
@@ -66,6 +73,10 @@ export const loadsInputSchema = z.strictObject({
   /** Other treads the helper may suggest (the shop library's rows). */
   treads: z.array(tread).max(50).optional(),
 });
+
+/** What a design keeps (the draft's and each revision's `loads`): the input without the spec and the library's treads. */
+export const loadsSettingsSchema = loadsInputSchema.omit({ spec: true, treads: true });
+export type LoadsSettings = z.output<typeof loadsSettingsSchema>;
 
 export type LoadsInput = z.output<typeof loadsInputSchema>;
 export type LoadsInputDraft = z.input<typeof loadsInputSchema>;

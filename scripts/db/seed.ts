@@ -9,6 +9,7 @@ import demo from "../../db/demo-data.json";
 import library from "../../db/shop-library.json";
 import * as schema from "../../db/schema";
 import { summarise } from "../../lib/revision-summary";
+import { loadsSettingsSchema } from "../../lib/validation/loads";
 import { toMinor, type Currency } from "../../lib/money/currency";
 import { seedDemoBuild, type DemoBuild } from "./demo-build";
 import { hashPassword } from "../../lib/server/passwords";
@@ -16,6 +17,11 @@ import { ENGINE_VERSION, parseSpec, solve, specHash } from "../../lib/track";
 
 const connection = await mysql.createConnection({ uri: process.env.DATABASE_URL! });
 const db = drizzle({ client: connection, schema, mode: "default" });
+/** A demo design's load settings, checked by the same schema the studio's saves go through. */
+function demoLoads(d: { loads?: unknown }): Record<string, unknown> | null {
+  return d.loads === undefined ? null : (loadsSettingsSchema.parse(d.loads) as unknown as Record<string, unknown>);
+}
+
 const { organisations, users, projects, projectMembers, designs, revisions, materials, stockSheets, machines, reviews, reviewComments, signOffs, deposits, paymentEvents } = schema;
 type SourceKind = (typeof schema.SOURCE_KINDS)[number];
 let added = 0;
@@ -101,7 +107,7 @@ try {
   for (const m of library.materials) {
     let id = await idOf(db.select({ id: materials.id }).from(materials).where(eq(materials.name, m.name)));
     if (id === undefined) {
-      const [res] = await db.insert(materials).values({ ...m, sourceKind: m.sourceKind as SourceKind });
+      const [res] = await db.insert(materials).values({ ...m, kind: m.kind as schema.MaterialKind, sourceKind: m.sourceKind as SourceKind });
       id = res.insertId;
       added++;
     }
@@ -147,12 +153,12 @@ try {
         // The same path as saving in the studio: the engine's schema, its solve, its canonical hash.
         const spec = parseSpec(d.spec);
         const [res] = await db.insert(designs).values({
-          projectId: id, name: d.name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, createdById: fabricatorId,
+          projectId: id, name: d.name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, loads: demoLoads(d), createdById: fabricatorId,
         });
         designId = res.insertId;
         await db.insert(revisions).values({
           designId, number: 1, spec: spec as unknown as Record<string, unknown>, specHash: specHash(spec),
-          engineVersion: ENGINE_VERSION, summary: summarise(solve(spec)) as unknown as Record<string, unknown>, note: d.note, createdById: fabricatorId,
+          engineVersion: ENGINE_VERSION, summary: summarise(solve(spec)) as unknown as Record<string, unknown>, loads: demoLoads(d), note: d.note, createdById: fabricatorId,
         });
         added += 2;
       }

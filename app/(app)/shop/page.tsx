@@ -44,19 +44,24 @@ export default async function ShopLibraryPage() {
         tread (friction coefficients depend on the whole system) and edit the row. Retired rows stay for the plans that used them.
       </p>
       <Panel title="Materials">
-        <Table head={["Name", "Thickness", "Density", "Modulus", "Strength", "Friction μ (static / kinetic)", "Source", "Status"]} caption="Materials">
+        <Table head={["Name", "Thickness", "Density", "Modulus, ν", "Strength, allowable contact", "Friction μ (static / kinetic)", "Source", "Status"]} caption="Materials">
           {library.materials.map((m) => (
             <tr key={m.id} data-testid={`material-${m.name}`} className={m.active ? "" : "opacity-60"}>
               <td>
                 {m.name}
+                {m.kind === "tread" ? <div className="text-xs text-ink-soft">tread</div> : null}
                 <Edit name={m.name}>
                   <MaterialForm row={m} />
                 </Edit>
               </td>
               <td className="font-mono">{fmt(m.thicknessMm)} mm</td>
               <td className="font-mono">{fmt(m.densityKgM3)} kg/m³</td>
-              <td className="font-mono">{fmt(m.modulusGpa)} GPa</td>
-              <td className="font-mono">{fmt(m.strengthMpa)} MPa</td>
+              <td className="font-mono">
+                {fmt(m.modulusGpa)} GPa, ν {fmt(m.poisson)}
+              </td>
+              <td className="font-mono">
+                {fmt(m.strengthMpa)} MPa, {m.allowableMpa === null ? "—" : `${fmt(m.allowableMpa)} MPa`}
+              </td>
               <td className="font-mono">
                 {fmt(m.frictionStatic)} / {fmt(m.frictionKinetic)}
                 <div className="font-sans text-xs text-ink-soft">{m.frictionPair}</div>

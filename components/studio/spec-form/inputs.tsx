@@ -18,6 +18,8 @@ export function NumberInput(props: {
   disabled?: boolean;
   error?: string;
   hint?: ReactNode;
+  /** Clearing the box is a value too: undefined (for figures that may be left out). */
+  optional?: boolean;
   onChange: (value: number | undefined) => void;
 }) {
   const id = useId();
@@ -45,6 +47,7 @@ export function NumberInput(props: {
         aria-describedby={error ? `${id}-error` : undefined}
         onChange={(e) => {
           setText(e.target.value);
+          if (props.optional && e.target.value.trim() === "") return props.onChange(undefined);
           const v = Number(e.target.value);
           const ok = e.target.value.trim() !== "" && Number.isFinite(v) && (!props.integer || Number.isInteger(v)) && (props.min === undefined || v >= props.min) && (props.max === undefined || v <= props.max);
           if (ok) props.onChange(v);

@@ -2,7 +2,7 @@
 
 import { useCallback, useMemo, useState } from "react";
 import type { CheckResult, DesignSpec, SolvedGeometry, SolveOption, SolveResult } from "@/lib/track";
-import { alongAt } from "@/lib/studio/motion";
+import { alongAt, contactLocation } from "@/lib/studio/motion";
 import { fmt, type Pt } from "@/lib/studio/view-math";
 import { Notice } from "@/components/ui/notice";
 import type { CanvasHighlight } from "./canvas-stage";
@@ -30,10 +30,12 @@ export interface StudioViewProps {
   /** Placing the axle of an uploaded outline on the canvas; undefined where it cannot be edited. */
   onAxleChange?: (axle: { x: number; y: number }) => void;
   canvasHeight?: number;
+  /** A panel below the check (the load-path cautions), given a way to mark a place along the roll on the canvas. */
+  belowCheck?: (showAt: (along: number, label: string) => void) => React.ReactNode;
 }
 
 /** The studio's view half: canvas and playback on the left, the check and options on the right, plots below. */
-export function StudioView({ result, options, check, checkError, spec, error, onPick, onAxleChange, canvasHeight }: StudioViewProps) {
+export function StudioView({ result, options, check, checkError, spec, error, onPick, onAxleChange, canvasHeight, belowCheck }: StudioViewProps) {
   const clock = useRollingClock();
   const [highlight, setHighlight] = useState<CanvasHighlight | null>(null);
   // A new design clears the old design's highlight (adjusted while rendering, not in an effect).
@@ -52,6 +54,16 @@ export function StudioView({ result, options, check, checkError, spec, error, on
     },
     [setPlaying, setPosition],
   );
+  const showAt = useCallback(
+    (along: number, label: string) => {
+      if (!result) return;
+      const loc = contactLocation(result, along);
+      setPlaying(false);
+      setPosition(loc.position);
+      setHighlight({ point: loc.point, label });
+    },
+    [result, setPlaying, setPosition],
+  );
   const current = result?.mode === "partner-wheel" ? spec?.lobes : spec?.periodsPerTurn;
   // The drawing needs the geometry alone; the panels take the options and the check as they come.
   const withOptions = useMemo(() => (result && options ? { ...result, options } : result), [result, options]);
@@ -67,10 +79,11 @@ export function StudioView({ result, options, check, checkError, spec, error, on
     () => (
       <aside className="flex flex-col gap-3">
         {!error ? <CheckPanel result={checked} checking={!!result && !checked} error={checkError} onPointAt={pointAt} /> : null}
+        {!error && belowCheck ? belowCheck(showAt) : null}
         <OptionsTable result={error ? undefined : withOptions} pending={optionsPending} currentValue={current} onPick={onPick} />
       </aside>
     ),
-    [error, result, checked, checkError, withOptions, optionsPending, pointAt, current, onPick],
+    [error, result, checked, checkError, withOptions, optionsPending, pointAt, current, onPick, belowCheck, showAt],
   );
   const describePosition = (p: number) => {
     if (!result) return "";

@@ -1,10 +1,13 @@
 // Every file of a cut job except the PNG previews (which need sharp: export/zip.ts), from one plan:
 // a parts DXF and SVG (each part once, in a row), a DXF and SVG per nested sheet, the bill of
 // materials and the README. File names carry the output unit, as shops ask (FAB.md §3.1).
+import { checkLoads, type LoadsReport } from "@/lib/loads";
+import { defaultLoadsSettings, loadsInputFor } from "@/lib/loads/settings";
 import type { SheetNestResult } from "@/lib/nest/types";
 import { approvalLine, type ApprovalStamp } from "@/lib/review/reference";
 import type { SolveResult } from "@/lib/track";
 import type { ToolPath } from "../kerf";
+import { cutFactsOf } from "../load-facts";
 import type { CutPlanResult } from "../plan";
 import { bomCsv } from "./bom-csv";
 import { buildDrawing, partsRow, sheetParts } from "./drawing";
@@ -18,7 +21,13 @@ export interface JobInput {
   design?: string;
   revision?: number | string;
   result: SolveResult;
+  /** The design spec the result was solved from (the load-path check needs it for its own re-solves). */
+  spec?: unknown;
   plan: CutPlanResult;
+  /** The revision's load-path check; absent: the README runs it on the library's starting figures. */
+  loads?: LoadsReport;
+  /** True: `loads` ran on the library's defaults because the revision has no load settings. */
+  loadsFromDefaults?: boolean;
   toolPaths: Map<string, ToolPath>;
   nest: SheetNestResult | null;
   nestNote?: string;
@@ -37,6 +46,11 @@ export interface JobTextFiles {
   files: JobFile[];
   /** Preview SVGs to render as PNG, with the PNG's file name. */
   previews: Array<{ name: string; svg: string }>;
+}
+
+/** The revision's load-path check, or (the command-line export) one on the shop library's starting figures. */
+export function loadsOf(j: JobInput): LoadsReport {
+  return j.loads ?? checkLoads(loadsInputFor(j.spec, defaultLoadsSettings(), undefined, cutFactsOf(j.plan)), j.result);
 }
 
 /** A file-name stem from free text: lower case letters, digits and hyphens. */
@@ -97,6 +111,8 @@ export function jobTextFiles(j: JobInput): JobTextFiles {
       nestNote: j.nestNote,
       approval: stamp,
       unapprovedReason: j.unapprovedReason ?? null,
+      loads: loadsOf(j),
+      loadsFromDefaults: j.loadsFromDefaults ?? !j.loads,
     }),
   });
   return { files, previews };

@@ -9,7 +9,7 @@ import { insideRadius, type CutSettings } from "../settings";
 import type { CutWarning, Part } from "../types";
 import { fmtLen } from "../units";
 import { NOT_APPROVED, approvalLine, type ApprovalStamp } from "@/lib/review/reference";
-import { cautionsFor } from "./cautions";
+import type { LoadsReport } from "@/lib/loads";
 
 export interface ReadmeInput {
   design?: string;
@@ -25,6 +25,10 @@ export interface ReadmeInput {
   nestNote?: string;
   approval?: ApprovalStamp | null;
   unapprovedReason?: string | null;
+  /** The load-path check (lib/loads) whose cautions the README lists. */
+  loads: LoadsReport;
+  /** True: the check ran on the library's starting figures, not the revision's own settings. */
+  loadsFromDefaults?: boolean;
 }
 
 const pct = (v: number) => `${(100 * v).toFixed(1)} %`;
@@ -108,10 +112,17 @@ export function jobReadme(j: ReadmeInput): string {
   out.push(...(all.length ? all.map((w) => `- ${w}`) : ["none"]), "");
 
   out.push("CAUTIONS", "--------");
-  const spans = j.run ? j.run.supports.slice(1).map((x, i) => x - j.run!.supports[i]) : [];
-  for (const c of cautionsFor(j.result, { insideRadius: insideRadius(s), maxSupportSpan: spans.length ? Math.max(...spans) : undefined }))
-    out.push(`${c.signal.padEnd(9)}${c.text}`);
-  out.push("");
+  // The same load-path check as the studio and the review page (lib/loads).
+  const loads = j.loads;
+  if (j.loadsFromDefaults) out.push("Load settings: the shop library's starting figures (pushed by hand); set the real use and load in the studio.");
+  out.push(`Wheel load ${loads.wheelLoadN.toFixed(0)} N (${loads.loadBasis}).`);
+  for (const c of loads.cautions) {
+    out.push(`${c.signal.padEnd(9)}${c.hazard} ${c.consequence} ${c.avoid}`);
+    if (c.figure || c.limit) out.push(`${" ".repeat(9)}${[c.figure, c.limit].filter(Boolean).join("; ")}. Source: ${c.source}.`);
+  }
+  out.push("", "Loads for the engineer (inputs, not a structural design):");
+  for (const l of loads.engineerLoads) out.push(`- ${l.what}: ${l.value} (${l.source})`);
+  out.push("", loads.disclaimer, "");
 
   out.push("FILES", "-----", ...j.files.map((f) => `- ${f}`), "");
   out.push("Layers: CUT_OUTSIDE (outlines, cut outside), CUT_INSIDE (holes, cut inside), DRILL (circles: drill at the centre),");

@@ -14,7 +14,7 @@ export const GET = route<{ id: string }>(async (_request, params) => {
       mode: design.mode,
       updatedAt: design.updatedAt.toISOString(),
       // The working draft is the shop's; clients and installers see saved revisions only.
-      ...(access.canManage ? { draft: design.draft } : {}),
+      ...(access.canManage ? { draft: design.draft, loads: design.loads } : {}),
     },
     revisions: await listRevisions(design.id),
     you: { canEdit: access.canManage },

@@ -13,6 +13,7 @@ export const GET = route<{ id: string }>(async (_request, params) => {
       specHash: revision.specHash,
       engineVersion: revision.engineVersion,
       summary: revision.summary,
+      loads: revision.loads,
       note: revision.note,
       createdAt: revision.createdAt.toISOString(),
     },

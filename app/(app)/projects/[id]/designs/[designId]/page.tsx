@@ -5,6 +5,7 @@ import { DesignStudio } from "@/components/studio/design-studio";
 import { QueryProvider } from "@/components/studio/query-provider";
 import { requireDesignAccess, requirePageUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
+import { libraryMaterials } from "@/lib/server/loads";
 
 export const metadata: Metadata = { title: "Studio" };
 
@@ -18,6 +19,17 @@ export default async function StudioPage({ params, searchParams }: { params: Pro
   });
   if (String(access.projectId) !== id) notFound();
   const revisionNumber = revision && /^\d{1,6}$/.test(revision) ? Number(revision) : undefined;
+  // The library rows the loads panel offers (plain figures only: no ids, dates or sources cross to the browser).
+  const library = (await libraryMaterials()).map(({ name, kind, thicknessMm, densityKgM3, modulusGpa, poisson, allowableMpa, frictionStatic }) => ({
+    name,
+    kind,
+    thicknessMm,
+    densityKgM3,
+    modulusGpa,
+    poisson,
+    allowableMpa,
+    frictionStatic,
+  }));
   return (
     <>
       <div className="no-print flex gap-4 text-sm">
@@ -33,7 +45,7 @@ export default async function StudioPage({ params, searchParams }: { params: Pro
       {/* The studio uses the whole width of the screen, not the reading width of other pages. */}
       <div className="relative left-1/2 w-[min(110rem,calc(100vw-2rem))] -translate-x-1/2">
         <QueryProvider>
-          <DesignStudio designId={access.design.id} projectId={access.projectId} revisionNumber={revisionNumber} />
+          <DesignStudio designId={access.design.id} projectId={access.projectId} revisionNumber={revisionNumber} library={library} />
         </QueryProvider>
       </div>
     </>

@@ -12,15 +12,17 @@ import { latestCutPlan } from "@/db/queries/cut-plans";
 import { findRevision } from "@/db/queries/designs";
 import { getProjectSummary } from "@/db/queries/projects";
 import { reviewDetail } from "@/db/queries/reviews";
-import { cautionsFor } from "@/lib/cut/export/cautions";
-import { hasTrack } from "@/lib/cut/run-length";
-import { insideRadius, parseCutSettings, type CutSettings } from "@/lib/cut/settings";
+import { cutFactsOfSettings } from "@/lib/cut/load-facts";
+import { parseCutSettings } from "@/lib/cut/settings";
+import { cautionText } from "@/lib/loads";
 import { formatMoney } from "@/lib/money/currency";
 import { plainFigures } from "@/lib/review/plain-figures";
 import { approvalReference } from "@/lib/review/reference";
 import { reviewStatus } from "@/lib/review/review-state";
 import type { RevisionSummary } from "@/lib/revision-summary";
 import { requirePageUser, requireReviewAccess } from "@/lib/server/dal";
+import { loadsForRevision } from "@/lib/server/loads";
+import { solve } from "@/lib/track";
 import { AppError } from "@/lib/server/errors";
 
 export const metadata: Metadata = { title: "Review" };
@@ -43,13 +45,11 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   const signer = access.memberRole === "client";
   const units = spec.units ?? "mm";
   const figures = plainFigures({ mode: spec.mode, units, check: summary.check });
-  // The cautions as the cut files will state them: the stored plan's machine and supports, or the cut settings' defaults.
+  // The load-path cautions from the same check as the studio and the cut files: the revision's load
+  // settings, and the stored plan's board and support spacing when there is one.
   const composed = (plan?.settings as { composed?: unknown } | undefined)?.composed;
-  const settings: CutSettings = parseCutSettings(composed ?? { runLength: detail.runLengthMm ?? 2400 });
-  const cautions = cautionsFor(
-    { mode: spec.mode as never, check: summary.check, warnings: summary.warnings },
-    { insideRadius: insideRadius(settings), maxSupportSpan: hasTrack({ mode: spec.mode as never }) ? settings.supportSpacing : undefined },
-  );
+  const loads = await loadsForRevision(found.revision, solve(found.revision.spec), composed ? cutFactsOfSettings(parseCutSettings(composed)) : undefined);
+  const cautions = loads.report.cautions.map((c) => ({ signal: c.signal, text: cautionText(c) }));
   const run = detail.runLengthMm !== null ? { runLength: detail.runLengthMm, endTreatment: detail.endTreatment ?? "flat" } : null;
   const deposit = detail.deposit;
 
@@ -112,7 +112,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
           </p>
         </Panel>
         <Panel title="Cautions">
-          <CautionList cautions={cautions} />
+          <CautionList cautions={cautions} disclaimer={loads.report.disclaimer} />
         </Panel>
       </div>
 

@@ -10,7 +10,12 @@ import { approvalStamp, listRevisionReviews } from "@/db/queries/reviews";
 import { approvalLine } from "@/lib/review/reference";
 import { getProjectSummary } from "@/db/queries/projects";
 import { listShopLibrary } from "@/db/queries/shop";
-import { jobTextFiles } from "@/lib/cut/export/job";
+import { CautionList } from "@/components/review/caution-list";
+import { Panel } from "@/components/ui/panel";
+import { jobTextFiles, loadsOf } from "@/lib/cut/export/job";
+import { cautionText } from "@/lib/loads";
+import { loadsForRevision } from "@/lib/server/loads";
+import { solve } from "@/lib/track";
 import type { CutSettings } from "@/lib/cut/settings";
 import type { PlanChoice } from "@/lib/cut-plan/compose";
 import { formFromSettings } from "@/lib/cut-plan/form";
@@ -73,8 +78,11 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
   const storedChoice = plan?.settings as (PlanChoice & { composed?: CutSettings }) | undefined;
   const ids = storedChoice ? { materialId: storedChoice.materialId, stockSheetId: storedChoice.stockSheetId, machineId: storedChoice.machineId } : firstIds(library);
   let stored: StoredPlanView | null = null;
+  // The load-path cautions as the files will state them: the stored plan's board and spans, else the revision's settings.
+  let loads = plan ? null : await loadsForRevision(revision, solve(revision.spec));
   if (plan) {
     const job = await jobForPlan(plan, revision, found.designName);
+    loads = { report: loadsOf(job), stored: !job.loadsFromDefaults };
     const { files, previews } = jobTextFiles(job);
     stored = {
       id: plan.id,
@@ -116,10 +124,15 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
           </Link>
         </div>
       )}
-      <p className="max-w-3xl text-sm text-ink-soft">
-        CAUTION: a rolling exhibit has pinch points where the wheel meets the track. Check the parts, joints and supports with your local codes, the
-        authority having jurisdiction and a licensed engineer before anyone rides or touches it.
-      </p>
+      <Panel title="Load-path cautions">
+        {!loads!.stored ? (
+          <p className="mb-2 text-sm text-ink-soft" data-testid="loads-defaults">
+            R{revision.number} was saved without load settings: these use the shop library&apos;s defaults (pushed by hand). Set the use and the load in the
+            studio&apos;s Loads panel and save a revision.
+          </p>
+        ) : null}
+        <CautionList cautions={loads!.report.cautions.map((c) => ({ signal: c.signal, text: cautionText(c) }))} disclaimer={loads!.report.disclaimer} />
+      </Panel>
       {/* The studio width: the sheets and the run are drawn wide. */}
       <div className="relative left-1/2 w-[min(110rem,calc(100vw-2rem))] -translate-x-1/2">
         <CutPlanner
