@@ -50,3 +50,9 @@ export function cautionText(c: Caution): string {
   const figures = [c.figure, c.limit].filter(Boolean).join("; ");
   return `${c.hazard} ${c.consequence} ${c.avoid} (${figures ? `${figures}. ` : ""}Source: ${c.source}.)`;
 }
+
+/** For lists that show the message first and its figures and source smaller beneath it. */
+export function cautionParts(c: Caution): { signal: Signal; text: string; detail: string } {
+  const figures = [c.figure, c.limit].filter(Boolean).join("; ");
+  return { signal: c.signal, text: `${c.hazard} ${c.consequence} ${c.avoid}`, detail: `${figures ? `${figures}. ` : ""}Source: ${c.source}.` };
+}

@@ -72,7 +72,7 @@ function cornerRadius(input: LoadsInput): Suggestion | null {
 
 function otherTread(input: LoadsInput, check: CheckId): Suggestion | null {
   for (const t of input.treads ?? []) {
-    const wheel = { ...input.wheel, modulusGpa: t.modulusGpa, poisson: t.poisson, allowableMpa: t.allowableMpa ?? input.wheel.allowableMpa };
+    const wheel = { ...input.wheel, material: t.name, modulusGpa: t.modulusGpa, poisson: t.poisson, allowableMpa: t.allowableMpa ?? input.wheel.allowableMpa };
     const changed: LoadsInput = { ...input, mu: t.mu, tiltDeg: undefined, wheel };
     const after = tryCheck(changed);
     if (after && passes(after, check)) return { check, change: `Use the tread ${t.name} (μ ${t.mu}).`, inputs: { mu: t.mu, tiltDeg: undefined, wheel }, after };

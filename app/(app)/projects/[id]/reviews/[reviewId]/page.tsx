@@ -14,7 +14,7 @@ import { getProjectSummary } from "@/db/queries/projects";
 import { reviewDetail } from "@/db/queries/reviews";
 import { cutFactsOfSettings } from "@/lib/cut/load-facts";
 import { parseCutSettings } from "@/lib/cut/settings";
-import { cautionText } from "@/lib/loads";
+import { cautionParts } from "@/lib/loads";
 import { formatMoney } from "@/lib/money/currency";
 import { plainFigures } from "@/lib/review/plain-figures";
 import { approvalReference } from "@/lib/review/reference";
@@ -49,7 +49,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   // settings, and the stored plan's board and support spacing when there is one.
   const composed = (plan?.settings as { composed?: unknown } | undefined)?.composed;
   const loads = await loadsForRevision(found.revision, solve(found.revision.spec), composed ? cutFactsOfSettings(parseCutSettings(composed)) : undefined);
-  const cautions = loads.report.cautions.map((c) => ({ signal: c.signal, text: cautionText(c) }));
+  const cautions = loads.report.cautions.map(cautionParts);
   const run = detail.runLengthMm !== null ? { runLength: detail.runLengthMm, endTreatment: detail.endTreatment ?? "flat" } : null;
   const deposit = detail.deposit;
 

@@ -13,7 +13,7 @@ import { listShopLibrary } from "@/db/queries/shop";
 import { CautionList } from "@/components/review/caution-list";
 import { Panel } from "@/components/ui/panel";
 import { jobTextFiles, loadsOf } from "@/lib/cut/export/job";
-import { cautionText } from "@/lib/loads";
+import { cautionParts } from "@/lib/loads";
 import { loadsForRevision } from "@/lib/server/loads";
 import { solve } from "@/lib/track";
 import type { CutSettings } from "@/lib/cut/settings";
@@ -131,7 +131,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
             studio&apos;s Loads panel and save a revision.
           </p>
         ) : null}
-        <CautionList cautions={loads!.report.cautions.map((c) => ({ signal: c.signal, text: cautionText(c) }))} disclaimer={loads!.report.disclaimer} />
+        <CautionList cautions={loads!.report.cautions.map(cautionParts)} disclaimer={loads!.report.disclaimer} />
       </Panel>
       {/* The studio width: the sheets and the run are drawn wide. */}
       <div className="relative left-1/2 w-[min(110rem,calc(100vw-2rem))] -translate-x-1/2">
