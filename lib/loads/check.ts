@@ -33,6 +33,8 @@ export interface GripResult {
   /** Traction share used: the given or default H/V plus the wheel's own inertia load. */
   tractionShare: number;
   marginAsked: number;
+  /** available ÷ needed (null without an available figure). */
+  margin: number | null;
   ok: boolean | null;
 }
 
@@ -140,7 +142,7 @@ function gripOf(input: LoadsInput, result: SolveResult, V: number, k: number): {
   const needed = frictionNeeded(tilt, share);
   const available = input.mu ?? (input.tiltDeg !== undefined ? muFromTilt(input.tiltDeg) : null);
   return {
-    grip: { needed, available, at: fd.at, tractionShare: share, marginAsked: GRIP_MARGIN, ok: available === null ? null : available >= GRIP_MARGIN * needed },
+    grip: { needed, available, at: fd.at, tractionShare: share, marginAsked: GRIP_MARGIN, margin: available === null ? null : available / needed, ok: available === null ? null : available >= GRIP_MARGIN * needed },
     dynamics,
   };
 }

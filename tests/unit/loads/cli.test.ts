@@ -41,6 +41,7 @@ describe("scripts/loads.ts", () => {
     expect(out.wheelLoadN).toBeCloseTo((110 * 9.80665 * 2) / 2, 9); // standard gravity (NIST SP 811)
     expect(Object.keys(out.grip)).toEqual(expect.arrayContaining(["needed", "available", "at"]));
     expect(out.grip.needed).toBeCloseTo(1.5, 9); // T7: (1 + 0.2)/(1 − 0.2)
+    expect(out.grip.margin).toBeCloseTo(0.6 / 1.5, 9);
     expect(Object.keys(out.contact)).toEqual(expect.arrayContaining(["radiusMm", "halfWidthMm", "pMaxMpa", "tauMaxMpa", "depthMm", "at"]));
     expect(out.contact.radiusMm).toBe(0); // a sharp square
     expect(Object.keys(out.deflection)).toEqual(expect.arrayContaining(["pointLoadMm", "selfWeightMm", "limitMm", "maxSpanMm"]));
