@@ -44,6 +44,11 @@ function positive(flag: string, v: string | undefined): number {
   return n;
 }
 
+/** The name engraved on the parts and used for the files: --project, else the spec file's own name. */
+export function projectFor(args: { spec: string; project?: string }): string {
+  return (args.project ?? basename(args.spec, extname(args.spec))).slice(0, 60);
+}
+
 export function parseArgs(argv: string[]): Args {
   const rest: string[] = [];
   const flags = new Map<string, string>();
@@ -133,7 +138,8 @@ async function main(argv: string[]): Promise<number> {
     if (args.length !== undefined) overrides.runLength = args.length;
     if (args.sheet) overrides.sheet = args.sheet;
     if (args.units) overrides.outputUnits = args.units;
-    if (args.project) overrides.project = args.project;
+    // Without --project the labels carry the design's own name (its file's), never the product's.
+    overrides.project = projectFor(args);
     const plan = buildCutParts(spec, result, overrides, { font: loadHersheyFont() });
     const s = plan.settings;
     const { paths: toolPaths, warnings: kerfWarnings } = await kerfParts(plan.parts, s);
@@ -144,7 +150,7 @@ async function main(argv: string[]): Promise<number> {
     if (nested?.nest.unplaced.length)
       process.stderr.write(`warning: ${nested.nest.unplaced.length} part copies did not fit on the sheets: ${nested.nest.unplaced.map((u) => `${u.id} (${u.reason})`).join("; ")}\n`);
     if (args.format === "zip") {
-      const baseName = slug(args.project ?? basename(args.spec, extname(args.spec)));
+      const baseName = slug(projectFor(args));
       const zip = await jobZip({ baseName, design: basename(args.spec), result, plan, toolPaths, nest: nested!.nest, nestNote: nested!.note });
       writeFileSync(args.out, zip);
     } else {

@@ -16,4 +16,4 @@ export { drawingToDxf } from "./export/dxf";
 export { drawingToSvg } from "./export/svg";
 export { bomCsv, csvField } from "./export/bom-csv";
 export { jobReadme } from "./export/readme";
-export { jobTextFiles, slug, type JobInput, type JobFile } from "./export/job";
+export { jobTextFiles, revisionBaseName, slug, type JobInput, type JobFile } from "./export/job";

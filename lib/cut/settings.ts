@@ -79,8 +79,8 @@ export const lighteningSchema = z.strictObject({
 
 export const cutSettingsSchema = z
   .strictObject({
-    /** Project name for the labels and the job README. */
-    project: z.string({ error: "The project name must be text." }).trim().max(60, { error: "The project name has at most 60 characters." }).default("Axlewright job"),
+    /** Project name for the labels and the job README; empty: the labels carry the part ids alone (never the product's name). */
+    project: z.string({ error: "The project name must be text." }).trim().max(60, { error: "The project name has at most 60 characters." }).default(""),
     /** Largest cap height of engraved label text. */
     labelHeight: length("The label height", 2, 50, 10),
     runLength: length("The run length", 10, 100000, 2400),

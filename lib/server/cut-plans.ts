@@ -8,7 +8,7 @@ import { getProjectSummary } from "@/db/queries/projects";
 import { approvalOf, approvalStamp } from "@/db/queries/reviews";
 import { getShopRows } from "@/db/queries/shop";
 import type { Revision } from "@/db/schema";
-import { buildCutParts, isCutError, kerfParts, nestItemsFor, slug, type CutPlanResult } from "@/lib/cut";
+import { buildCutParts, isCutError, kerfParts, nestItemsFor, revisionBaseName, type CutPlanResult } from "@/lib/cut";
 import { loadHersheyFont } from "@/lib/cut/labels/font-file";
 import type { JobInput } from "@/lib/cut/export/job";
 import { cutFactsOf } from "@/lib/cut/load-facts";
@@ -42,7 +42,7 @@ export interface BuiltPlan {
 /** The settings of a new plan: the request's own, with the chosen library rows' figures. */
 export async function composeFromLibrary(choice: PlanChoice, projectId: number) {
   const [library, project] = await Promise.all([getShopRows(choice), getProjectSummary(projectId)]);
-  return { library, settings: composeSettings(choice, library, project?.name ?? "Axlewright job") };
+  return { library, settings: composeSettings(choice, library, project?.name ?? "") };
 }
 
 /** The parts of a revision under the given settings, built as the browser builds them (plus labels). */
@@ -110,7 +110,7 @@ export async function jobForPlan(plan: CutPlanRow, revision: Revision, designNam
     loadsFromDefaults: !loads.stored,
     approval: await approvalStamp(revision),
     unapprovedReason: (plan.summary as Partial<CutPlanSummary>).unapprovedReason ?? null,
-    baseName: slug(`${built.plan.settings.project} ${designName} r${revision.number}`),
+    baseName: revisionBaseName(revision.number, built.plan.settings.project, designName),
     design: designName,
     revision: revision.number,
     result: built.result,

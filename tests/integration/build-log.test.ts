@@ -248,7 +248,7 @@ describe("the assembly sheet PDF", () => {
       const res = await sheetRoute.GET(new Request(`http://test.local/api/cut-plans/${planId}/assembly-sheet?paper=${paper}`), ctx({ id: String(planId) }));
       expect(res.status).toBe(200);
       expect(res.headers.get("content-type")).toBe("application/pdf");
-      expect(res.headers.get("content-disposition")).toMatch(new RegExp(`filename=".*build-log.*log-track-r1-assembly-${paper}\\.pdf"`));
+      expect(res.headers.get("content-disposition")).toMatch(new RegExp(`filename="r1-.*build-log.*log-track-assembly-${paper}\\.pdf"`));
       const file = join(dir, `${paper}.pdf`);
       writeFileSync(file, Buffer.from(await res.arrayBuffer()));
       // Debian's poppler-utils, an independent reader of the PDF.

@@ -53,17 +53,31 @@ export function loadsOf(j: JobInput): LoadsReport {
   return j.loads ?? checkLoads(loadsInputFor(j.spec, defaultLoadsSettings(), undefined, cutFactsOf(j.plan)), j.result);
 }
 
-/** A file-name stem from free text: lower case letters, digits and hyphens. */
+/**
+ * The file-name stem of a revision's files: the revision first, so a long project or design name
+ * can never cut it off and the files of R1 and R2 never collide ("r12-square-wheel-trike-run-…").
+ */
+export function revisionBaseName(revision: number, ...names: string[]): string {
+  const head = `r${revision}`;
+  const rest = slugPart(names.join(" ")).slice(0, 60 - head.length - 1).replace(/-+$/, "");
+  return rest ? `${head}-${rest}` : head;
+}
+
+/** Lower case letters, digits and hyphens from free text (empty if nothing is left). */
+function slugPart(text: string): string {
+  return text
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .toLowerCase()
+    .replace(/[^a-z0-9]+/g, "-")
+    .replace(/^-+|-+$/g, "")
+    .slice(0, 60)
+    .replace(/-+$/, "");
+}
+
+/** A file-name stem from free text: lower case letters, digits and hyphens ("job" if none are left). */
 export function slug(text: string): string {
-  return (
-    text
-      .normalize("NFKD")
-      .replace(/[\u0300-\u036f]/g, "")
-      .toLowerCase()
-      .replace(/[^a-z0-9]+/g, "-")
-      .replace(/^-+|-+$/g, "")
-      .slice(0, 60) || "axlewright-job"
-  );
+  return slugPart(text) || "job";
 }
 
 export function jobTextFiles(j: JobInput): JobTextFiles {
@@ -77,7 +91,7 @@ export function jobTextFiles(j: JobInput): JobTextFiles {
   const revisionNote = `${j.design ?? "design"}${j.revision !== undefined ? ` R${j.revision}` : ""}, spec ${j.result.specHash.slice(0, 12)}`;
   // Every drawing carries the approval (or its absence) on REFERENCE, which is never cut.
   const notes = [approvalLine(stamp, { ascii: true }), revisionNote];
-  const titled = (what: string) => `${s.project}: ${what} — ${approvalLine(stamp)}`;
+  const titled = (what: string) => `${s.project ? `${s.project}: ` : ""}${what} — ${approvalLine(stamp)}`;
   const row = buildDrawing(partsRow(j.plan.parts, { gap: 20 + s.machine.kerf, toolPaths: j.toolPaths }), { units: u, toolPaths, notes });
   files.push({ name: `${base}-parts-${u}.dxf`, data: drawingToDxf(row) });
   files.push({ name: `${base}-parts-${u}.svg`, data: drawingToSvg(row, { title: titled("parts") }) });

@@ -6,7 +6,8 @@ import { tmpdir } from "node:os";
 import { join } from "node:path";
 import { describe, expect, it } from "vitest";
 import DxfParser from "dxf-parser";
-import { parseArgs, UsageError } from "@/scripts/export";
+import { revisionBaseName } from "@/lib/cut";
+import { parseArgs, projectFor, UsageError } from "@/scripts/export";
 import { SQUARE_SPEC } from "./support/fixtures";
 
 const TSX = join(process.cwd(), "node_modules", ".bin", "tsx");
@@ -37,6 +38,21 @@ describe("npm run export", () => {
     expect(usage(["s.json", "--format", "dxf"])).toBe("Give --out FILE.");
     expect(usage(["--format", "dxf", "--out", "x"])).toBe("Give a spec file.");
     expect(usage(["s.json", "--format", "dxf", "--out", "x", "--colour", "red"])).toBe("Unknown flag --colour.");
+  });
+
+  it("engraves the design's own name without --project, never the product's", () => {
+    expect(projectFor({ spec: "/jobs/trike-run.json" })).toBe("trike-run");
+    expect(projectFor({ spec: "/jobs/trike-run.json", project: "Motion Hall" })).toBe("Motion Hall");
+  });
+
+  it("keeps the revision in file names however long the project and design names are", () => {
+    const long = "Northfold Discovery Centre square-wheel trike run for the motion hall";
+    const [r1, r2] = [1, 2].map((n) => revisionBaseName(n, long, "Trike run track with rounded corners, second try"));
+    expect(r1).not.toBe(r2);
+    expect(r1.startsWith("r1-")).toBe(true);
+    expect(r2.startsWith("r2-")).toBe(true);
+    expect(r1.length).toBeLessThanOrEqual(60);
+    expect(revisionBaseName(12, "")).toBe("r12");
   });
 
   it("exits with 1 and a clear message for an unreadable spec", () => {

@@ -1,6 +1,6 @@
 import { assemblySheetPdf } from "@/lib/assembly/pdf";
 import { PAPER_SIZES, type Paper } from "@/lib/assembly/sheet";
-import { slug } from "@/lib/cut";
+import { revisionBaseName } from "@/lib/cut";
 import { assemblySheetFor, bumpLimitParam, requireSheetAccess } from "@/lib/server/assembly";
 import { AppError } from "@/lib/server/errors";
 import { idParam, route } from "@/lib/server/route";
@@ -14,7 +14,7 @@ export const GET = route<{ id: string }>(async (request, params) => {
   const units = q.get("units");
   const sheet = await assemblySheetFor(access.plan, access, { inches: units === "in" ? true : units === "mm" ? false : undefined, bumpLimit: bumpLimitParam(q.get("limit")) });
   const pdf = await assemblySheetPdf(sheet, { paper: paper as Paper });
-  const name = `${slug(`${sheet.project.name} ${sheet.design.name} r${sheet.design.revision}`)}-assembly-${paper}.pdf`;
+  const name = `${revisionBaseName(sheet.design.revision, sheet.project.name, sheet.design.name)}-assembly-${paper}.pdf`;
   return new Response(new Uint8Array(pdf), {
     headers: { "content-type": "application/pdf", "content-disposition": `attachment; filename="${name}"`, "cache-control": "private, no-store", "x-content-type-options": "nosniff" },
   });

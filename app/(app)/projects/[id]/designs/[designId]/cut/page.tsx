@@ -138,7 +138,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
         <CutPlanner
           revision={{ id: revision.id, number: revision.number, spec: revision.spec, specHash: revision.specHash }}
           designName={found.designName}
-          projectName={project?.name ?? "Axlewright job"}
+          projectName={project?.name ?? ""}
           library={{
             materials: library.materials.map((m) => ({ id: m.id, name: m.name, thicknessMm: m.thicknessMm })),
             sheets: library.stockSheets.map((s) => ({ id: s.id, name: s.name, lengthMm: s.lengthMm, widthMm: s.widthMm, grain: s.grain, materialId: s.materialId })),
