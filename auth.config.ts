@@ -11,6 +11,8 @@ export const authConfig = {
     },
     session({ session, token }) {
       if (token.sub) session.user.id = token.sub;
+      // When the token was issued, so a password change can end the sessions that came before it.
+      if (typeof token.iat === "number") (session.user as { issuedAt?: number }).issuedAt = token.iat;
       return session;
     },
   },

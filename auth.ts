@@ -11,7 +11,8 @@ import { signInSchema } from "./lib/validation/auth";
 
 declare module "next-auth" {
   interface Session {
-    user: { id: string } & DefaultSession["user"];
+    /** issuedAt: the token's "iat", seconds since the epoch. */
+    user: { id: string; issuedAt?: number } & DefaultSession["user"];
   }
 }
 

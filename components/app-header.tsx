@@ -31,6 +31,9 @@ export function AppHeader({ user }: { user: CurrentUser }) {
           <span data-testid="current-user" className="whitespace-nowrap">
             {user.name} <Badge>{user.role}</Badge>
           </span>
+          <Link href="/account/password" className="whitespace-nowrap text-ink-soft hover:underline">
+            Change password
+          </Link>
           <form action={signOutAction}>
             <button type="submit" className="whitespace-nowrap text-ink-soft hover:underline">
               Sign out

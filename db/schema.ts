@@ -43,6 +43,8 @@ export const users = mysqlTable("users", {
   role: mysqlEnum("role", USER_ROLES).notNull(),
   active: boolean("active").notNull().default(true),
   organisationId: int("organisation_id").references(() => organisations.id),
+  /** Sessions issued before this moment (whole seconds, as JWT "iat") are ended: set when the password changes. */
+  sessionsFrom: timestamp("sessions_from"),
   createdAt: timestamp("created_at").notNull().defaultNow(),
   updatedAt: timestamp("updated_at").notNull().defaultNow().onUpdateNow(),
 });

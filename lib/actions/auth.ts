@@ -4,9 +4,11 @@
 import { AuthError } from "next-auth";
 import { z } from "zod";
 import { signIn, signOut } from "@/auth";
-import type { ActionState } from "@/lib/server/action";
-import { SIGN_IN_WINDOW_MINUTES } from "@/lib/server/sign-in";
-import { signInSchema } from "@/lib/validation/auth";
+import { formAction, type ActionState } from "@/lib/server/action";
+import { requireUser } from "@/lib/server/dal";
+import { clientAddressFromHeaders } from "@/lib/server/request";
+import { changePassword, SIGN_IN_WINDOW_MINUTES } from "@/lib/server/sign-in";
+import { passwordChangeSchema, signInSchema } from "@/lib/validation/auth";
 
 function safeCallback(value: FormDataEntryValue | null): string {
   const s = typeof value === "string" ? value : "";
@@ -38,4 +40,12 @@ export async function authenticate(_previous: ActionState, formData: FormData): 
 
 export async function signOutAction(): Promise<void> {
   await signOut({ redirectTo: "/login" });
+}
+
+const changePasswordForm = formAction(passwordChangeSchema, () => requireUser(), async (input, user) => {
+  await changePassword(user, input.currentPassword, input.newPassword, await clientAddressFromHeaders());
+  return "Password changed. Every session of yours has ended: sign in again with the new password.";
+});
+export async function changePasswordAction(...args: Parameters<typeof changePasswordForm>) {
+  return changePasswordForm(...args);
 }

@@ -5,6 +5,7 @@ import { changeUserRole, createUser, setUserActive } from "@/db/queries/users";
 import { formAction } from "@/lib/server/action";
 import { requireRole } from "@/lib/server/dal";
 import { sendMail } from "@/lib/server/mail";
+import { linkFromRequest } from "@/lib/server/request";
 import { changeRoleSchema, newUserSchema, setActiveSchema } from "@/lib/validation/users";
 
 const admin = () => requireRole("admin");
@@ -14,7 +15,7 @@ const createUserForm = formAction(newUserSchema, admin, async (input, actor) => 
   await sendMail({
     to: input.email,
     subject: "Your Axlewright account",
-    text: `Hello ${input.name},\n\n${actor.name} has made you an Axlewright account (${input.role}).\nSign in at ${process.env.APP_URL ?? ""}/login with this e-mail address and the password you were given, then change it.\n`,
+    text: `Hello ${input.name},\n\n${actor.name} has made you an Axlewright account (${input.role}).\nSign in at ${await linkFromRequest("/login")} with this e-mail address and the password you were given, then change it at ${await linkFromRequest("/account/password")}.\n`,
   });
   revalidatePath("/admin/users");
   return `Added ${input.name}.`;

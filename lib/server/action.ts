@@ -16,7 +16,7 @@ export interface ActionState {
 
 export const initialActionState: ActionState = {};
 
-const SECRET_FIELDS = new Set(["password", "newPassword"]);
+const SECRET_FIELDS = new Set(["password", "newPassword", "currentPassword", "newPasswordAgain"]);
 
 /** What the user typed, minus passwords, to put back into the form. */
 function typedValues(formData: FormData): Record<string, string> {

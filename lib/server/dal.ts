@@ -22,11 +22,13 @@ export const getCurrentUser = cache(async (): Promise<CurrentUser | null> => {
   const id = Number(session?.user?.id);
   if (!Number.isInteger(id) || id <= 0) return null;
   const [user] = await db
-    .select({ id: users.id, email: users.email, name: users.name, role: users.role, active: users.active })
+    .select({ id: users.id, email: users.email, name: users.name, role: users.role, active: users.active, sessionsFrom: users.sessionsFrom })
     .from(users)
     .where(eq(users.id, id))
     .limit(1);
   if (!user || !user.active) return null;
+  // A session issued before the password last changed has ended.
+  if (user.sessionsFrom && !((session?.user?.issuedAt ?? 0) * 1000 >= user.sessionsFrom.getTime())) return null;
   return { id: user.id, email: user.email, name: user.name, role: user.role };
 });
 
