@@ -4,6 +4,7 @@
 import type { ReactNode } from "react";
 import { FieldRow as Field } from "@/components/ui/field-row";
 import type { PlanForm } from "@/lib/cut-plan/form";
+import { ROTATION_LABELS } from "@/lib/cut/settings";
 
 export interface LibraryOptions {
   materials: { id: number; name: string }[];
@@ -102,12 +103,7 @@ export function PlanFields({ form, set, library, errors, hasTrack }: { form: Pla
           {...p}
           name="rotations"
           label="Rotations allowed"
-          options={[
-            { value: "90", label: "Quarter turns" },
-            { value: "180", label: "Half turns only" },
-            { value: "free", label: "Eighth turns (45° steps)" },
-            { value: "none", label: "None" },
-          ]}
+          options={Object.entries(ROTATION_LABELS).map(([value, label]) => ({ value, label }))}
         />
         <NumberInput {...p} name="margin" label="Sheet margin" error={errors.margin} />
         <NumberInput {...p} name="spacing" label="Part spacing" error={errors.spacing} hint="Stock left between two cuts." />

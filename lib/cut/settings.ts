@@ -77,6 +77,9 @@ export const lighteningSchema = z.strictObject({
   rim: length("The lightening rim", 2, 500, 25),
 }, { error: "The lightening settings must be null or an object such as { count: 4, rim: 25 }." });
 
+/** The nest's allowed rotations as the shop says them, for the form and the README. */
+export const ROTATION_LABELS = { "90": "Quarter turns", "180": "Half turns only", free: "Eighth turns (45° steps)", none: "None" } as const;
+
 export const cutSettingsSchema = z
   .strictObject({
     /** Project name for the labels and the job README; empty: the labels carry the part ids alone (never the product's name). */

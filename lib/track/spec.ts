@@ -17,6 +17,14 @@ const formula = z.string().min(1).max(MAX_FORMULA_LENGTH);
 
 export const MAX_POINTS = 20000;
 
+/** The modes as people call them, for messages and forms. */
+export const MODE_NAMES = {
+  "track-for-wheel": "Track for a wheel",
+  "wheel-for-track": "Wheel for a track",
+  "partner-wheel": "Partner wheel",
+  "twin-wheels": "Twin wheels",
+} as const;
+
 const polygon = z
   .strictObject({
     kind: z.literal("polygon"),
@@ -27,7 +35,7 @@ const polygon = z
     cornerRadius: z.number().finite().min(0).default(0),
   })
   .refine((w) => [w.inradius, w.circumradius, w.side].filter((v) => v !== undefined).length === 1, {
-    message: "Give exactly one of inradius, circumradius or side.",
+    message: "Give exactly one size for the polygon: its inradius, its circumradius or its side length.",
   });
 
 const ellipse = z
@@ -37,7 +45,7 @@ const ellipse = z
     semiMinor: len,
     axle: z.union([z.literal("focus"), z.literal("centre"), xy]).default("focus"),
   })
-  .refine((w) => w.semiMajor >= w.semiMinor, { message: "semiMajor must be at least semiMinor." });
+  .refine((w) => w.semiMajor >= w.semiMinor, { message: "The ellipse's semi-major axis must be at least as long as its semi-minor axis." });
 
 const circle = z.strictObject({
   kind: z.literal("circle"),
@@ -81,14 +89,15 @@ export const designSpecSchema = z
   })
   .superRefine((s, ctx) => {
     const needsWheel = s.mode === "track-for-wheel" || s.mode === "partner-wheel";
-    if (needsWheel && !s.wheel) ctx.addIssue({ code: "custom", path: ["wheel"], message: `The ${s.mode} mode needs a wheel.` });
-    if (!needsWheel && !s.track) ctx.addIssue({ code: "custom", path: ["track"], message: `The ${s.mode} mode needs a track.` });
-    if (needsWheel && s.track) ctx.addIssue({ code: "custom", path: ["track"], message: `The ${s.mode} mode takes a wheel, not a track.` });
-    if (!needsWheel && s.wheel) ctx.addIssue({ code: "custom", path: ["wheel"], message: `The ${s.mode} mode takes a track, not a wheel.` });
+    const mode = MODE_NAMES[s.mode];
+    if (needsWheel && !s.wheel) ctx.addIssue({ code: "custom", path: ["wheel"], message: `${mode} needs a wheel.` });
+    if (!needsWheel && !s.track) ctx.addIssue({ code: "custom", path: ["track"], message: `${mode} needs a track.` });
+    if (needsWheel && s.track) ctx.addIssue({ code: "custom", path: ["track"], message: `${mode} starts from a wheel, not a track.` });
+    if (!needsWheel && s.wheel) ctx.addIssue({ code: "custom", path: ["wheel"], message: `${mode} starts from a track, not a wheel.` });
     if (s.mode === "partner-wheel" && s.lobes === undefined)
-      ctx.addIssue({ code: "custom", path: ["lobes"], message: "The partner-wheel mode needs lobes (a whole number from 1)." });
+      ctx.addIssue({ code: "custom", path: ["lobes"], message: "A partner wheel needs its number of lobes (a whole number from 1)." });
     if ((s.mode === "wheel-for-track" || s.mode === "twin-wheels") && s.periodsPerTurn === undefined)
-      ctx.addIssue({ code: "custom", path: ["periodsPerTurn"], message: `The ${s.mode} mode needs periodsPerTurn (a whole number from 1).` });
+      ctx.addIssue({ code: "custom", path: ["periodsPerTurn"], message: `${mode} needs the number of periods per turn (a whole number from 1).` });
   })
   .transform((s) => ({ ...s, tolerance: s.tolerance ?? (s.units === "in" ? 0.0005 : 0.01) }));
 

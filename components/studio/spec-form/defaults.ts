@@ -1,6 +1,6 @@
 // What a field group starts with when the user switches to another wheel, track or mode.
 import { PRESETS } from "@/lib/studio/presets";
-import type { DesignSpecInput } from "@/lib/track";
+import { MODE_NAMES, type DesignSpecInput } from "@/lib/track";
 
 type Wheel = NonNullable<DesignSpecInput["wheel"]>;
 type Track = NonNullable<DesignSpecInput["track"]>;
@@ -30,12 +30,7 @@ export function inUnits<T extends object>(value: T, units: "mm" | "in", counts: 
   return out as T;
 }
 
-export const MODE_LABELS: Record<Mode, string> = {
-  "track-for-wheel": "Track for a wheel",
-  "wheel-for-track": "Wheel for a track",
-  "partner-wheel": "Partner wheel",
-  "twin-wheels": "Twin wheels",
-};
+export const MODE_LABELS: Record<Mode, string> = MODE_NAMES;
 
 /** The first preset of a mode, in the units the user is working in. */
 export function defaultSpecFor(mode: Mode): DesignSpecInput {

@@ -2,10 +2,10 @@
 // design it came from (revision and spec hash), the settings and the kerf mode the files assume,
 // the sheets and their utilisation, the parts, the warnings, and the cautions.
 import type { SheetNestResult } from "@/lib/nest/types";
-import type { SolveResult } from "@/lib/track";
+import { MODE_NAMES, type SolveResult } from "@/lib/track";
 import { bounds } from "../geometry";
 import type { RunPlan } from "../plan";
-import { insideRadius, type CutSettings } from "../settings";
+import { insideRadius, ROTATION_LABELS, type CutSettings } from "../settings";
 import type { CutWarning, Part } from "../types";
 import { fmtLen } from "../units";
 import { NOT_APPROVED, approvalLine, type ApprovalStamp } from "@/lib/review/reference";
@@ -49,7 +49,7 @@ export function jobReadme(j: ReadmeInput): string {
     if (j.unapprovedReason) out.push(`Stored for production without approval; the shop's reason: ${j.unapprovedReason}`);
   }
   out.push("");
-  out.push(`Design:      ${j.design ?? "(unnamed)"}; mode ${j.result.mode}, drawn in ${j.result.units}`);
+  out.push(`Design:      ${j.design ?? "(unnamed)"}; ${MODE_NAMES[j.result.mode].toLowerCase()}, drawn in ${j.result.units === "in" ? "inches" : "millimetres"}`);
   out.push(`Revision:    ${j.revision ?? "not stored (made from a spec file)"}`);
   out.push(`Spec hash:   ${j.result.specHash} (SHA-256 of the canonical spec)`);
   out.push(`Engine:      ${j.result.engineVersion}`);
@@ -57,7 +57,7 @@ export function jobReadme(j: ReadmeInput): string {
 
   out.push("SETTINGS", "--------");
   out.push(`Material:    ${s.material}, ${L(s.sheet.thickness)} thick`);
-  out.push(`Sheet:       ${L(s.sheet.length)} × ${L(s.sheet.width)}, grain ${s.sheet.grain === "length" ? "along the length" : "none"}, margin ${L(s.margin)}, part spacing ${L(s.spacing)}, rotations ${s.rotations}`);
+  out.push(`Sheet:       ${L(s.sheet.length)} × ${L(s.sheet.width)}, grain ${s.sheet.grain === "length" ? "along the length" : "none"}, margin ${L(s.margin)}, part spacing ${L(s.spacing)}, rotations: ${ROTATION_LABELS[s.rotations].toLowerCase()}`);
   out.push(
     `Machine:     ${s.machine.kind}, kerf ${L(s.machine.kerf)}${s.machine.kind === "router" ? " (cutter diameter)" : ""}, bed ${L(s.machine.bed.length)} × ${L(s.machine.bed.width)}, leaves ${L(insideRadius(s))} in inside corners`,
   );
