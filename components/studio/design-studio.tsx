@@ -11,6 +11,7 @@ import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import type { Suggestion } from "@/lib/loads";
 import { settingsOrDefault, treadsOf, type LibraryMaterial } from "@/lib/loads/settings";
+import { studioMessage } from "@/lib/studio/field-labels";
 import { clearLocalDraft, clearLocalLoads, loadLocalDraft, loadLocalLoads, sameSpec, saveLocalDraft, saveLocalLoads } from "@/lib/studio/local-draft";
 import { designSpecSchema, type DesignSpecInput } from "@/lib/track";
 import type { LoadsSettings } from "@/lib/validation/loads";
@@ -192,7 +193,7 @@ export function DesignStudio({ designId, projectId, revisionNumber, library = []
               check={solver.check}
               checkError={solver.checkError?.message}
               spec={designSpecSchema.safeParse(spec).data}
-              error={solver.error ? `${solver.error.message}${solver.error.where ? ` (${solver.error.where})` : ""}` : undefined}
+              error={solver.error ? studioMessage(solver.error) : undefined}
               onPick={readOnly ? undefined : (n: number) => change(spec.mode === "partner-wheel" ? { ...spec, lobes: n } : { ...spec, periodsPerTurn: n })}
               onAxleChange={readOnly || !outlineWheel ? undefined : (axle) => change({ ...spec, wheel: { ...outlineWheel, axle } })}
               belowCheck={(showAt) => (
@@ -201,7 +202,7 @@ export function DesignStudio({ designId, projectId, revisionNumber, library = []
                   library={library}
                   readOnly={readOnly}
                   loads={solver.loads}
-                  error={solver.loadsError ? `${solver.loadsError.message}${solver.loadsError.where ? ` (${solver.loadsError.where})` : ""}` : undefined}
+                  error={solver.loadsError ? studioMessage(solver.loadsError) : undefined}
                   onChange={changeLoads}
                   onApply={apply}
                   showAt={showAt}
