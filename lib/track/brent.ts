@@ -5,6 +5,13 @@
 import { Deadline, NO_DEADLINE } from "./deadline";
 import { EngineError } from "./errors";
 
+/** The two ends of the search do not straddle a root: the caller says what that means for the design. */
+export class NotBracketedError extends EngineError {
+  constructor(message: string) {
+    super("no-solution", message);
+  }
+}
+
 export interface BrentOptions {
   /** Absolute tolerance on the root (default 1e-15 · |root|-scale, never below 4·eps·|x|). */
   xtol?: number;
@@ -34,7 +41,7 @@ export function brent(
   if (fa === 0) return { root: a, residual: 0, iterations: 0 };
   if (fb === 0) return { root: b, residual: 0, iterations: 0 };
   if (Math.sign(fa) === Math.sign(fb) || Number.isNaN(fa) || Number.isNaN(fb))
-    throw new EngineError("no-solution", `The root is not bracketed: f(${a}) = ${fa}, f(${b}) = ${fb}.`);
+    throw new NotBracketedError(`The root is not bracketed: f(${a}) = ${fa}, f(${b}) = ${fb}.`);
   let c = a;
   let fc = fa;
   let d = b - a;

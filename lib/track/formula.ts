@@ -47,6 +47,23 @@ const CONSTANTS: Record<string, number> = { pi: Math.PI, e: Math.E };
 
 type Compiled = (v: number) => number;
 
+/**
+ * The parser's own complaint as a sentence that says what to change. Its wording is mathjs's; the
+ * character position it gives counts from 1.
+ */
+export function parseProblem(raw: string): string {
+  const at = /\(char (\d+)\)/.exec(raw);
+  const place = at ? ` at character ${at[1]}` : "";
+  if (/Parenthesis \) expected/.test(raw)) return `A bracket is opened but not closed${place}: add the missing ")".`;
+  if (/Unexpected end of expression/.test(raw)) return `The formula stops too soon${place}: something is missing after the last sign or bracket.`;
+  if (/Value expected/.test(raw)) return `A number or a name is missing${place}, between two signs or after an opening bracket.`;
+  const part = /Unexpected part "([^"]*)"/.exec(raw);
+  if (part) return `"${part[1]}"${place} follows without a sign: write the multiplication out, e.g. "2*x", not "2 x".`;
+  const op = /Unexpected operator (\S+)/.exec(raw);
+  if (op) return `The sign "${op[1]}"${place} is out of place: check the brackets and signs around it.`;
+  return `The formula cannot be read${place}. Write it like 100 + 20*cos(theta).`;
+}
+
 function fail(message: string, where: string): never {
   throw new EngineError("bad-formula", message, where);
 }
@@ -63,7 +80,7 @@ export function compileFormula(source: string, variable: string, where: string):
   try {
     root = parse(source);
   } catch (e) {
-    fail(`The formula does not parse: ${(e as Error).message}.`, where);
+    fail(`The formula does not parse. ${parseProblem((e as Error).message)}`, where);
   }
   let nodes = 0;
   const build = (node: MathNode, depth: number): Compiled => {

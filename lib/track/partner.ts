@@ -8,7 +8,7 @@
 // Placement: driver axle at the origin, partner axle straight below at (0, −a); the partner's body
 // ray τ points along (sin τ, cos τ) in the start pose, so τ = 0 touches the driver's ray t = 0.
 
-import { brent } from "./brent";
+import { brent, NotBracketedError } from "./brent";
 import { Cumulative } from "./cumulative";
 import type { Deadline } from "./deadline";
 import { EngineError } from "./errors";
@@ -44,7 +44,12 @@ export function solveCentreDistance(wheel: Wheel, lobes: number, deadline: Deadl
       throw new EngineError("no-solution", `No centre distance closes a partner with ${lobes} lobe(s).`, "lobes");
   }
   if (F(hi) > 0) hi *= 2;
-  return brent(F, lo, hi, { xtol: 1e-15 * rMax, deadline }).root;
+  try {
+    return brent(F, lo, hi, { xtol: 1e-15 * rMax, deadline }).root;
+  } catch (e) {
+    if (!(e instanceof NotBracketedError)) throw e;
+    throw new EngineError("no-solution", `No centre distance gives a partner with ${lobes} lobe${lobes === 1 ? "" : "s"} that closes: try another number of lobes.`, "lobes");
+  }
 }
 
 export interface Partner {

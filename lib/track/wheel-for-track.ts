@@ -5,7 +5,7 @@
 // (MATH.md §1.5, §1.8). A straight track segment is integrated in closed form (it gives a log-spiral
 // arc of the wheel). The same code serves the lower wheel of a twin pair (sgn = −1: r = y − h).
 
-import { brent } from "./brent";
+import { brent, NotBracketedError } from "./brent";
 import { Cumulative, type CumulativePiece } from "./cumulative";
 import type { Deadline } from "./deadline";
 import { EngineError } from "./errors";
@@ -80,8 +80,16 @@ export function solveAxleHeight(track: Track, k: number, sgn: Side, deadline: De
     farX = far + sgn * scale;
     fFar = F(farX);
   }
-  const res = brent(F, Math.min(near, farX), Math.max(near, farX), { xtol: 1e-15 * scale, deadline });
-  return res.root;
+  try {
+    return brent(F, Math.min(near, farX), Math.max(near, farX), { xtol: 1e-15 * scale, deadline }).root;
+  } catch (e) {
+    if (!(e instanceof NotBracketedError)) throw e;
+    throw new EngineError(
+      "no-solution",
+      `No axle height gives a wheel that closes with ${k} period${k === 1 ? "" : "s"} per turn for this track: try fewer periods per turn or a gentler track.`,
+      "periodsPerTurn",
+    );
+  }
 }
 
 export interface WheelFromTrack {

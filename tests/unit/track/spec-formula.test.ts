@@ -67,3 +67,18 @@ describe("formula", () => {
     expect(e.where).toBe("track.y");
   });
 });
+
+describe("the parser's complaints in plain words", () => {
+  it.each([
+    ["sin(x", /A bracket is opened but not closed at character 6/],
+    ["1 +", /The formula stops too soon at character 4/],
+    ["2 * * 3", /A number or a name is missing at character 5/],
+    ["1 2", /"2" at character 3 follows without a sign/],
+    ["(1+2))", /The sign "\)" at character 6 is out of place/],
+  ])("%s", (src, msg) => {
+    const e = engineError(() => compileFormula(src, "x", "track.y"));
+    expect(e.message).toMatch(msg);
+    // mathjs's own wording never reaches the person (its words, as printed by mathjs 15).
+    expect(e.message).not.toMatch(/Unexpected|Value expected|Parenthesis \) expected|\(char \d+\)/);
+  });
+});

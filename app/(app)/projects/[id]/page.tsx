@@ -78,7 +78,7 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
         <dd>{project.site || "—"}</dd>
         <dt className="text-ink-soft">Last change</dt>
         <dd className="font-mono text-xs">{formatWhen(project.updatedAt)}</dd>
-        <dt className="text-ink-soft">Your part</dt>
+        <dt className="text-ink-soft">Your role</dt>
         <dd>{access.memberRole ?? "admin (not a member)"}</dd>
         <dt className="text-ink-soft">Deposit</dt>
         <dd data-testid="project-deposit">{depositText(deposit)}</dd>
