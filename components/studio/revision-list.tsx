@@ -25,8 +25,8 @@ export function RevisionList({ revisions, base, openNumber, reviewBase }: { revi
             <span className="flex-1 truncate">{r.note || <span className="text-ink-soft">no note</span>}</span>
             <span className="text-xs text-ink-soft">{r.createdBy ?? "—"}</span>
             <span className="font-mono text-xs text-ink-soft">{formatWhen(r.createdAt)}</span>
-            <span className="font-mono text-xs text-ink-faint" title={`SHA-256 of the canonical spec: ${r.specHash}`}>
-              {r.specHash.slice(0, 10)}…
+            <span className="text-xs text-ink-faint" title={`Fingerprint: the SHA-256 of the design as saved, ${r.specHash}`}>
+              fingerprint <span className="font-mono">{r.specHash.slice(0, 10)}…</span>
             </span>
             {reviewBase ? (
               <Link href={`${reviewBase}?review=${r.id}#send-review`} className="text-xs underline decoration-ink-line underline-offset-2" aria-label={`Send revision ${r.number} for the client's review`}>

@@ -108,7 +108,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
             ))}
           </ul>
           <p className="mt-2 text-xs text-ink-soft">
-            Figures from the rolling check of R{detail.revisionNumber} (spec <span className="font-mono">{detail.specHash.slice(0, 12)}</span>, calculation {found.revision.engineVersion}).
+            Figures from the rolling check of R{detail.revisionNumber} (fingerprint <span className="font-mono">{detail.specHash.slice(0, 12)}</span>, calculation version {found.revision.engineVersion}).
           </p>
         </Panel>
         <Panel title="Cautions">

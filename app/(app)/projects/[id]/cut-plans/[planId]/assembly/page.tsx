@@ -105,7 +105,7 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
           <dd>{sheet.project.client ?? "—"}</dd>
           <dt className="text-ink-soft">Design</dt>
           <dd>
-            {sheet.design.name} <span className="font-mono">R{sheet.design.revision}</span> · spec <span className="font-mono">{sheet.design.specHash.slice(0, 12)}</span>
+            {sheet.design.name} <span className="font-mono">R{sheet.design.revision}</span> · fingerprint <span className="font-mono">{sheet.design.specHash.slice(0, 12)}</span>
           </dd>
           <dt className="text-ink-soft">Sign-off</dt>
           <dd data-testid="sheet-approval">

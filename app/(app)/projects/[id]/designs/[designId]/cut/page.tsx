@@ -99,7 +99,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
       <div className="flex flex-wrap items-baseline gap-3">
         <h1 className="text-2xl font-semibold tracking-tight">Parts and cut files: {access.design.name}</h1>
         <span className="font-mono text-sm text-ink-soft" data-testid="cut-revision">
-          R{revision.number} · {revision.specHash.slice(0, 12)}
+          R{revision.number} · fingerprint {revision.specHash.slice(0, 12)}
         </span>
         {revisions.length > 1 ? (
           <nav aria-label="Revisions" className="flex gap-2 text-sm">
