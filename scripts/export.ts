@@ -1,5 +1,5 @@
 // Command line: `npm run export -- spec.json --format dxf|svg|zip --out FILE [--length L]
-// [--sheet W×H] [--units mm|in] [--project NAME] [--seconds S]` solves the design spec, builds the
+// [--sheet L×W] [--units mm|in] [--project NAME] [--seconds S]` solves the design spec, builds the
 // cut parts with the default settings (overridden by the flags; lengths in mm) and writes:
 // dxf/svg = the parts, each once in a row, or with --sheet the nested sheets (one above the other
 // in one file); zip = every file of the job (sheets, parts, PNG previews, BOM, README). Nesting uses
@@ -22,8 +22,8 @@ import { shelfLayout } from "../lib/cut/shelf-layout";
 import type { CutSettings } from "../lib/cut/settings";
 
 const USAGE =
-  "usage: npm run export -- <spec.json> --format dxf|svg|zip --out FILE [--length L] [--sheet W×H] [--units mm|in] [--project NAME] [--seconds S]\n" +
-  "  lengths in mm; --sheet takes 2440x1220, 2440X1220 or 2440×1220\n";
+  "usage: npm run export -- <spec.json> --format dxf|svg|zip --out FILE [--length L] [--sheet L×W] [--units mm|in] [--project NAME] [--seconds S]\n" +
+  "  lengths in mm; --sheet is the sheet's length × width, e.g. 2440x1220, 2440X1220 or 2440×1220\n";
 
 export class UsageError extends Error {}
 
