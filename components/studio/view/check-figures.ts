@@ -33,7 +33,7 @@ export function checkFigures(r: SolveResult): Figure[] {
   const out: Figure[] = [
     {
       key: "interference",
-      label: "Interference depth",
+      label: pair ? "Overlap away from the contact" : "Cut into the track away from the contact",
       value: `${fmt(c.interference.depth)} ${u}`,
       state: c.interference.depth > 0 ? "warn" : "pass",
       note: c.interference.depth > 0 ? (pair ? "The wheels overlap away from the contact." : "The wheel cuts into the track away from the contact.") : undefined,
@@ -41,7 +41,7 @@ export function checkFigures(r: SolveResult): Figure[] {
     },
     {
       key: "friction",
-      label: "Friction demand, max",
+      label: "Grip needed (μ)",
       value: fmt(c.frictionDemand.max, 3),
       state: c.frictionDemand.max > FRICTION_GUIDE ? "warn" : "pass",
       note:
@@ -52,22 +52,22 @@ export function checkFigures(r: SolveResult): Figure[] {
     },
     {
       key: "closure",
-      label: "Closure error",
+      label: pair ? "Turn left over after one lobe (Δθ)" : "Turn left over after one period (Δθ)",
       value: `${fmt(c.closureError, 3)} rad`,
       state: Math.abs(c.closureError) > CLOSURE_LIMIT ? "warn" : "pass",
     },
     {
       key: "axle",
-      label: r.mode === "partner-wheel" ? "Centre distance deviation" : "Axle deviation",
+      label: r.mode === "partner-wheel" ? "Centre distance off its value (Δa)" : "Axle off its line (Δh)",
       value: `${fmt(c.axleDeviation, 3)} ${u}`,
       state: c.axleDeviation > tol ? "warn" : "pass",
     },
-    { key: "slip", label: "Slip (arc-length difference)", value: `${fmt(c.slip, 3)} ${u}`, state: c.slip > tol ? "warn" : "pass" },
+    { key: "slip", label: "Slip between the rolled lengths (Δs)", value: `${fmt(c.slip, 3)} ${u}`, state: c.slip > tol ? "warn" : "pass" },
   ];
   const radii: Array<[string, string, number | undefined]> = [
-    ["wheel", r.mode === "partner-wheel" ? "Min curvature radius, driver" : r.mode === "twin-wheels" ? "Min curvature radius, upper wheel" : "Min curvature radius, wheel", c.minCurvatureRadius.wheel],
-    ["partner", r.mode === "twin-wheels" ? "Min curvature radius, lower wheel" : "Min curvature radius, partner", c.minCurvatureRadius.partner],
-    ["track", "Min curvature radius, track", c.minCurvatureRadius.track],
+    ["wheel", r.mode === "partner-wheel" ? "Tightest bend radius, driver (ρ)" : r.mode === "twin-wheels" ? "Tightest bend radius, upper wheel (ρ)" : "Tightest bend radius, wheel (ρ)", c.minCurvatureRadius.wheel],
+    ["partner", r.mode === "twin-wheels" ? "Tightest bend radius, lower wheel (ρ)" : "Tightest bend radius, partner (ρ)", c.minCurvatureRadius.partner],
+    ["track", "Tightest bend radius, track (ρ)", c.minCurvatureRadius.track],
   ];
   for (const [key, label, value] of radii) {
     if (value === undefined) continue;
