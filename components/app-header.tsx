@@ -2,6 +2,7 @@ import Image from "next/image";
 import Link from "next/link";
 import { signOutAction } from "@/lib/actions/auth";
 import type { CurrentUser } from "@/lib/server/dal";
+import { roleLabel } from "@/lib/labels";
 import { Badge } from "./ui/panel";
 
 export function AppHeader({ user }: { user: CurrentUser }) {
@@ -29,7 +30,7 @@ export function AppHeader({ user }: { user: CurrentUser }) {
         </nav>
         <div className="ml-auto flex items-center gap-3 text-sm">
           <span data-testid="current-user" className="whitespace-nowrap">
-            {user.name} <Badge>{user.role}</Badge>
+            {user.name} <Badge>{roleLabel(user.role)}</Badge>
           </span>
           <Link href="/account/password" className="whitespace-nowrap text-ink-soft hover:underline">
             Change password

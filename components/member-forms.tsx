@@ -3,6 +3,7 @@ import { useActionState } from "react";
 import { addMemberAction, removeMemberAction } from "@/lib/actions/projects";
 import { Button } from "./ui/button";
 import { SelectField } from "./ui/field";
+import { MEMBER_ROLE_ORDER, roleOptions } from "@/lib/labels";
 import { FormMessage } from "./ui/notice";
 
 export function AddMemberForm({ projectId, people }: { projectId: number; people: { id: number; name: string; role: string; email: string }[] }) {
@@ -24,11 +25,7 @@ export function AddMemberForm({ projectId, people }: { projectId: number; people
         defaultValue={v.role}
         errors={state.fields?.role}
         hint="The same as the person's role."
-        options={[
-          { value: "fabricator", label: "Fabricator" },
-          { value: "client", label: "Client" },
-          { value: "installer", label: "Installer" },
-        ]}
+        options={roleOptions(MEMBER_ROLE_ORDER)}
       />
       <div className="sm:pt-6">
         <Button type="submit" disabled={pending}>

@@ -7,6 +7,7 @@ import type { StockSheetRow } from "@/db/queries/shop";
 import { saveMachineAction, saveMaterialAction, saveStockSheetAction, setShopRowActiveAction } from "@/lib/actions/shop";
 import type { ShopTable } from "@/lib/validation/shop";
 import { Button } from "./ui/button";
+import { MACHINE_KIND_LABELS } from "@/lib/labels";
 import { SelectField, TextField } from "./ui/field";
 import { FormMessage } from "./ui/notice";
 
@@ -149,12 +150,7 @@ export function MachineForm({ row }: { row?: Machine }) {
         name="kind"
         defaultValue={v.kind ?? row?.kind ?? "router"}
         errors={f?.kind}
-        options={[
-          { value: "router", label: "CNC router" },
-          { value: "laser", label: "Laser" },
-          { value: "waterjet", label: "Waterjet" },
-          { value: "plasma", label: "Plasma" },
-        ]}
+        options={Object.entries(MACHINE_KIND_LABELS).map(([value, label]) => ({ value, label }))}
       />
       <TextField id={fieldId(p, "kerfMm")} label="Kerf or cutter diameter (mm)" name="kerfMm" inputMode="decimal" defaultValue={num("kerfMm")} errors={f?.kerfMm} />
       <TextField id={fieldId(p, "bedLengthMm")} label="Bed length (mm)" name="bedLengthMm" inputMode="decimal" defaultValue={num("bedLengthMm")} errors={f?.bedLengthMm} />

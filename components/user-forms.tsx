@@ -1,16 +1,12 @@
 "use client";
 import { useActionState } from "react";
 import { changeRoleAction, createUserAction, setActiveAction } from "@/lib/actions/users";
+import { roleOptions } from "@/lib/labels";
 import { Button } from "./ui/button";
 import { SelectField, TextField } from "./ui/field";
 import { FormMessage } from "./ui/notice";
 
-const ROLE_OPTIONS = [
-  { value: "fabricator", label: "Fabricator" },
-  { value: "client", label: "Client" },
-  { value: "installer", label: "Installer" },
-  { value: "admin", label: "Admin" },
-];
+const ROLE_OPTIONS = roleOptions(["fabricator", "client", "installer", "admin"]);
 
 export function NewUserForm() {
   const [state, action, pending] = useActionState(createUserAction, {});

@@ -4,6 +4,7 @@ import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { ProjectsPage } from "./pages/projects-page";
 import { baseUrl, launchBrowser, screenshotPath } from "./support/browser";
 import { signedIn } from "./support/session";
+import { ROLE_LABELS } from "@/lib/labels";
 
 let browser: Browser;
 beforeAll(async () => {
@@ -30,7 +31,7 @@ describe.each(ROLES)("signed in as $email", (r) => {
     const { context, page } = await signedIn(browser, r.email);
     const projects = new ProjectsPage(page);
     await projects.waitUntilShown();
-    expect(await projects.currentUser().innerText()).toContain(r.role);
+    expect(await projects.currentUser().innerText()).toContain(ROLE_LABELS[r.role as keyof typeof ROLE_LABELS]);
     const names = await projects.projectNames();
     // An admin sees every project (other tests add some); everyone else exactly their own.
     if (r.role === "admin") expect(names).toEqual(expect.arrayContaining(r.projects));

@@ -6,6 +6,7 @@ import { Badge, Panel } from "@/components/ui/panel";
 import { Table } from "@/components/ui/table";
 import { listShopLibrary } from "@/db/queries/shop";
 import { requirePageUser } from "@/lib/server/dal";
+import { machineKindLabel } from "@/lib/labels";
 
 export const metadata: Metadata = { title: "Shop library" };
 
@@ -113,7 +114,7 @@ export default async function ShopLibraryPage() {
                   <MachineForm row={k} />
                 </Edit>
               </td>
-              <td>{k.kind}</td>
+              <td>{machineKindLabel(k.kind)}</td>
               <td className="font-mono">{fmt(k.kerfMm)} mm</td>
               <td className="font-mono">
                 {fmt(k.bedLengthMm)} × {fmt(k.bedWidthMm)} mm

@@ -20,6 +20,7 @@ import { getProjectSummary } from "@/db/queries/projects";
 import { listAssignableUsers } from "@/db/queries/users";
 import { requirePageUser, requireProjectAccess } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
+import { roleLabel } from "@/lib/labels";
 
 export const metadata: Metadata = { title: "Project" };
 
@@ -93,7 +94,7 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
                 {m.active ? null : <span className="ml-2 text-xs text-caution">(deactivated)</span>}
               </td>
               <td className="font-mono text-xs">{m.email}</td>
-              <td>{m.role}</td>
+              <td>{roleLabel(m.role)}</td>
               {access.canManage ? (
                 <td className="text-right">
                   <RemoveMemberButton projectId={access.projectId} memberId={m.id} name={m.name} />
