@@ -5,9 +5,10 @@ import { useActionState } from "react";
 import type { Machine, Material } from "@/db/schema";
 import type { StockSheetRow } from "@/db/queries/shop";
 import { saveMachineAction, saveMaterialAction, saveStockSheetAction, setShopRowActiveAction } from "@/lib/actions/shop";
+import { DEFAULT_POISSON } from "@/lib/validation/limits";
 import type { ShopTable } from "@/lib/validation/shop";
 import { Button } from "./ui/button";
-import { MACHINE_KIND_LABELS } from "@/lib/labels";
+import { MACHINE_KIND_LABELS, MATERIAL_KIND_LABELS } from "@/lib/labels";
 import { SelectField, TextField } from "./ui/field";
 import { FormMessage } from "./ui/notice";
 
@@ -59,16 +60,13 @@ export function MaterialForm({ row }: { row?: Material }) {
         name="kind"
         defaultValue={v.kind ?? row?.kind ?? "sheet"}
         errors={f?.kind}
-        options={[
-          { value: "sheet", label: "A sheet parts are cut from" },
-          { value: "tread", label: "A tread on a wheel's rim" },
-        ]}
+        options={Object.entries(MATERIAL_KIND_LABELS).map(([value, label]) => ({ value, label }))}
       />
       <TextField id={fieldId(p, "thicknessMm")} label="Thickness (mm)" name="thicknessMm" inputMode="decimal" defaultValue={num("thicknessMm")} errors={f?.thicknessMm} />
       <TextField id={fieldId(p, "densityKgM3")} label="Density (kg/m³)" name="densityKgM3" inputMode="decimal" defaultValue={num("densityKgM3")} errors={f?.densityKgM3} />
       <TextField id={fieldId(p, "modulusGpa")} label="Modulus (GPa)" name="modulusGpa" inputMode="decimal" defaultValue={num("modulusGpa")} errors={f?.modulusGpa} />
       <TextField id={fieldId(p, "strengthMpa")} label="Strength (MPa)" name="strengthMpa" inputMode="decimal" defaultValue={num("strengthMpa")} errors={f?.strengthMpa} />
-      <TextField id={fieldId(p, "poisson")} label="Poisson's ratio ν" name="poisson" inputMode="decimal" defaultValue={num("poisson") || "0.3"} errors={f?.poisson} />
+      <TextField id={fieldId(p, "poisson")} label="Poisson's ratio ν" name="poisson" inputMode="decimal" defaultValue={num("poisson") || String(DEFAULT_POISSON)} errors={f?.poisson} />
       <TextField
         id={fieldId(p, "allowableMpa")}
         label="Allowable contact stress (MPa)"

@@ -39,20 +39,14 @@ export const DISCLAIMER =
 
 export const bySeverity = (a: Caution, b: Caution) => SIGNAL_ORDER[a.signal] - SIGNAL_ORDER[b.signal];
 
-/** One line: signal word, hazard, consequence, how to avoid it, then the figure against its limit. */
-export function cautionLine(c: Caution): string {
-  const fig = c.figure ? ` (${c.figure}; ${c.limit})` : c.limit ? ` (${c.limit})` : "";
-  return `${c.signal}  ${c.hazard} ${c.consequence} ${c.avoid}${fig}`;
-}
-
-/** A caution as one paragraph: hazard, consequence, how to avoid it, then the figure, its limit and the source. */
-export function cautionText(c: Caution): string {
-  const figures = [c.figure, c.limit].filter(Boolean).join("; ");
-  return `${c.hazard} ${c.consequence} ${c.avoid} (${figures ? `${figures}. ` : ""}Source: ${c.source}.)`;
-}
-
-/** For lists that show the message first and its figures and source smaller beneath it. */
+/** The message (hazard, consequence, how to avoid it) and its detail (figure, limit, source), for lists that show the detail smaller. */
 export function cautionParts(c: Caution): { signal: Signal; text: string; detail: string } {
   const figures = [c.figure, c.limit].filter(Boolean).join("; ");
   return { signal: c.signal, text: `${c.hazard} ${c.consequence} ${c.avoid}`, detail: `${figures ? `${figures}. ` : ""}Source: ${c.source}.` };
+}
+
+/** A caution as one paragraph: the message, then its detail in brackets. */
+export function cautionText(c: Caution): string {
+  const { text, detail } = cautionParts(c);
+  return `${text} (${detail})`;
 }

@@ -7,6 +7,6 @@
 //   caution.ts (ANSI Z535.4 signal words and the disclaimer), check.ts (all of them), helper.ts.
 export { checkLoads, cornerRadiusFor, type LoadsReport, type GripResult, type ContactResult, type DeflectionResult, type DynamicsResult } from "./check";
 export { suggestFixes, type Suggestion } from "./helper";
-export { DISCLAIMER, cautionLine, cautionParts, cautionText, type Caution, type Signal, type CheckId } from "./caution";
+export { DISCLAIMER, cautionParts, cautionText, type Caution, type Signal, type CheckId } from "./caution";
 export type { EngineerLoad } from "./engineer-loads";
 export type { GapFinding } from "./gaps";

@@ -1,28 +1,35 @@
 // The working spec of a design, kept in the browser so unsaved changes survive a reload.
 import type { DesignSpecInput } from "@/lib/track";
 
-const key = (designId: number) => `axlewright:draft:${designId}`;
-
-export function loadLocalDraft(designId: number): DesignSpecInput | null {
-  try {
-    const raw = globalThis.localStorage?.getItem(key(designId));
-    return raw ? (JSON.parse(raw) as DesignSpecInput) : null;
-  } catch {
-    return null;
-  }
+/** One JSON value per design in the browser's storage under `axlewright:<what>:<design id>`. */
+function perDesign<T>(what: string) {
+  const key = (designId: number) => `axlewright:${what}:${designId}`;
+  return {
+    load(designId: number): T | null {
+      try {
+        const raw = globalThis.localStorage?.getItem(key(designId));
+        return raw ? (JSON.parse(raw) as T) : null;
+      } catch {
+        return null;
+      }
+    },
+    save(designId: number, value: T): void {
+      try {
+        globalThis.localStorage?.setItem(key(designId), JSON.stringify(value));
+      } catch {
+        /* storage full or disabled: the change stays in memory only */
+      }
+    },
+    clear(designId: number): void {
+      globalThis.localStorage?.removeItem(key(designId));
+    },
+  };
 }
 
-export function saveLocalDraft(designId: number, spec: DesignSpecInput): void {
-  try {
-    globalThis.localStorage?.setItem(key(designId), JSON.stringify(spec));
-  } catch {
-    /* storage full or disabled: the change stays in memory only */
-  }
-}
-
-export function clearLocalDraft(designId: number): void {
-  globalThis.localStorage?.removeItem(key(designId));
-}
+const drafts = perDesign<DesignSpecInput>("draft");
+export const loadLocalDraft = drafts.load;
+export const saveLocalDraft = drafts.save;
+export const clearLocalDraft = drafts.clear;
 
 /** Same design? Compared as JSON with keys sorted, so key order does not matter. */
 export function sameSpec(a: unknown, b: unknown): boolean {
@@ -31,26 +38,8 @@ export function sameSpec(a: unknown, b: unknown): boolean {
   return JSON.stringify(sorted(a)) === JSON.stringify(sorted(b));
 }
 
-const loadsKey = (designId: number) => `axlewright:loads:${designId}`;
-
 /** The working load settings, kept beside the working spec (unchecked here: the caller parses them). */
-export function loadLocalLoads(designId: number): unknown {
-  try {
-    const raw = globalThis.localStorage?.getItem(loadsKey(designId));
-    return raw ? JSON.parse(raw) : null;
-  } catch {
-    return null;
-  }
-}
-
-export function saveLocalLoads(designId: number, loads: unknown): void {
-  try {
-    globalThis.localStorage?.setItem(loadsKey(designId), JSON.stringify(loads));
-  } catch {
-    /* storage full or disabled: the change stays in memory only */
-  }
-}
-
-export function clearLocalLoads(designId: number): void {
-  globalThis.localStorage?.removeItem(loadsKey(designId));
-}
+const loads = perDesign<unknown>("loads");
+export const loadLocalLoads = loads.load;
+export const saveLocalLoads = loads.save;
+export const clearLocalLoads = loads.clear;

@@ -52,16 +52,24 @@ function minOver(pw: Piecewise, g: (t: number, side: -1 | 0 | 1) => number): Ext
   return best;
 }
 
-/** Where the one-sided slopes differ first: an inner knot, or the period's ends when they do not meet. */
-export function kinkAt(pw: Piecewise, slope: (t: number, side: -1 | 1) => number): number | null {
-  const differ = (l: number, r: number) => Math.abs(l - r) > 1e-7 * (1 + Math.abs(r));
+const slopesDiffer = (l: number, r: number) => Math.abs(l - r) > 1e-7 * (1 + Math.abs(r));
+
+/** The first inner knot where the one-sided slopes differ (a corner or cusp), or null. */
+function innerKink(pw: Piecewise, slope: (t: number, side: -1 | 1) => number): number | null {
   for (let i = 1; i + 1 < pw.knots.length; i++) {
     const k = pw.knots[i];
-    if (differ(slope(k, -1), slope(k, 1))) return k;
+    if (slopesDiffer(slope(k, -1), slope(k, 1))) return k;
   }
+  return null;
+}
+
+/** Where the one-sided slopes differ first: an inner knot, or the period's ends when they do not meet. */
+export function kinkAt(pw: Piecewise, slope: (t: number, side: -1 | 1) => number): number | null {
+  const inner = innerKink(pw, slope);
+  if (inner !== null) return inner;
   const lo = pw.knots[0];
   const hi = pw.knots[pw.knots.length - 1];
-  return differ(slope(hi, -1), slope(lo, 1)) ? lo : null;
+  return slopesDiffer(slope(hi, -1), slope(lo, 1)) ? lo : null;
 }
 
 /** The contact figure of a body with a corner: radius 0 at the corner, else the smooth minimum. */
@@ -151,9 +159,5 @@ export function pairFigures(w: Piecewise, a: number, hasCorners: boolean): Figur
 
 /** True if the one-sided slopes differ at any inner knot (a corner or cusp). */
 export function hasKinks(pw: Piecewise, slope: (t: number, side: -1 | 1) => number): boolean {
-  for (let i = 1; i + 1 < pw.knots.length; i++) {
-    const k = pw.knots[i];
-    if (Math.abs(slope(k, -1) - slope(k, 1)) > 1e-7 * (1 + Math.abs(slope(k, 1)))) return true;
-  }
-  return false;
+  return innerKink(pw, slope) !== null;
 }

@@ -1,6 +1,7 @@
 // The shop library's forms: materials, stock sheets, machines. Every figure is in millimetres (or
 // its SI unit) with limits a real shop would meet; a row must say where its figures come from.
 import { z } from "zod";
+import { DEFAULT_POISSON } from "./limits";
 import { GRAIN_DIRECTIONS, MACHINE_KINDS, MATERIAL_KINDS, SOURCE_KINDS } from "@/db/schema";
 
 function number(what: string, min: number, max: number, unit: string) {
@@ -30,9 +31,9 @@ export const materialSchema = z.object({
   densityKgM3: number("density", 0, 25_000, "kg/m³"),
   modulusGpa: number("modulus", 0, 1_000, "GPa"),
   strengthMpa: number("strength", 0, 5_000, "MPa"),
-  // Left empty: 0.3, the usual figure for wood and metals (as the column's default).
+  // Left empty: the usual figure for wood and metals (as the column's default).
   poisson: z.preprocess(
-    (v) => (v === "" || v === undefined || v === null ? 0.3 : v),
+    (v) => (v === "" || v === undefined || v === null ? DEFAULT_POISSON : v),
     z.coerce.number({ error: "Enter Poisson's ratio as a number." }).refine((v) => Number.isFinite(v) && v >= 0 && v < 0.5, { error: "Poisson's ratio must be from 0 to under 0.5." }),
   ),
   allowableMpa: optionalNumber("allowable contact stress", 0, 10_000),

@@ -9,7 +9,7 @@ import { insideRadius, ROTATION_LABELS, type CutSettings } from "../settings";
 import type { CutWarning, Part } from "../types";
 import { fmtLen } from "../units";
 import { NOT_APPROVED, approvalLine, type ApprovalStamp } from "@/lib/review/reference";
-import type { LoadsReport } from "@/lib/loads";
+import { cautionParts, type LoadsReport } from "@/lib/loads";
 
 export interface ReadmeInput {
   design?: string;
@@ -116,10 +116,7 @@ export function jobReadme(j: ReadmeInput): string {
   const loads = j.loads;
   if (j.loadsFromDefaults) out.push("Load settings: the shop library's starting figures (pushed by hand); set the real use and load in the studio.");
   out.push(`Wheel load ${loads.wheelLoadN.toFixed(0)} N (${loads.loadBasis}).`);
-  for (const c of loads.cautions) {
-    out.push(`${c.signal.padEnd(9)}${c.hazard} ${c.consequence} ${c.avoid}`);
-    if (c.figure || c.limit) out.push(`${" ".repeat(9)}${[c.figure, c.limit].filter(Boolean).join("; ")}. Source: ${c.source}.`);
-  }
+  for (const p of loads.cautions.map(cautionParts)) out.push(`${p.signal.padEnd(9)}${p.text}`, `${" ".repeat(9)}${p.detail}`);
   out.push("", "Loads for the engineer (inputs, not a structural design):");
   for (const l of loads.engineerLoads) out.push(`- ${l.what}: ${l.value} (${l.source})`);
   out.push("", loads.disclaimer, "");
