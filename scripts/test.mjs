@@ -44,8 +44,10 @@ async function main() {
   run(vitest, ["run", "--config", "vitest.config.mts", ...filterArgs], { env });
   if (noBrowser) return;
 
-  buildApp(env, ".next-test");
-  await startApp({ ...env, NEXT_DIST_DIR: ".next-test" }, s.appPort);
+  // AXLEWRIGHT_TEST_DIST: the build folder, for a second test stack in the same tree.
+  const dist = process.env.AXLEWRIGHT_TEST_DIST ?? ".next-test";
+  buildApp(env, dist);
+  await startApp({ ...env, NEXT_DIST_DIR: dist }, s.appPort);
   log("browser tests in Chromium…");
   run(vitest, ["run", "--config", "vitest.e2e.config.mts", ...filterArgs], { env });
 }

@@ -108,7 +108,8 @@ export function demoSettings() {
 export function testSettings() {
   const e = process.env;
   return appEnv({
-    dataDir: path.join(root, ".data/test-mariadb"),
+    // AXLEWRIGHT_TEST_DATA lets two test stacks run side by side in one tree (with other ports).
+    dataDir: path.join(root, e.AXLEWRIGHT_TEST_DATA ?? ".data", "test-mariadb"),
     dbPort: num(e.AXLEWRIGHT_TEST_DB_PORT, 3317),
     database: "axlewright_test",
     password: randomBytes(18).toString("base64url"),
@@ -117,7 +118,7 @@ export function testSettings() {
     mailHttpPort: num(e.AXLEWRIGHT_TEST_MAIL_HTTP_PORT, 2536),
     paymentPort: num(e.AXLEWRIGHT_TEST_PAYMENT_PORT, 2537),
     s3Port: num(e.AXLEWRIGHT_TEST_S3_PORT, 2538),
-    s3DataDir: path.join(root, ".data/test-objects"),
+    s3DataDir: path.join(root, e.AXLEWRIGHT_TEST_DATA ?? ".data", "test-objects"),
     payment: paymentSecrets(),
     authSecret: randomBytes(32).toString("base64url"),
   });
