@@ -11,7 +11,9 @@ export default {
         paper: { DEFAULT: "#f6f0e1", deep: "#ece3cc", edge: "#d9ccaa" },
         ink: { DEFAULT: "#1d3557", soft: "#3d5a80", faint: "#8da2bb", line: "#c4cfdc" },
         grid: "#e2d6b8",
-        caution: { DEFAULT: "#e8590c", soft: "#fde6d5" },
+        // The orange itself marks borders, fills and dots; words in caution are set in its darker
+        // shade, which keeps 4.5:1 on paper, caution-soft and white (WCAG 2.1 SC 1.4.3).
+        caution: { DEFAULT: "#e8590c", soft: "#fde6d5", ink: "#a3420a" },
         pass: "#2f6d4f",
       },
       fontFamily: {

@@ -53,7 +53,7 @@ export function RemoveMemberButton({ projectId, memberId, name }: { projectId: n
       <Button type="submit" variant="quiet" disabled={pending} aria-label={`Remove ${name}`}>
         Remove
       </Button>
-      {state.ok === false ? <span className="ml-2 text-xs text-caution">{state.message}</span> : null}
+      {state.ok === false ? <span className="ml-2 text-xs text-caution-ink">{state.message}</span> : null}
     </form>
   );
 }

@@ -175,7 +175,7 @@ export function RetireToggle({ table, id, active, name }: { table: ShopTable; id
       <Button type="submit" variant={active ? "caution" : "quiet"} disabled={pending} aria-label={`${active ? "Retire" : "Restore"} ${name}`}>
         {active ? "Retire" : "Restore"}
       </Button>
-      {state.ok === false ? <span className="text-xs text-caution">{state.message}</span> : null}
+      {state.ok === false ? <span className="text-xs text-caution-ink">{state.message}</span> : null}
     </form>
   );
 }

@@ -55,7 +55,7 @@ export function RoleSelect({ userId, role, name }: { userId: number; role: strin
       <Button type="submit" variant="quiet" disabled={pending} aria-label={`Save role of ${name}`}>
         Save
       </Button>
-      {state.message ? <span className={`text-xs ${state.ok ? "text-pass" : "text-caution"}`}>{state.message}</span> : null}
+      {state.message ? <span className={`text-xs ${state.ok ? "text-pass" : "text-caution-ink"}`}>{state.message}</span> : null}
     </form>
   );
 }
@@ -69,7 +69,7 @@ export function ActiveToggle({ userId, active, name }: { userId: number; active:
       <Button type="submit" variant={active ? "caution" : "quiet"} disabled={pending} aria-label={`${active ? "Deactivate" : "Reactivate"} ${name}`}>
         {active ? "Deactivate" : "Reactivate"}
       </Button>
-      {state.ok === false ? <span className="text-xs text-caution">{state.message}</span> : null}
+      {state.ok === false ? <span className="text-xs text-caution-ink">{state.message}</span> : null}
     </form>
   );
 }

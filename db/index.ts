@@ -21,5 +21,4 @@ export const pool = globalForDb.axlewrightPool ?? mysql.createPool({ uri: databa
 if (process.env.NODE_ENV !== "production") globalForDb.axlewrightPool = pool;
 
 export const db = drizzle({ client: pool, schema, mode: "default" });
-export type Db = typeof db;
 export { schema };

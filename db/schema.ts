@@ -225,13 +225,15 @@ export const cutPlans = mysqlTable(
   {
     id: int("id").autoincrement().primaryKey(),
     revisionId: int("revision_id").notNull().references(() => revisions.id, { onDelete: "cascade" }),
+    /** 1, 2, … within its revision ("cut plan 2 of R3"); the id stays the plan's address in URLs and JSON. */
+    number: int("number").notNull(),
     settings: json("settings").$type<Record<string, unknown>>().notNull(),
     nest: json("nest").$type<Record<string, unknown>>().notNull(),
     summary: json("summary").$type<Record<string, unknown>>().notNull(),
     createdById: int("created_by_id").references(() => users.id),
     createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
   },
-  (t) => [index("cut_plans_revision").on(t.revisionId)],
+  (t) => [index("cut_plans_revision").on(t.revisionId), uniqueIndex("cut_plans_revision_number").on(t.revisionId, t.number)],
 );
 
 export const END_TREATMENTS = ["flat", "half", "scale"] as const;

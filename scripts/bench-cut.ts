@@ -4,7 +4,7 @@
 // in timed tests).
 import { performance } from "node:perf_hooks";
 import { buildCutParts, kerfParts, nestItemsFor, parseCutSettings } from "@/lib/cut";
-import { ringArea } from "@/lib/cut/geometry";
+import { regionArea } from "@/lib/geometry/ring";
 import { loadHersheyFont } from "@/lib/cut/labels/font-file";
 import { jobZip } from "@/lib/cut/export/zip";
 import { nestOnSheets } from "@/lib/nest";
@@ -32,7 +32,7 @@ const t0 = performance.now();
 const { paths } = await kerfParts(plan.parts, plan.settings);
 const kerfMs = performance.now() - t0;
 const items = await nestItemsFor(plan.parts, plan.settings, paths);
-const partArea = plan.parts.reduce((a, p) => a + p.quantity * (ringArea(p.region.outer) - p.region.holes.reduce((h, r) => h + ringArea(r), 0)), 0);
+const partArea = plan.parts.reduce((a, p) => a + p.quantity * regionArea(p.region), 0);
 const t1 = performance.now();
 const nest = await nestOnSheets({ items, sheet: { width: 2440, height: 1220 }, margin: settings.margin, spacing: settings.spacing, seconds: SECONDS, seed: 1 });
 const nestS = (performance.now() - t1) / 1000;

@@ -39,6 +39,11 @@ async function main() {
     run(path.join(root, "node_modules/.bin/tsc"), ["--noEmit", "-p", "tsconfig.json"], { env });
     log("lint (eslint)…");
     run(path.join(root, "node_modules/.bin/eslint"), ["."], { env });
+    log("formatting (prettier --check)…");
+    run(path.join(root, "node_modules/.bin/prettier"), ["--check", "--log-level", "warn", "."], { env });
+    log("import cycles (madge) and dead code (knip)…");
+    run(path.join(root, "node_modules/.bin/madge"), ["--circular", "--extensions", "ts,tsx", "--ts-config", "tsconfig.json", "app", "components", "lib", "db", "scripts", "auth.ts", "proxy.ts"], { env });
+    run(path.join(root, "node_modules/.bin/knip"), ["--no-progress"], { env });
   }
   log("unit and integration tests…");
   run(vitest, ["run", "--config", "vitest.config.mts", ...filterArgs], { env });

@@ -1,3 +1,4 @@
+import { QueryProvider } from "@/components/api/query-provider";
 import { AppHeader } from "@/components/app-header";
 import { requirePageUser } from "@/lib/server/dal";
 
@@ -7,7 +8,10 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   return (
     <>
       <AppHeader user={user} />
-      <main className="mx-auto flex max-w-6xl flex-col gap-6 px-4 py-6">{children}</main>
+      {/* Every client call to the API goes through react-query: one client for all signed-in pages. */}
+      <QueryProvider>
+        <main className="mx-auto flex max-w-6xl flex-col gap-6 px-4 py-6">{children}</main>
+      </QueryProvider>
     </>
   );
 }

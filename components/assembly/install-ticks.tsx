@@ -1,8 +1,15 @@
 "use client";
 // The installer's ticks on the assembly sheet: a box per part and per joint. Each tick (or untick)
 // is written to the build log with the part ids; the bar shows how many of all are installed.
+import { useMutation } from "@tanstack/react-query";
 import { createContext, useContext, useState, type ReactNode } from "react";
-import { postJson } from "@/components/review/review-api";
+import { postJson } from "@/components/api/request-json";
+
+interface TickAnswer {
+  items: { item: string; done: boolean }[];
+  installed: number;
+  total: number;
+}
 
 interface TickState {
   done: Record<string, boolean>;
@@ -22,24 +29,18 @@ const TicksContext = createContext<Ticks | null>(null);
 
 export function InstallTicks({ cutPlanId, initial, canTick, children }: { cutPlanId: number; initial: TickState; canTick: boolean; children: ReactNode }) {
   const [state, setState] = useState(initial);
-  const [busy, setBusy] = useState<string | null>(null);
-  const [error, setError] = useState<string | null>(null);
-  const toggle = async (item: string) => {
-    if (!canTick || busy) return;
-    const done = !state.done[item];
-    const before = state;
+  const tick = useMutation({
+    mutationFn: ({ item, done }: { item: string; done: boolean; before: TickState }) => postJson<TickAnswer>(`/api/cut-plans/${cutPlanId}/ticks`, { item, done }),
     // The box shows the tick at once; the server's answer then sets the count (or undoes the tick).
-    setState({ ...state, done: { ...state.done, [item]: done }, installed: state.installed + (done ? 1 : -1) });
-    setBusy(item);
-    setError(null);
-    const answer = await postJson<{ items: { item: string; done: boolean }[]; installed: number; total: number }>(`/api/cut-plans/${cutPlanId}/ticks`, { item, done });
-    setBusy(null);
-    if (!answer.ok) {
-      setState(before);
-      setError(`${item} was not recorded: ${answer.message}`);
-      return;
-    }
-    setState({ done: Object.fromEntries(answer.body.items.map((i) => [i.item, i.done])), installed: answer.body.installed, total: answer.body.total });
+    onMutate: ({ item, done, before }) => setState({ ...before, done: { ...before.done, [item]: done }, installed: before.installed + (done ? 1 : -1) }),
+    onSuccess: (answer) => setState({ done: Object.fromEntries(answer.items.map((i) => [i.item, i.done])), installed: answer.installed, total: answer.total }),
+    onError: (_error, { before }) => setState(before),
+  });
+  const busy = tick.isPending ? (tick.variables?.item ?? null) : null;
+  const error = tick.isError && tick.variables ? `${tick.variables.item} was not saved: ${tick.error.message}` : null;
+  const toggle = (item: string) => {
+    if (!canTick || busy) return;
+    tick.mutate({ item, done: !state.done[item], before: state });
   };
   return <TicksContext.Provider value={{ state, canTick, busy, error, toggle }}>{children}</TicksContext.Provider>;
 }
@@ -87,7 +88,7 @@ export function InstallProgress() {
         parts and joints installed{canTick ? " · each tick goes into the build log" : ""}
       </p>
       {error ? (
-        <p role="alert" className="text-sm text-caution">
+        <p role="alert" className="text-sm text-caution-ink">
           {error}
         </p>
       ) : null}

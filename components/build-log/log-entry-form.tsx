@@ -2,8 +2,11 @@
 // A new build-log entry: its kind, what happened, the parts it concerns and site photos. Sent as
 // multipart with upload progress (a phone on site may be slow); the server checks every photo
 // and keeps nothing of a refused upload.
+import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useRef, useState, type FormEvent } from "react";
+import { failureOf } from "@/components/api/request-json";
+import { uploadForm } from "@/components/api/upload-form";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
@@ -26,47 +29,34 @@ export function LogEntryForm({ projectId, kinds, photos }: { projectId: number; 
   const form = useRef<HTMLFormElement>(null);
   const [files, setFiles] = useState<File[]>([]);
   const [progress, setProgress] = useState<number | null>(null);
-  const [state, setState] = useState<{ ok?: boolean; message?: string; fields?: Record<string, string[]> }>({});
+  const add = useMutation({
+    mutationFn: (data: FormData) => uploadForm<{ photos?: unknown[] }>(`/api/projects/${projectId}/log`, data, setProgress),
+    onMutate: () => setProgress(0),
+    onSettled: () => setProgress(null),
+    onSuccess: () => {
+      form.current?.reset();
+      setFiles([]);
+      router.refresh();
+    },
+  });
+  const failure = failureOf(add.error);
+  const fields = failure?.fields;
+  const message = failure?.message ?? (add.data ? `Added to the build log${add.data.photos?.length ? ` with ${add.data.photos.length} photo(s)` : ""}.` : null);
 
   function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const data = new FormData(e.currentTarget);
     data.delete("photos[]");
     for (const f of files) data.append("photos[]", f, f.name);
-    const xhr = new XMLHttpRequest();
-    xhr.open("POST", `/api/projects/${projectId}/log`);
-    xhr.upload.onprogress = (ev) => ev.lengthComputable && setProgress(ev.loaded / ev.total);
-    xhr.onerror = () => {
-      setProgress(null);
-      setState({ message: "The upload did not get through. Check the connection and try again; nothing was saved." });
-    };
-    xhr.onload = () => {
-      setProgress(null);
-      const body = (() => {
-        try {
-          return JSON.parse(xhr.responseText);
-        } catch {
-          return {};
-        }
-      })();
-      if (xhr.status === 201) {
-        setState({ ok: true, message: `Added to the build log${body.photos?.length ? ` with ${body.photos.length} photo(s)` : ""}.` });
-        form.current?.reset();
-        setFiles([]);
-        router.refresh();
-      } else setState({ message: body.message ?? `The server answered ${xhr.status}; nothing was saved.`, fields: body.fields });
-    };
-    setProgress(0);
-    setState({});
-    xhr.send(data);
+    add.mutate(data);
   }
 
   const total = files.reduce((n, f) => n + f.size, 0);
   return (
     <form ref={form} onSubmit={submit} className="flex flex-col gap-3" aria-label="Add to the build log" data-testid="log-entry-form">
       <div className="grid gap-3 sm:grid-cols-[12rem_1fr]">
-        <SelectField label="Kind" name="kind" defaultValue={kinds[0]} options={kinds.map((k) => ({ value: k, label: KIND_LABEL[k] ?? k }))} errors={state.fields?.kind} />
-        <TextField label="Parts (ids as engraved)" name="parts" placeholder="e.g. T01, T02" errors={state.fields?.parts} hint="Optional: the part ids this entry concerns." />
+        <SelectField label="Kind" name="kind" defaultValue={kinds[0]} options={kinds.map((k) => ({ value: k, label: KIND_LABEL[k] ?? k }))} errors={fields?.kind} />
+        <TextField label="Parts (ids as engraved)" name="parts" placeholder="e.g. T01, T02" errors={fields?.parts} hint="Optional: the part ids this entry concerns." />
       </div>
       <div className="flex flex-col gap-1 text-sm">
         <label htmlFor="log-text" className="font-medium">
@@ -74,7 +64,7 @@ export function LogEntryForm({ projectId, kinds, photos }: { projectId: number; 
         </label>
         <textarea id="log-text" name="text" rows={3} maxLength={4000} className="w-full rounded-plate border border-ink-line bg-white/70 px-2.5 py-1.5 text-sm" aria-describedby="log-text-error" />
         <div id="log-text-error" aria-live="polite">
-          {state.fields?.text?.map((m) => <p key={m} className="text-xs font-medium text-caution">{m}</p>)}
+          {fields?.text?.map((m) => <p key={m} className="text-xs font-medium text-caution-ink">{m}</p>)}
         </div>
       </div>
       {photos ? (
@@ -96,7 +86,7 @@ export function LogEntryForm({ projectId, kinds, photos }: { projectId: number; 
           {files.length ? (
             <ul className="font-mono text-xs">
               {files.map((f) => (
-                <li key={f.name + f.size} className={f.size > 15 * MB ? "text-caution" : ""}>
+                <li key={f.name + f.size} className={f.size > 15 * MB ? "text-caution-ink" : ""}>
                   {f.name} · {(f.size / MB).toFixed(1)} MB{f.size > 15 * MB ? " — too large" : ""}
                 </li>
               ))}
@@ -117,9 +107,9 @@ export function LogEntryForm({ projectId, kinds, photos }: { projectId: number; 
           Add to the log
         </Button>
       </div>
-      {state.message ? (
-        <Notice tone={state.ok ? "done" : "problem"} testId="log-message">
-          {state.message}
+      {message ? (
+        <Notice tone={failure ? "problem" : "done"} testId="log-message">
+          {message}
         </Notice>
       ) : null}
     </form>

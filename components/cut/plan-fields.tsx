@@ -2,7 +2,7 @@
 // The cut-plan settings, as plain labelled fields. Errors from the settings schema arrive with the
 // field's path ("joint.keyWidth") and are shown beside that field.
 import type { ReactNode } from "react";
-import { FieldRow as Field } from "@/components/ui/field-row";
+import { CheckInput, SelectInput, TextInput } from "@/components/ui/inputs";
 import type { PlanForm } from "@/lib/cut-plan/form";
 import { ROTATION_LABELS } from "@/lib/cut/settings";
 
@@ -14,48 +14,18 @@ export interface LibraryOptions {
 
 type Set = <K extends keyof PlanForm>(key: K, value: PlanForm[K]) => void;
 
-const input = "w-full rounded-plate border border-ink-line bg-white/70 px-2 py-1 text-sm aria-[invalid=true]:border-caution";
-
+// Thin bindings of the shared inputs to one key of the plan form; ids stay "cut-<key>" so an error
+// path from the settings schema finds its field.
 function NumberInput({ name, label, form, set, error, hint, unit = "mm" }: { name: keyof PlanForm; label: string; form: PlanForm; set: Set; error?: string; hint?: ReactNode; unit?: string }) {
-  const id = `cut-${name}`;
-  return (
-    <Field id={id} label={unit ? `${label} (${unit})` : label} error={error} hint={hint}>
-      <input
-        id={id}
-        inputMode="decimal"
-        className={input}
-        value={form[name] as string}
-        aria-invalid={error ? true : undefined}
-        aria-describedby={error ? `${id}-error` : undefined}
-        onChange={(e) => set(name, e.target.value as never)}
-      />
-    </Field>
-  );
+  return <TextInput id={`cut-${name}`} label={label} unit={unit || undefined} inputMode="decimal" value={form[name] as string} error={error} hint={hint} onChange={(v) => set(name, v as never)} />;
 }
 
 function Select({ name, label, form, set, options, error }: { name: keyof PlanForm; label: string; form: PlanForm; set: Set; options: { value: string; label: string }[]; error?: string }) {
-  const id = `cut-${name}`;
-  return (
-    <Field id={id} label={label} error={error}>
-      <select id={id} className={input} value={form[name] as string} aria-invalid={error ? true : undefined} onChange={(e) => set(name, e.target.value as never)}>
-        {options.map((o) => (
-          <option key={o.value} value={o.value}>
-            {o.label}
-          </option>
-        ))}
-      </select>
-    </Field>
-  );
+  return <SelectInput id={`cut-${name}`} label={label} value={form[name] as string} options={options} error={error} onChange={(v) => set(name, v as never)} />;
 }
 
 function Check({ name, label, form, set }: { name: keyof PlanForm; label: string; form: PlanForm; set: Set }) {
-  const id = `cut-${name}`;
-  return (
-    <div className="flex items-center gap-2 text-sm">
-      <input id={id} type="checkbox" checked={form[name] as boolean} onChange={(e) => set(name, e.target.checked as never)} />
-      <label htmlFor={id}>{label}</label>
-    </div>
-  );
+  return <CheckInput id={`cut-${name}`} label={label} checked={form[name] as boolean} onChange={(v) => set(name, v as never)} />;
 }
 
 function Group({ title, children }: { title: string; children: ReactNode }) {

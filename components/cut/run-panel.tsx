@@ -2,6 +2,7 @@
 // drawing of the profile with its cut stations, segments and support holes.
 import type { RunPlan } from "@/lib/cut";
 import type { PlanForm } from "@/lib/cut-plan/form";
+import { Panel } from "@/components/ui/panel";
 
 const mm = (v: number) => `${Number(v.toFixed(1))} mm`;
 
@@ -58,5 +59,21 @@ export function RunDrawing({ run }: { run: RunPlan }) {
         </text>
       ))}
     </svg>
+  );
+}
+
+/** The run panel: the end treatments, the drawing and the run in figures. */
+export function RunPanel({ run, endTreatment, choose }: { run: RunPlan; endTreatment: PlanForm["endTreatment"]; choose: (t: PlanForm["endTreatment"]) => void }) {
+  return (
+    <Panel title="Run">
+      <div className="flex flex-col gap-3">
+        <EndTreatments run={run} chosen={endTreatment} choose={choose} />
+        <RunDrawing run={run} />
+        <p className="text-sm" data-testid="run-summary">
+          {run.periods} periods of {run.period.toFixed(2)} mm over {run.runLength.toFixed(0)} mm, in {run.segments.length} segments cut at{" "}
+          {run.cuts.length ? run.cuts.map((c) => c.toFixed(1)).join(", ") : "—"} mm.
+        </p>
+      </div>
+    </Panel>
   );
 }

@@ -1,6 +1,6 @@
 // One stock sheet drawn to scale with its parts where the nest put them: the picture a fabricator
 // checks before cutting. Plain SVG (it prints, and it needs no canvas); y runs up, as in the DXF.
-import type { Ring } from "@/lib/cut/types";
+import type { Ring } from "@/lib/geometry/ring";
 
 export interface SheetViewPart {
   key: string;

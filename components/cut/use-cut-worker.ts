@@ -1,11 +1,42 @@
 "use client";
-// Two workers: one rebuilds the parts as the settings change (newest request wins), the other runs
-// a nest, reporting progress, until it finishes or is cancelled.
-import { useCallback, useEffect, useRef, useState } from "react";
+// Two workers on the shared worker client (components/worker/worker-client.ts): one rebuilds the
+// parts as the settings change (the newest request wins), the other runs a nest, reporting
+// progress, until it finishes or is cancelled (the nester then hands back its best layout so far).
+import { useCallback, useEffect, useState } from "react";
 import type { NestProgress, SheetNestResult } from "@/lib/nest/types";
-import type { CutWorkerReply, PartsPreview } from "./cut-worker";
+import { WorkerClient } from "@/components/worker/worker-client";
+import type { CutWorkerReply, CutWorkerRequest, PartsPreview } from "./cut-worker";
 
 const newWorker = () => new Worker(new URL("./cut-worker.ts", import.meta.url), { type: "module" });
+
+type PartsRequest = Omit<Extract<CutWorkerRequest, { type: "parts" }>, "id">;
+type NestRequest = Omit<Extract<CutWorkerRequest, { type: "nest" }>, "id">;
+
+/** Building the parts solves the design (10 s limit) and offsets them; silence far past that is a lost worker. */
+const PARTS_SILENCE_MS = 30_000;
+/** The nester reports progress every fraction of a second; this long without a word, it is lost. */
+const NEST_SILENCE_MS = 60_000;
+
+function partsClient(create: () => Worker = newWorker) {
+  return new WorkerClient<PartsRequest, CutWorkerReply>({
+    create,
+    silenceLimitMs: PARTS_SILENCE_MS,
+    crashMessage: "The parts could not be built in this browser.",
+    silenceMessage: "Building the parts stopped answering. Change a setting to try again.",
+  });
+}
+
+function nestClient(create: () => Worker = newWorker) {
+  return new WorkerClient<NestRequest, CutWorkerReply>({
+    create,
+    isLast: (reply) => reply.type !== "progress",
+    // A new nest never queues behind an old one: that worker is ended and a fresh one starts.
+    replaceBusyAfterMs: 0,
+    silenceLimitMs: NEST_SILENCE_MS,
+    crashMessage: "The nester could not start in this browser.",
+    silenceMessage: "The nester stopped answering. Nest again.",
+  });
+}
 
 export interface PartsState {
   preview?: PartsPreview;
@@ -15,29 +46,24 @@ export interface PartsState {
 
 export function useParts(spec: unknown, settings: unknown, delayMs = 150): PartsState {
   const [state, setState] = useState<PartsState>({ busy: true });
-  const worker = useRef<Worker | null>(null);
-  const seq = useRef(0);
+  const [client] = useState(() => partsClient());
   const key = JSON.stringify({ spec, settings });
 
-  useEffect(() => () => worker.current?.terminate(), []);
+  useEffect(() => () => client.dispose(), [client]);
 
   useEffect(() => {
-    const id = ++seq.current;
     const timer = setTimeout(() => {
-      const w = (worker.current ??= newWorker());
       setState((s) => ({ ...s, busy: true }));
-      w.onmessage = (event: MessageEvent<CutWorkerReply>) => {
-        const reply = event.data;
-        if (reply.id !== seq.current) return;
+      const { spec: sp, settings: st } = JSON.parse(key);
+      client.request({ type: "parts", spec: sp, settings: st }, (event) => {
+        if (event.type === "failed") return setState((s) => ({ ...s, busy: false, error: { message: event.message } }));
+        const reply = event.reply;
         if (reply.type === "parts") setState({ preview: reply.preview, busy: false });
         else if (reply.type === "error") setState((s) => ({ preview: s.preview, error: { message: reply.message, field: reply.field }, busy: false }));
-      };
-      w.onerror = () => setState((s) => ({ ...s, busy: false, error: { message: "The parts could not be built in this browser." } }));
-      const { spec: sp, settings: st } = JSON.parse(key);
-      w.postMessage({ type: "parts", id, spec: sp, settings: st });
+      });
     }, delayMs);
     return () => clearTimeout(timer);
-  }, [key, delayMs]);
+  }, [client, key, delayMs]);
 
   return state;
 }
@@ -50,32 +76,28 @@ export type NestState =
 
 export function useNester() {
   const [state, setState] = useState<NestState>({ phase: "idle" });
-  const worker = useRef<Worker | null>(null);
-  const current = useRef(0);
+  const [client] = useState(() => nestClient());
 
-  useEffect(() => () => worker.current?.terminate(), []);
+  useEffect(() => () => client.dispose(), [client]);
 
-  const start = useCallback((spec: unknown, settings: unknown, seconds: number) => {
-    worker.current?.terminate();
-    const w = newWorker();
-    worker.current = w;
-    const id = ++current.current;
-    setState({ phase: "running", startedAt: Date.now(), cancelling: false });
-    w.onmessage = (event: MessageEvent<CutWorkerReply>) => {
-      const reply = event.data;
-      if (reply.id !== current.current) return;
-      if (reply.type === "progress") setState((s) => (s.phase === "running" ? { ...s, progress: reply.progress } : s));
-      else if (reply.type === "nested") setState({ phase: "done", nest: reply.nest, preview: reply.preview });
-      else if (reply.type === "error") setState({ phase: "failed", message: reply.message, field: reply.field });
-    };
-    w.onerror = () => setState({ phase: "failed", message: "The nester could not start in this browser." });
-    w.postMessage({ type: "nest", id, spec, settings, seconds });
-  }, []);
+  const start = useCallback(
+    (spec: unknown, settings: unknown, seconds: number) => {
+      setState({ phase: "running", startedAt: Date.now(), cancelling: false });
+      client.request({ type: "nest", spec, settings, seconds }, (event) => {
+        if (event.type === "failed") return setState({ phase: "failed", message: event.message });
+        const reply = event.reply;
+        if (reply.type === "progress") setState((s) => (s.phase === "running" ? { ...s, progress: reply.progress } : s));
+        else if (reply.type === "nested") setState({ phase: "done", nest: reply.nest, preview: reply.preview });
+        else if (reply.type === "error") setState({ phase: "failed", message: reply.message, field: reply.field });
+      });
+    },
+    [client],
+  );
 
   const cancel = useCallback(() => {
-    worker.current?.postMessage({ type: "cancel", id: current.current });
+    client.send({ type: "cancel", id: client.current } satisfies CutWorkerRequest);
     setState((s) => (s.phase === "running" ? { ...s, cancelling: true } : s));
-  }, []);
+  }, [client]);
 
   const reset = useCallback(() => setState({ phase: "idle" }), []);
 

@@ -2,9 +2,9 @@ type Signal = "DANGER" | "WARNING" | "CAUTION" | "NOTICE";
 
 // Signal words as ANSI Z535.4 uses them; the one safety orange marks DANGER, WARNING and CAUTION.
 export const SIGNAL_TONE: Record<Signal, string> = {
-  DANGER: "border-caution bg-caution text-white",
-  WARNING: "border-caution bg-caution-soft text-caution",
-  CAUTION: "border-caution text-caution",
+  DANGER: "border-caution-ink bg-caution-ink text-white",
+  WARNING: "border-caution bg-caution-soft text-caution-ink",
+  CAUTION: "border-caution text-caution-ink",
   NOTICE: "border-ink-line text-ink-soft",
 };
 

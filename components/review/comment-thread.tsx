@@ -1,12 +1,13 @@
 "use client";
 // The thread on a review, oldest first. A comment may be pinned to a place along the run (or a pair's
 // turn); pins are numbered in the thread and on the drawing alike.
+import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
+import { failureOf, postJson } from "@/components/api/request-json";
 import { formatWhen } from "@/components/format";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { postJson } from "./review-api";
 
 export interface ThreadComment {
   id: number;
@@ -46,21 +47,20 @@ interface Props {
 export function CommentThread({ reviewId, comments, pair, pinAt, picking, onPickToggle, onClearPin, selectedId, onSelect }: Props) {
   const router = useRouter();
   const [text, setText] = useState("");
-  const [state, setState] = useState<{ busy?: boolean; message?: string; fields?: Record<string, string[]> }>({});
+  const post = useMutation({
+    mutationFn: (body: { text: string; at?: number }) => postJson<{ comment: ThreadComment }>(`/api/reviews/${reviewId}/comments`, body),
+    onSuccess: () => {
+      setText("");
+      onClearPin();
+      router.refresh();
+    },
+  });
+  const failure = failureOf(post.error);
   const pins = pinNumbers(comments);
 
-  async function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
-    setState({ busy: true });
-    const answer = await postJson<{ comment: ThreadComment }>(`/api/reviews/${reviewId}/comments`, { text, ...(pinAt !== null ? { at: pinAt } : {}) });
-    if (!answer.ok) {
-      setState({ message: answer.message, fields: answer.fields });
-      return;
-    }
-    setText("");
-    setState({});
-    onClearPin();
-    router.refresh();
+    post.mutate({ text, ...(pinAt !== null ? { at: pinAt } : {}) });
   }
 
   return (
@@ -92,7 +92,7 @@ export function CommentThread({ reviewId, comments, pair, pinAt, picking, onPick
         </label>
         <textarea id="field-comment" value={text} onChange={(e) => setText(e.target.value)} rows={3} maxLength={4000} required aria-describedby="field-comment-error" className="w-full rounded-plate border border-ink-line bg-white/70 px-2.5 py-1.5 text-sm" />
         <div id="field-comment-error" aria-live="polite">
-          {(state.fields?.text ?? []).concat(state.fields?.at ?? []).map((m) => <p key={m} className="text-xs font-medium text-caution">{m}</p>)}
+          {(failure?.fields?.text ?? []).concat(failure?.fields?.at ?? []).map((m) => <p key={m} className="text-xs font-medium text-caution-ink">{m}</p>)}
         </div>
         <div className="flex flex-wrap items-center gap-2 text-sm">
           <Button type="button" variant="quiet" onClick={onPickToggle} aria-pressed={picking} data-testid="pin-toggle">
@@ -106,11 +106,11 @@ export function CommentThread({ reviewId, comments, pair, pinAt, picking, onPick
               </button>
             </span>
           ) : null}
-          <Button type="submit" disabled={state.busy || text.trim() === ""}>
-            {state.busy ? "Posting…" : "Post comment"}
+          <Button type="submit" disabled={post.isPending || text.trim() === ""}>
+            {post.isPending ? "Posting…" : "Post comment"}
           </Button>
         </div>
-        {state.message ? <Notice tone="problem">{state.message}</Notice> : null}
+        {failure ? <Notice tone="problem">{failure.message}</Notice> : null}
       </form>
     </div>
   );

@@ -1,12 +1,13 @@
 "use client";
 // The client's decision: approve this revision for fabrication (typed full name and a tick), or ask
 // for changes (a comment is needed). A decision is final; the shop is e-mailed either way.
+import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
+import { failureOf, postJson } from "@/components/api/request-json";
 import { Button } from "@/components/ui/button";
 import { TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
-import { postJson } from "./review-api";
 
 type Choice = "approve" | "request-changes";
 
@@ -14,29 +15,26 @@ export function DecisionForm({ reviewId, revisionNumber, deposit }: { reviewId: 
   const router = useRouter();
   const [decision, setDecision] = useState<Choice>("approve");
   const [confirmed, setConfirmed] = useState(false);
-  const [state, setState] = useState<{ busy?: boolean; message?: string; fields?: Record<string, string[]> }>({});
+  const decide = useMutation({
+    mutationFn: (body: Record<string, unknown>) => postJson<{ signOff: { reference: string }; payment: { url: string } | null }>(`/api/reviews/${reviewId}/decision`, body),
+    // An approval with a deposit goes on to the payment page; otherwise the page shows the record.
+    onSuccess: (answer) => (answer.payment?.url ? window.location.assign(answer.payment.url) : router.refresh()),
+  });
+  const failure = failureOf(decide.error);
 
-  async function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const comment = String(form.get("comment") ?? "").trim();
-    setState({ busy: true });
-    const answer = await postJson<{ signOff: { reference: string }; payment: { url: string } | null }>(`/api/reviews/${reviewId}/decision`, {
+    decide.mutate({
       decision,
       typedName: String(form.get("typedName") ?? ""),
       ...(comment ? { comment } : {}),
       ...(decision === "approve" ? { confirm: confirmed } : {}),
     });
-    if (!answer.ok) {
-      setState({ message: answer.message, fields: answer.fields });
-      return;
-    }
-    // An approval with a deposit goes on to the payment page; otherwise the page shows the record.
-    if (answer.body.payment?.url) window.location.assign(answer.body.payment.url);
-    else router.refresh();
   }
 
-  const f = state.fields ?? {};
+  const f = failure?.fields ?? {};
   const approving = decision === "approve";
   return (
     <form onSubmit={submit} className="flex flex-col gap-3" aria-label="Your decision" data-testid="decision-form">
@@ -63,26 +61,27 @@ export function DecisionForm({ reviewId, revisionNumber, deposit }: { reviewId: 
         </label>
         <textarea id="field-decision-comment" name="comment" rows={3} maxLength={4000} required={!approving} aria-describedby="field-decision-comment-error" aria-invalid={f.comment ? true : undefined} className="w-full rounded-plate border border-ink-line bg-white/70 px-2.5 py-1.5 text-sm" />
         <div id="field-decision-comment-error" aria-live="polite">
-          {f.comment?.map((m) => <p key={m} className="text-xs font-medium text-caution">{m}</p>)}
+          {f.comment?.map((m) => <p key={m} className="text-xs font-medium text-caution-ink">{m}</p>)}
         </div>
       </div>
-      <TextField label="Your full name" name="typedName" autoComplete="name" required errors={f.typedName} hint="As it is on your account; it is recorded with your decision." />
+      <TextField label="Your full name" name="typedName" autoComplete="name" required errors={f.typedName} hint="As it is on your account; it is saved with your decision." />
       {approving ? (
         <label className="flex items-start gap-2 text-sm">
           <input type="checkbox" name="confirm" checked={confirmed} onChange={(e) => setConfirmed(e.target.checked)} className="mt-1" />
           <span>I approve revision {revisionNumber} for fabrication</span>
         </label>
       ) : null}
-      {f.confirm ? <p className="text-xs font-medium text-caution">{f.confirm[0]}</p> : null}
-      <p className="text-xs text-ink-soft">A decision is final and is recorded with the time, your network address and your browser. A later change needs a new revision.</p>
+      {f.confirm ? <p className="text-xs font-medium text-caution-ink">{f.confirm[0]}</p> : null}
+      <p className="text-xs text-ink-soft">A decision is final and is saved with the time, your network address and your browser. A later change needs a new revision.</p>
       <div>
-        <Button type="submit" disabled={state.busy || (approving && !confirmed)}>
-          {state.busy ? "Recording…" : approving ? `Approve revision ${revisionNumber}` : "Ask for changes"}
+        {/* After a decision the page moves on (payment, or the refreshed record): the button stays off meanwhile. */}
+        <Button type="submit" disabled={decide.isPending || decide.isSuccess || (approving && !confirmed)}>
+          {decide.isPending || decide.isSuccess ? "Saving…" : approving ? `Approve revision ${revisionNumber}` : "Ask for changes"}
         </Button>
       </div>
-      {state.message ? (
+      {failure ? (
         <Notice tone="problem" testId="decision-message">
-          {state.message}
+          {failure.message}
         </Notice>
       ) : null}
     </form>

@@ -1,18 +1,16 @@
 "use client";
 // The deposit on a review: its amount and state, and for the client, once it is due, the way to pay.
-import { useState } from "react";
+import { useMutation } from "@tanstack/react-query";
+import { failureOf, postJson } from "@/components/api/request-json";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { postJson } from "./review-api";
 
 export function DepositPanel({ reviewId, text, status, canPay, returned }: { reviewId: number; text: string; status: "on-approval" | "due" | "paid"; canPay: boolean; returned: "paid" | "cancelled" | null }) {
-  const [state, setState] = useState<{ busy?: boolean; message?: string }>({});
-  async function pay() {
-    setState({ busy: true });
-    const answer = await postJson<{ url: string }>(`/api/reviews/${reviewId}/deposit/checkout`, {});
-    if (!answer.ok) setState({ message: answer.message });
-    else window.location.assign(answer.body.url);
-  }
+  const checkout = useMutation({
+    mutationFn: () => postJson<{ url: string }>(`/api/reviews/${reviewId}/deposit/checkout`, {}),
+    onSuccess: (answer) => window.location.assign(answer.url),
+  });
+  const failure = failureOf(checkout.error);
   return (
     <div className="flex flex-col gap-2 text-sm" data-testid="deposit-panel">
       <p>
@@ -23,12 +21,12 @@ export function DepositPanel({ reviewId, text, status, canPay, returned }: { rev
       {status === "due" && returned === "cancelled" ? <Notice tone="problem">The payment was cancelled; nothing was charged. You can pay when you are ready.</Notice> : null}
       {status === "due" && canPay ? (
         <div>
-          <Button type="button" onClick={pay} disabled={state.busy}>
-            {state.busy ? "Opening the payment page…" : "Pay the deposit"}
+          <Button type="button" onClick={() => checkout.mutate()} disabled={checkout.isPending || checkout.isSuccess}>
+            {checkout.isPending || checkout.isSuccess ? "Opening the payment page…" : "Pay the deposit"}
           </Button>
         </div>
       ) : null}
-      {state.message ? <Notice tone="problem">{state.message}</Notice> : null}
+      {failure ? <Notice tone="problem">{failure.message}</Notice> : null}
     </div>
   );
 }

@@ -178,7 +178,9 @@ export function MockUpDrawing({ scene, pose, view, px, markers, selected, pickin
       preserveAspectRatio="xMidYMid meet"
       className={`block w-full ${picking ? "cursor-crosshair" : ""}`}
       style={{ aspectRatio: `${view.width} / ${view.height}` }}
-      role="img"
+      // A picture, unless it holds pinned comments: those are buttons, which an "img" would hide
+      // from assistive technology (its children are presentational), so it is then a labelled group.
+      role={markers.length > 0 ? "group" : "img"}
       aria-label={label}
       onPointerDown={pick}
       data-testid="mockup-drawing"

@@ -1,13 +1,14 @@
 "use client";
 // The fabricator's request for the client's review: which saved revision, a short message, the run
 // the mock-up lays out (track designs), and an optional deposit due on approval.
+import { useMutation } from "@tanstack/react-query";
 import { useRouter } from "next/navigation";
 import { useState, type FormEvent } from "react";
+import { failureOf, postJson } from "@/components/api/request-json";
 import { Button } from "@/components/ui/button";
 import { SelectField, TextField } from "@/components/ui/field";
 import { Notice } from "@/components/ui/notice";
 import { CURRENCY_CODES } from "@/lib/money/currency";
-import { postJson } from "./review-api";
 
 export interface SendableRevision {
   id: number;
@@ -34,7 +35,11 @@ export function SendReviewForm({ revisions, initialRevisionId, clients }: { revi
   const [units, setUnits] = useState<"mm" | "in">("mm");
   const [runLength, setRunLength] = useState(first?.run ? String(first.run.lengthMm) : "2400");
   const [withDeposit, setWithDeposit] = useState(false);
-  const [state, setState] = useState<{ busy?: boolean; ok?: boolean; message?: string; fields?: Record<string, string[]> }>({});
+  const send = useMutation({
+    mutationFn: ({ id, body }: { id: number; body: Record<string, unknown> }) => postJson<{ id: number; mailed: number }>(`/api/revisions/${id}/reviews`, body),
+    onSuccess: () => router.refresh(),
+  });
+  const failure = failureOf(send.error);
 
   if (!revision) return <p className="text-sm text-ink-soft">Save a revision of a design in the studio first: a client reviews a frozen revision.</p>;
 
@@ -49,7 +54,7 @@ export function SendReviewForm({ revisions, initialRevisionId, clients }: { revi
     setUnits(next);
   };
 
-  async function submit(e: FormEvent<HTMLFormElement>) {
+  function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
     const form = new FormData(e.currentTarget);
     const length = Number(runLength) * (units === "in" ? MM_PER_IN : 1);
@@ -58,17 +63,11 @@ export function SendReviewForm({ revisions, initialRevisionId, clients }: { revi
       ...(revision!.showsRun ? { runLength: Number.isFinite(length) ? length : runLength, endTreatment: String(form.get("endTreatment")) } : {}),
       ...(withDeposit ? { deposit: { amount: Number(form.get("depositAmount")), currency: String(form.get("depositCurrency")) } } : {}),
     };
-    setState({ busy: true });
-    const answer = await postJson<{ id: number; mailed: number }>(`/api/revisions/${revision!.id}/reviews`, body);
-    if (!answer.ok) {
-      setState({ message: answer.message, fields: answer.fields });
-      return;
-    }
-    setState({ ok: true, message: `Sent for review (review ${answer.body.id}); ${answer.body.mailed} e-mail(s) went out.` });
-    router.refresh();
+    send.mutate({ id: revision!.id, body });
   }
 
-  const f = state.fields ?? {};
+  const f = failure?.fields ?? {};
+  const message = failure?.message ?? (send.data ? `Sent for review (review ${send.data.id}); ${send.data.mailed} e-mail(s) went out.` : null);
   return (
     <form onSubmit={submit} className="flex flex-col gap-3" aria-label="Send a revision for review" data-testid="send-review-form">
       <p className="text-sm text-ink-soft">
@@ -82,7 +81,7 @@ export function SendReviewForm({ revisions, initialRevisionId, clients }: { revi
         </label>
         <textarea id="field-message" name="message" rows={3} maxLength={2000} required aria-describedby="field-message-error" aria-invalid={f.message ? true : undefined} className="w-full rounded-plate border border-ink-line bg-white/70 px-2.5 py-1.5 text-sm" placeholder="What to look at, and what you need from them." />
         <div id="field-message-error" aria-live="polite">
-          {f.message?.map((m) => <p key={m} className="text-xs font-medium text-caution">{m}</p>)}
+          {f.message?.map((m) => <p key={m} className="text-xs font-medium text-caution-ink">{m}</p>)}
         </div>
       </div>
       {revision.showsRun ? (
@@ -103,13 +102,13 @@ export function SendReviewForm({ revisions, initialRevisionId, clients }: { revi
         </div>
       ) : null}
       <div>
-        <Button type="submit" disabled={state.busy || !!revision.blocked || clients.length === 0}>
-          {state.busy ? "Sending…" : "Send for review"}
+        <Button type="submit" disabled={send.isPending || !!revision.blocked || clients.length === 0}>
+          {send.isPending ? "Sending…" : "Send for review"}
         </Button>
       </div>
-      {state.message ? (
-        <Notice tone={state.ok ? "done" : "problem"} testId="send-review-message">
-          {state.message}
+      {message ? (
+        <Notice tone={failure ? "problem" : "done"} testId="send-review-message">
+          {message}
         </Notice>
       ) : null}
     </form>

@@ -25,7 +25,7 @@ export function RevisionList({ revisions, base, openNumber, reviewBase }: { revi
             <span className="flex-1 truncate">{r.note || <span className="text-ink-soft">no note</span>}</span>
             <span className="text-xs text-ink-soft">{r.createdBy ?? "—"}</span>
             <span className="font-mono text-xs text-ink-soft">{formatWhen(r.createdAt)}</span>
-            <span className="text-xs text-ink-faint" title={`Fingerprint: the SHA-256 of the design as saved, ${r.specHash}`}>
+            <span className="text-xs text-ink-soft" title={`Fingerprint: the SHA-256 of the design as saved, ${r.specHash}`}>
               fingerprint <span className="font-mono">{r.specHash.slice(0, 10)}…</span>
             </span>
             {reviewBase ? (

@@ -5,7 +5,7 @@ type Variant = "primary" | "quiet" | "caution";
 const STYLES: Record<Variant, string> = {
   primary: "bg-ink text-paper hover:bg-ink-soft border-ink",
   quiet: "bg-transparent text-ink hover:bg-paper-deep border-ink-line",
-  caution: "bg-transparent text-caution hover:bg-caution-soft border-caution",
+  caution: "bg-transparent text-caution-ink hover:bg-caution-soft border-caution",
 };
 
 export function Button({ variant = "primary", className = "", ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {

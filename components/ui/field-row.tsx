@@ -10,7 +10,7 @@ export function FieldRow({ id, label, error, children, hint }: { id: string; lab
       </label>
       {children}
       {error ? (
-        <p id={`${id}-error`} className="text-xs font-medium text-caution" role="alert">
+        <p id={`${id}-error`} className="text-xs font-medium text-caution-ink" role="alert">
           {error}
         </p>
       ) : hint ? (

@@ -1,4 +1,5 @@
 import type { InputHTMLAttributes, ReactNode, SelectHTMLAttributes } from "react";
+import { controlClass as inputClass } from "./control-class";
 
 interface FieldProps {
   label: string;
@@ -13,7 +14,7 @@ function Messages({ id, errors, hint }: { id: string; errors?: string[]; hint?: 
       {hint && !errors?.length ? <p className="text-xs text-ink-soft">{hint}</p> : null}
       <div id={id} aria-live="polite">
         {errors?.map((e) => (
-          <p key={e} className="text-xs font-medium text-caution">
+          <p key={e} className="text-xs font-medium text-caution-ink">
             {e}
           </p>
         ))}
@@ -22,8 +23,6 @@ function Messages({ id, errors, hint }: { id: string; errors?: string[]; hint?: 
   );
 }
 
-const inputClass =
-  "w-full rounded-plate border bg-white/70 px-2.5 py-1.5 text-sm text-ink placeholder:text-ink-faint aria-[invalid=true]:border-caution border-ink-line";
 
 // The label holds only its words; hints and errors sit beside the control and are tied to it by
 // aria-describedby, so a screen reader (and a test) finds the field by its label alone.

@@ -4,7 +4,7 @@ import type { ReactNode } from "react";
 export function Notice({ tone = "info", children, testId }: { tone?: "info" | "problem" | "done"; children: ReactNode; testId?: string }) {
   const styles = {
     info: "border-ink-line bg-white/60 text-ink",
-    problem: "border-caution bg-caution-soft text-caution",
+    problem: "border-caution bg-caution-soft text-caution-ink",
     done: "border-pass/40 bg-white/60 text-pass",
   }[tone];
   return (

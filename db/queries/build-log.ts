@@ -1,16 +1,12 @@
 import "server-only";
-// The build log. An entry with photos is written object-first: every photo (and its thumbnail) goes
-// to the store, then the entry and its photo rows go in one transaction; if that fails the objects
-// are removed again. So there is never a row without its object, and an object left without a row
-// only if the store itself fails the clean-up (logged).
-import { randomUUID } from "node:crypto";
+// The build log's rows. An entry's photos are already in the object store when its rows are written
+// (lib/server/build-log.ts puts them there first, and removes them again if this fails).
 import { and, desc, eq, inArray, lt } from "drizzle-orm";
 import { db } from "@/db";
 import { buildLogEntries, buildLogPhotos, projectMembers, users, type LogKind } from "@/db/schema";
-import { audit } from "@/lib/server/audit";
-import type { CurrentUser } from "@/lib/server/dal";
-import { PHOTO_EXTENSION, type PreparedPhoto } from "@/lib/photos/prepare";
-import { deleteObject, putObject } from "@/lib/server/storage";
+import { audit } from "./audit";
+import type { CurrentUser } from "./current-user";
+import type { PreparedPhoto } from "@/lib/photos/prepare";
 
 type Executor = Pick<typeof db, "insert">;
 
@@ -57,44 +53,37 @@ export async function writeLogEntry(tx: Executor, actorId: number | null, projec
   return res.insertId;
 }
 
-/** A person's entry and its photos (object first, then the rows in one transaction). */
-export async function insertLogEntry(actor: CurrentUser, projectId: number, e: NewLogEntry, photos: PreparedPhoto[]): Promise<{ id: number; photos: { id: number }[] }> {
-  const stored: { photo: PreparedPhoto; key: string; thumbKey: string }[] = [];
-  const removeStored = () => Promise.all(stored.flatMap((s) => [deleteObject(s.key), deleteObject(s.thumbKey)]));
-  try {
-    for (const photo of photos) {
-      const stem = `projects/${projectId}/photos/${randomUUID()}`;
-      const item = { photo, key: `${stem}.${PHOTO_EXTENSION[photo.contentType]}`, thumbKey: `${stem}-thumb.webp` };
-      stored.push(item);
-      await putObject(item.key, photo.data, photo.contentType);
-      await putObject(item.thumbKey, photo.thumb, photo.thumbType);
+/** A photo already in the object store, with the keys of the picture and its thumbnail. */
+export interface StoredPhoto {
+  photo: PreparedPhoto;
+  key: string;
+  thumbKey: string;
+}
+
+/** A person's entry and the rows of its stored photos, in one transaction. */
+export async function insertLogEntry(actor: CurrentUser, projectId: number, e: NewLogEntry, stored: StoredPhoto[]): Promise<{ id: number; photos: { id: number }[] }> {
+  return db.transaction(async (tx) => {
+    const id = await writeLogEntry(tx, actor.id, projectId, e);
+    const photoIds: { id: number }[] = [];
+    for (const s of stored) {
+      const [res] = await tx.insert(buildLogPhotos).values({
+        entryId: id,
+        projectId,
+        objectKey: s.key,
+        thumbKey: s.thumbKey,
+        contentType: s.photo.contentType,
+        bytes: s.photo.data.length,
+        thumbBytes: s.photo.thumb.length,
+        width: s.photo.width,
+        height: s.photo.height,
+        originalName: s.photo.name,
+        uploadedById: actor.id,
+      });
+      photoIds.push({ id: res.insertId });
     }
-    return await db.transaction(async (tx) => {
-      const id = await writeLogEntry(tx, actor.id, projectId, e);
-      const photoIds: { id: number }[] = [];
-      for (const s of stored) {
-        const [res] = await tx.insert(buildLogPhotos).values({
-          entryId: id,
-          projectId,
-          objectKey: s.key,
-          thumbKey: s.thumbKey,
-          contentType: s.photo.contentType,
-          bytes: s.photo.data.length,
-          thumbBytes: s.photo.thumb.length,
-          width: s.photo.width,
-          height: s.photo.height,
-          originalName: s.photo.name,
-          uploadedById: actor.id,
-        });
-        photoIds.push({ id: res.insertId });
-      }
-      await audit(tx, { actorId: actor.id, action: "log", entity: "build_log_entries", entityId: id, projectId, detail: { kind: e.kind, parts: e.parts ?? [], photos: photoIds.map((p) => p.id) } });
-      return { id, photos: photoIds };
-    });
-  } catch (error) {
-    await removeStored();
-    throw error;
-  }
+    await audit(tx, { actorId: actor.id, action: "log", entity: "build_log_entries", entityId: id, projectId, detail: { kind: e.kind, parts: e.parts ?? [], photos: photoIds.map((p) => p.id) } });
+    return { id, photos: photoIds };
+  });
 }
 
 /** The project's log, newest first, with each entry's photos; `before` pages back by entry id. */

@@ -5,7 +5,7 @@ import { and, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { deposits, paymentEvents, type Deposit } from "@/db/schema";
 import { formatMoney } from "@/lib/money/currency";
-import { audit } from "@/lib/server/audit";
+import { audit } from "./audit";
 import { writeLogEntry } from "./build-log";
 
 export async function findDeposit(id: number): Promise<Deposit | null> {

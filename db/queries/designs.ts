@@ -1,15 +1,14 @@
 import "server-only";
-// Designs and their immutable revisions. A revision is solved by the engine on the server before it
-// is stored, so its hash and summary figures are the engine's own.
+// Designs and their immutable revisions, as rows. The engine's part (checking a spec, solving it,
+// the summary figures) is done before these are called, by lib/server/designs.ts.
 import { and, desc, eq, max, sql } from "drizzle-orm";
 import type { LoadsSettings } from "@/lib/validation/loads";
 import { db } from "@/db";
 import { designs, projects, revisions, users, type DesignMode } from "@/db/schema";
-import { audit } from "@/lib/server/audit";
-import type { CurrentUser } from "@/lib/server/dal";
-import { AppError } from "@/lib/server/errors";
-import { summarise, type RevisionSummary } from "@/lib/revision-summary";
-import { ENGINE_VERSION, isEngineError, parseSpec, solve, specHash, type DesignSpec, type SolveResult } from "@/lib/track";
+import type { RevisionSummary } from "@/lib/revision-summary";
+import type { DesignSpec } from "@/lib/track";
+import { audit } from "./audit";
+import type { CurrentUser } from "./current-user";
 
 export type { RevisionSummary };
 
@@ -33,18 +32,6 @@ export interface RevisionRow {
   createdAt: string;
   summary: RevisionSummary;
 }
-
-/** Checks a spec with the engine's schema; an engine refusal becomes a 400 with the engine's words. */
-export function validSpec(input: unknown): DesignSpec {
-  try {
-    return parseSpec(input);
-  } catch (error) {
-    if (isEngineError(error)) throw new AppError("bad_request", error.where ? `${error.message} (at ${error.where})` : error.message);
-    throw error;
-  }
-}
-
-const SAVE_TIME_LIMIT_MS = 10_000;
 
 export async function listDesigns(projectId: number): Promise<DesignRow[]> {
   const rows = await db
@@ -100,24 +87,24 @@ export async function listRevisions(designId: number): Promise<RevisionRow[]> {
   return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), summary: r.summary as unknown as RevisionSummary }));
 }
 
-export async function createDesign(actor: CurrentUser, projectId: number, input: { name: string; spec: unknown }): Promise<number> {
-  const spec = validSpec(input.spec);
+export async function insertDesign(actor: CurrentUser, projectId: number, input: { name: string; spec: DesignSpec }): Promise<number> {
+  const { name, spec } = input;
   return db.transaction(async (tx) => {
-    const [res] = await tx.insert(designs).values({ projectId, name: input.name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, createdById: actor.id });
+    const [res] = await tx.insert(designs).values({ projectId, name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, createdById: actor.id });
     await tx.update(projects).set({ updatedAt: new Date() }).where(eq(projects.id, projectId));
-    await audit(tx, { actorId: actor.id, action: "create", entity: "designs", entityId: res.insertId, projectId, detail: { name: input.name, mode: spec.mode } });
+    await audit(tx, { actorId: actor.id, action: "create", entity: "designs", entityId: res.insertId, projectId, detail: { name, mode: spec.mode } });
     return res.insertId;
   });
 }
 
-export async function updateDesign(actor: CurrentUser, designId: number, projectId: number, input: { name?: string; draft?: unknown; loads?: LoadsSettings }): Promise<void> {
+/** Changes a design's name, working draft (already checked by the engine) or load settings. */
+export async function updateDesignRow(actor: CurrentUser, designId: number, projectId: number, input: { name?: string; draft?: DesignSpec; loads?: LoadsSettings }): Promise<void> {
   const changes: Partial<typeof designs.$inferInsert> = {};
   if (input.name !== undefined) changes.name = input.name;
   if (input.loads !== undefined) changes.loads = input.loads as unknown as Record<string, unknown>;
   if (input.draft !== undefined) {
-    const spec = validSpec(input.draft);
-    changes.draft = spec as unknown as Record<string, unknown>;
-    changes.mode = spec.mode;
+    changes.draft = input.draft as unknown as Record<string, unknown>;
+    changes.mode = input.draft.mode;
   }
   await db.transaction(async (tx) => {
     await tx.update(designs).set(changes).where(eq(designs.id, designId));
@@ -125,21 +112,21 @@ export async function updateDesign(actor: CurrentUser, designId: number, project
   });
 }
 
+interface NewRevisionRow {
+  spec: DesignSpec;
+  specHash: string;
+  engineVersion: string;
+  summary: RevisionSummary;
+  /** The load settings to keep with it; absent: the design's own, as they are now. */
+  loads?: LoadsSettings;
+  note: string;
+}
+
 /**
- * Saves a spec as the design's next revision. The engine solves it first (a spec that does not
- * solve is refused with the engine's message); the number is taken under a row lock on the design,
- * so two saves at once get consecutive numbers.
+ * Stores a solved spec as the design's next revision. The number is taken under a row lock on the
+ * design, so two saves at once get consecutive numbers.
  */
-export async function saveRevision(actor: CurrentUser, designId: number, projectId: number, input: { spec: unknown; note: string; loads?: LoadsSettings }): Promise<{ id: number; number: number; specHash: string }> {
-  const spec = validSpec(input.spec);
-  let result: SolveResult;
-  try {
-    result = solve(spec, { deadlineMs: SAVE_TIME_LIMIT_MS });
-  } catch (error) {
-    if (isEngineError(error)) throw new AppError(error.code === "timeout" ? "timeout" : "bad_request", error.where ? `${error.message} (at ${error.where})` : error.message);
-    throw error;
-  }
-  const hash = specHash(spec);
+export async function insertRevision(actor: CurrentUser, designId: number, projectId: number, input: NewRevisionRow): Promise<{ id: number; number: number; specHash: string }> {
   return db.transaction(async (tx) => {
     await tx.execute(sql`select id from ${designs} where ${designs.id} = ${designId} for update`);
     // The load settings go with the revision as they are now, so its cautions never change after it is saved.
@@ -149,18 +136,18 @@ export async function saveRevision(actor: CurrentUser, designId: number, project
     const [res] = await tx.insert(revisions).values({
       designId,
       number,
-      spec: spec as unknown as Record<string, unknown>,
-      specHash: hash,
-      engineVersion: ENGINE_VERSION,
-      summary: summarise(result) as unknown as Record<string, unknown>,
+      spec: input.spec as unknown as Record<string, unknown>,
+      specHash: input.specHash,
+      engineVersion: input.engineVersion,
+      summary: input.summary as unknown as Record<string, unknown>,
       loads: loads as Record<string, unknown> | null,
       note: input.note,
       createdById: actor.id,
     });
     await tx.update(designs).set({ updatedAt: new Date() }).where(eq(designs.id, designId));
     await tx.update(projects).set({ updatedAt: new Date() }).where(eq(projects.id, projectId));
-    await audit(tx, { actorId: actor.id, action: "create", entity: "revisions", entityId: res.insertId, projectId, detail: { designId, number, specHash: hash } });
-    return { id: res.insertId, number, specHash: hash };
+    await audit(tx, { actorId: actor.id, action: "create", entity: "revisions", entityId: res.insertId, projectId, detail: { designId, number, specHash: input.specHash } });
+    return { id: res.insertId, number, specHash: input.specHash };
   });
 }
 

@@ -2,9 +2,9 @@ import "server-only";
 import { and, asc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { projectMembers, projects, users, type MemberRole } from "@/db/schema";
-import { audit } from "@/lib/server/audit";
-import type { CurrentUser } from "@/lib/server/dal";
-import { AppError } from "@/lib/server/errors";
+import { audit } from "./audit";
+import type { CurrentUser } from "./current-user";
+import { Refusal } from "./refusal";
 
 export interface MemberRow {
   id: number;
@@ -31,14 +31,14 @@ async function memberOfProject(projectId: number, memberId: number) {
     .from(projectMembers)
     .where(and(eq(projectMembers.id, memberId), eq(projectMembers.projectId, projectId)))
     .limit(1);
-  if (!row) throw new AppError("not_found", "That person is not a member of this project.");
+  if (!row) throw new Refusal("not_found", "That person is not a member of this project.");
   return row;
 }
 
 function checkRoleFits(userRole: string, memberRole: MemberRole) {
-  if (userRole === "admin") throw new AppError("bad_request", "Admins see every project already; they are not added as members.", { userId: ["Admins are not added as members."] });
+  if (userRole === "admin") throw new Refusal("bad_request", "Admins see every project already; they are not added as members.", { userId: ["Admins are not added as members."] });
   if (userRole !== memberRole) {
-    throw new AppError("bad_request", `This person's role is ${userRole}; they can join a project only as ${userRole}.`, {
+    throw new Refusal("bad_request", `This person's role is ${userRole}; they can join a project only as ${userRole}.`, {
       role: [`Must match the person's role (${userRole}).`],
     });
   }
@@ -46,8 +46,8 @@ function checkRoleFits(userRole: string, memberRole: MemberRole) {
 
 export async function addMember(actor: CurrentUser, projectId: number, input: { userId: number; role: MemberRole }): Promise<number> {
   const [user] = await db.select().from(users).where(eq(users.id, input.userId)).limit(1);
-  if (!user) throw new AppError("bad_request", "No such person.", { userId: ["No such person."] });
-  if (!user.active) throw new AppError("bad_request", "That account is deactivated.", { userId: ["That account is deactivated."] });
+  if (!user) throw new Refusal("bad_request", "No such person.", { userId: ["No such person."] });
+  if (!user.active) throw new Refusal("bad_request", "That account is deactivated.", { userId: ["That account is deactivated."] });
   checkRoleFits(user.role, input.role);
   return db.transaction(async (tx) => {
     const [existing] = await tx
@@ -55,7 +55,7 @@ export async function addMember(actor: CurrentUser, projectId: number, input: { 
       .from(projectMembers)
       .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.userId, input.userId)))
       .limit(1);
-    if (existing) throw new AppError("conflict", `${user.name} is already a member of this project.`, { userId: ["Already a member."] });
+    if (existing) throw new Refusal("conflict", `${user.name} is already a member of this project.`, { userId: ["Already a member."] });
     const [res] = await tx.insert(projectMembers).values({ projectId, userId: input.userId, role: input.role, addedById: actor.id });
     await tx.update(projects).set({ updatedAt: new Date() }).where(eq(projects.id, projectId));
     await audit(tx, { actorId: actor.id, action: "add", entity: "project_members", entityId: res.insertId, projectId, detail: { userId: input.userId, role: input.role } });
@@ -76,7 +76,7 @@ export async function updateMemberRole(actor: CurrentUser, projectId: number, me
 export async function removeMember(actor: CurrentUser, projectId: number, memberId: number): Promise<void> {
   const member = await memberOfProject(projectId, memberId);
   if (member.userId === actor.id && actor.role !== "admin") {
-    throw new AppError("bad_request", "You cannot remove yourself; ask an admin.");
+    throw new Refusal("bad_request", "You cannot remove yourself; ask an admin.");
   }
   await db.transaction(async (tx) => {
     await tx.delete(projectMembers).where(eq(projectMembers.id, memberId));

@@ -25,9 +25,9 @@ import {
 } from "@/db/schema";
 import { approvalReference, type ApprovalStamp } from "@/lib/review/reference";
 import { formatMoney } from "@/lib/money/currency";
-import { audit } from "@/lib/server/audit";
-import type { CurrentUser } from "@/lib/server/dal";
-import { AppError } from "@/lib/server/errors";
+import { audit } from "./audit";
+import type { CurrentUser } from "./current-user";
+import { Refusal } from "./refusal";
 import { writeLogEntry } from "./build-log";
 
 export interface ReviewRow {
@@ -250,9 +250,9 @@ export async function insertReview(actor: CurrentUser, input: NewReviewRow): Pro
     // The revision's row is locked so two requests at once cannot both open a review of it.
     await tx.select({ id: revisions.id }).from(revisions).where(eq(revisions.id, input.revisionId)).for("update");
     const [approved] = await tx.select({ id: signOffs.id }).from(signOffs).where(and(eq(signOffs.revisionId, input.revisionId), eq(signOffs.decision, "approve"))).limit(1);
-    if (approved) throw new AppError("conflict", `R${input.revisionNumber} is approved already: a later change needs a new revision, sent for review again.`);
+    if (approved) throw new Refusal("conflict", `R${input.revisionNumber} is approved already: a later change needs a new revision, sent for review again.`);
     const open = await openReviewsOf(input.revisionId, tx);
-    if (open.length) throw new AppError("conflict", `R${input.revisionNumber} is already with the client for review (review ${open[0]}); wait for their decision.`);
+    if (open.length) throw new Refusal("conflict", `R${input.revisionNumber} is already with the client for review (review ${open[0]}); wait for their decision.`);
     const [res] = await tx.insert(reviews).values({
       revisionId: input.revisionId,
       projectId: input.projectId,
@@ -346,7 +346,7 @@ export async function insertSignOff(actor: CurrentUser, review: ReviewRow, input
     });
   } catch (error) {
     // Another decision on this review got there first.
-    if (isDuplicateKey(error)) throw new AppError("conflict", "This review has been decided already; a decision cannot be changed.");
+    if (isDuplicateKey(error)) throw new Refusal("conflict", "This review has been decided already; a decision cannot be changed.");
     throw error;
   }
   const [row] = await signOffQuery().where(eq(signOffs.id, id)).limit(1);

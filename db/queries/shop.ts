@@ -5,9 +5,9 @@ import { asc, eq } from "drizzle-orm";
 import { db } from "@/db";
 import { isDuplicateKey } from "@/db/duplicate-key";
 import { machines, materials, stockSheets, type Machine, type Material, type StockSheet } from "@/db/schema";
-import { audit } from "@/lib/server/audit";
-import type { CurrentUser } from "@/lib/server/dal";
-import { AppError } from "@/lib/server/errors";
+import { audit } from "./audit";
+import type { CurrentUser } from "./current-user";
+import { Refusal } from "./refusal";
 import type { ShopTable } from "@/lib/validation/shop";
 
 export interface StockSheetRow extends StockSheet {
@@ -45,12 +45,12 @@ export async function listShopLibrary({ activeOnly = false } = {}): Promise<Shop
 async function nameIsFree<T extends ShopTable>(table: T, name: string, exceptId?: number) {
   const t = tables[table];
   const [row] = await db.select({ id: t.id }).from(t).where(eq(t.name, name)).limit(1);
-  if (row && row.id !== exceptId) throw new AppError("conflict", "That name is already in the library.", { name: ["Already in use."] });
+  if (row && row.id !== exceptId) throw new Refusal("conflict", "That name is already in the library.", { name: ["Already in use."] });
 }
 
 async function assertMaterial(id: number) {
   const [row] = await db.select({ id: materials.id }).from(materials).where(eq(materials.id, id)).limit(1);
-  if (!row) throw new AppError("bad_request", "Choose a material from the library.", { materialId: ["No such material."] });
+  if (!row) throw new Refusal("bad_request", "Choose a material from the library.", { materialId: ["No such material."] });
 }
 
 type Values = {
@@ -72,13 +72,13 @@ export async function saveShopRow<T extends ShopTable>(actor: CurrentUser, table
         rowId = res.insertId;
       } else {
         const [res] = await tx.update(t).set(values as never).where(eq(t.id, rowId));
-        if (res.affectedRows === 0) throw new AppError("not_found", "No such row in the library.");
+        if (res.affectedRows === 0) throw new Refusal("not_found", "No such row in the library.");
       }
       await audit(tx, { actorId: actor.id, action: id === undefined ? "create" : "update", entity: entityNames[table], entityId: rowId, detail: values as Record<string, unknown> });
       return rowId;
     });
   } catch (error) {
-    if (isDuplicateKey(error)) throw new AppError("conflict", "That name is already in the library.", { name: ["Already in use."] });
+    if (isDuplicateKey(error)) throw new Refusal("conflict", "That name is already in the library.", { name: ["Already in use."] });
     throw error;
   }
 }
@@ -87,7 +87,7 @@ export async function setShopRowActive(actor: CurrentUser, table: ShopTable, id:
   const t = tables[table];
   await db.transaction(async (tx) => {
     const [res] = await tx.update(t).set({ active }).where(eq(t.id, id));
-    if (res.affectedRows === 0) throw new AppError("not_found", "No such row in the library.");
+    if (res.affectedRows === 0) throw new Refusal("not_found", "No such row in the library.");
     await audit(tx, { actorId: actor.id, action: active ? "restore" : "retire", entity: entityNames[table], entityId: id });
   });
 }
@@ -98,8 +98,8 @@ export async function getShopRows(ids: { materialId: number; stockSheetId: numbe
     db.select().from(stockSheets).where(eq(stockSheets.id, ids.stockSheetId)).limit(1),
     db.select().from(machines).where(eq(machines.id, ids.machineId)).limit(1),
   ]);
-  if (!material) throw new AppError("bad_request", "Choose a material from the library.", { materialId: ["No such material."] });
-  if (!sheet) throw new AppError("bad_request", "Choose a stock sheet from the library.", { stockSheetId: ["No such stock sheet."] });
-  if (!machine) throw new AppError("bad_request", "Choose a machine from the library.", { machineId: ["No such machine."] });
+  if (!material) throw new Refusal("bad_request", "Choose a material from the library.", { materialId: ["No such material."] });
+  if (!sheet) throw new Refusal("bad_request", "Choose a stock sheet from the library.", { stockSheetId: ["No such stock sheet."] });
+  if (!machine) throw new Refusal("bad_request", "Choose a machine from the library.", { machineId: ["No such machine."] });
   return { material, sheet, machine };
 }

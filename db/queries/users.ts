@@ -2,10 +2,9 @@ import "server-only";
 import { asc, eq, ne } from "drizzle-orm";
 import { db } from "@/db";
 import { organisations, users, type UserRole } from "@/db/schema";
-import { audit } from "@/lib/server/audit";
-import type { CurrentUser } from "@/lib/server/dal";
-import { AppError } from "@/lib/server/errors";
-import { hashPassword } from "@/lib/server/passwords";
+import { audit } from "./audit";
+import type { CurrentUser } from "./current-user";
+import { Refusal } from "./refusal";
 
 export interface UserRow {
   id: number;
@@ -29,9 +28,10 @@ export async function listAssignableUsers(): Promise<UserRow[]> {
   return (await listUsers()).filter((u) => u.active && u.role !== "admin");
 }
 
-export async function createUser(actor: CurrentUser, input: { email: string; name: string; role: UserRole; password: string }): Promise<number> {
+/** Adds an account; `hashPassword` (Argon2id, lib/server/passwords.ts) runs only once the e-mail is known to be free. */
+export async function createUser(actor: CurrentUser, input: { email: string; name: string; role: UserRole; password: string }, hashPassword: (password: string) => Promise<string>): Promise<number> {
   const [taken] = await db.select({ id: users.id }).from(users).where(eq(users.email, input.email)).limit(1);
-  if (taken) throw new AppError("conflict", "An account with that e-mail already exists.", { email: ["Already in use."] });
+  if (taken) throw new Refusal("conflict", "An account with that e-mail already exists.", { email: ["Already in use."] });
   const passwordHash = await hashPassword(input.password);
   return db.transaction(async (tx) => {
     const [res] = await tx.insert(users).values({ email: input.email, name: input.name, role: input.role, passwordHash });
@@ -42,7 +42,7 @@ export async function createUser(actor: CurrentUser, input: { email: string; nam
 
 async function existingUser(userId: number) {
   const [user] = await db.select().from(users).where(eq(users.id, userId)).limit(1);
-  if (!user) throw new AppError("not_found", "No such user.");
+  if (!user) throw new Refusal("not_found", "No such user.");
   return user;
 }
 
@@ -53,7 +53,7 @@ async function assertNotLastAdmin(userId: number) {
     (u) => u.role === "admin" && u.active,
   );
   if (admins.some((a) => a.id === userId) && activeOthers.length === 0) {
-    throw new AppError("conflict", "This is the last active admin; make someone else admin first.");
+    throw new Refusal("conflict", "This is the last active admin; make someone else admin first.");
   }
 }
 
@@ -71,7 +71,7 @@ export async function setUserActive(actor: CurrentUser, userId: number, active: 
   const user = await existingUser(userId);
   if (user.active === active) return;
   if (!active) {
-    if (userId === actor.id) throw new AppError("bad_request", "You cannot deactivate your own account.");
+    if (userId === actor.id) throw new Refusal("bad_request", "You cannot deactivate your own account.");
     if (user.role === "admin") await assertNotLastAdmin(userId);
   }
   await db.transaction(async (tx) => {

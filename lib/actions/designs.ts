@@ -2,9 +2,9 @@
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { z } from "zod";
-import { createDesign } from "@/db/queries/designs";
 import { formAction } from "@/lib/server/action";
 import { requireProjectAccess } from "@/lib/server/dal";
+import { createDesign } from "@/lib/server/designs";
 import { AppError } from "@/lib/server/errors";
 import { idParam } from "@/lib/server/route";
 import { presetById } from "@/lib/studio/presets";

@@ -4,6 +4,7 @@ import { revalidatePath } from "next/cache";
 import { changeUserRole, createUser, setUserActive } from "@/db/queries/users";
 import { formAction } from "@/lib/server/action";
 import { requireRole } from "@/lib/server/dal";
+import { hashPassword } from "@/lib/server/passwords";
 import { sendMail } from "@/lib/server/mail";
 import { linkFromRequest } from "@/lib/server/request";
 import { changeRoleSchema, newUserSchema, setActiveSchema } from "@/lib/validation/users";
@@ -11,7 +12,7 @@ import { changeRoleSchema, newUserSchema, setActiveSchema } from "@/lib/validati
 const admin = () => requireRole("admin");
 
 const createUserForm = formAction(newUserSchema, admin, async (input, actor) => {
-  await createUser(actor, input);
+  await createUser(actor, input, hashPassword);
   await sendMail({
     to: input.email,
     subject: "Your Axlewright account",

@@ -15,6 +15,7 @@ const SHEET_SCOPE = "This sheet gives the geometry and the installation figures 
 export interface SheetContext {
   job: JobInput;
   cutPlanId: number;
+  cutPlanNumber: number;
   project: { name: string; site: string; client: string | null };
   approval: ApprovalStamp | null;
   shop: { name: string; contact: string };
@@ -83,6 +84,7 @@ export function buildAssemblySheet(c: SheetContext): AssemblySheet {
     date: c.date.toISOString(),
     shop: c.shop,
     cutPlanId: c.cutPlanId,
+    cutPlanNumber: c.cutPlanNumber,
     cautions,
     disclaimer: `${SHEET_SCOPE} ${loads.disclaimer}`,
     inches: c.inches ?? s.outputUnits === "in",
@@ -118,10 +120,5 @@ export function buildAssemblySheet(c: SheetContext): AssemblySheet {
       method: `The wheel, turned as the rolling law turns it, rolled over the track as built with one joint moved along the run, or one support lowered, until the axle rose or fell by ${mm(limit)}; figures rounded down to 0.05 mm.`,
     },
   };
-}
-
-/** The short line every page of the sheet carries. */
-export function sheetFooter(sheet: AssemblySheet): string {
-  return `${sheet.project.name} · ${sheet.design.name} R${sheet.design.revision} · ${sheet.approval ? `approved ${sheet.approval.reference}` : "NOT APPROVED"}`;
 }
 

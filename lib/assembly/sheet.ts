@@ -79,6 +79,8 @@ export interface AssemblySheet {
   date: string;
   shop: { name: string; contact: string };
   cutPlanId: number;
+  /** The plan's number within its revision: the sheet names it "cut plan 2 of R3". */
+  cutPlanNumber: number;
   cautions: SheetCaution[];
   disclaimer: string;
   /** Show inches beside millimetres. */

@@ -1,6 +1,6 @@
 // A stored cut plan's summary and its nest as kept, from the parts and a nest that has passed the
 // server's check (verify-nest.ts). Pure, so the route and the demo seed store the same shape.
-import { ringArea } from "@/lib/cut/geometry";
+import { regionArea } from "@/lib/geometry/ring";
 import type { CutPlanResult } from "@/lib/cut";
 import type { SheetNestResult } from "@/lib/nest/types";
 
@@ -22,11 +22,6 @@ export interface CutPlanSummary {
   approvalReference?: string | null;
   /** The shop's reason for storing a production plan of a revision the client has not approved. */
   unapprovedReason?: string | null;
-}
-
-/** Area of a region: the outer ring less its holes. */
-function regionArea(region: { outer: [number, number][]; holes: [number, number][][] }): number {
-  return ringArea(region.outer) - region.holes.reduce((a, h) => a + ringArea(h), 0);
 }
 
 export function summariseCutPlan(

@@ -4,8 +4,9 @@
 // from the part and the placement and tests it with Clipper (Vatti polygon clipping), so it trusts
 // nothing the nester reported about itself.
 import { clipper, loadClipper, toPath, type ClipperLib } from "@/lib/geometry/clipper";
-import { bounds, placer } from "@/lib/cut/geometry";
-import type { Ring } from "@/lib/cut/types";
+import { bounds, type Box } from "@/lib/geometry/box";
+import { placeRing } from "@/lib/geometry/place";
+import type { Ring } from "@/lib/geometry/ring";
 import type { NestItem, SheetNestResult } from "@/lib/nest/types";
 
 /** Integer steps per model unit for the check (1 µm when the unit is the millimetre). */
@@ -19,11 +20,6 @@ export interface NestCheckInput {
   sheet: { width: number; height: number };
   margin: number;
   spacing: number;
-}
-
-/** A placed copy's outline: turned about the part's own origin, then moved (the nester's convention). */
-export function placeRing(ring: Ring, rotationDeg: number, x: number, y: number): Ring {
-  return ring.map(placer(rotationDeg, x, y));
 }
 
 function sameAngle(a: number, b: number): boolean {
@@ -62,7 +58,7 @@ export async function checkNest(input: NestCheckInput): Promise<string[]> {
   const { width, height } = input.sheet;
   const m = input.margin;
   for (const sheet of input.nest.sheets) {
-    const placed: { label: string; ring: Ring; box: ReturnType<typeof bounds> }[] = [];
+    const placed: { label: string; ring: Ring; box: Box }[] = [];
     for (const p of sheet.placements) {
       const item = byId.get(p.id);
       const label = `${p.id} (copy ${p.copy + 1})`;

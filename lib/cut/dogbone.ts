@@ -1,12 +1,12 @@
 // Dogbone relief for a concave corner that a round cutter cannot reach: a circle of the cutter's
 // diameter, its centre moved from the corner along the bisector of the open (empty) side by one
-// cutter radius, so that the circle's edge passes through the corner (FAB.md §4.2: "a circle of
+// cutter radius, so that the circle's edge passes through the corner (docs/fabrication.md §4.2: "a circle of
 // tool diameter at each inner corner, offset by half the diameter at 45°"; for a corner of any
 // angle the bisector takes the place of 45°). The mating part's sharp convex corner then seats fully.
 // Done on the ring itself, so no boolean is needed: the corner vertex is replaced by the circle's
 // arc that passes through it, between the two points where the circle crosses the corner's edges.
-import type { Pt } from "@/lib/track";
-import type { Ring } from "./types";
+import type { Pt } from "@/lib/geometry/point";
+import type { Ring } from "@/lib/geometry/ring";
 
 /** Cross product of (b − a) × (c − b): negative at a right turn. */
 export function turn(a: Pt, b: Pt, c: Pt): number {

@@ -2,7 +2,8 @@
 // and the machine bed in at least one allowed rotation, with the kerf. The nester reports parts it
 // cannot place, but this says which part is too big and by how much before any nesting is tried.
 import { CutError } from "./errors";
-import { bounds, placer } from "./geometry";
+import { bounds, boxHeight, boxWidth } from "@/lib/geometry/box";
+import { placer } from "@/lib/geometry/place";
 import { allowedRotations } from "./rotations";
 import { usableSize } from "./segments";
 import type { CutSettings } from "./settings";
@@ -12,7 +13,7 @@ import { fmtLen } from "./units";
 /** The part's bounding length × width at a rotation, with half the kerf on every side. */
 export function cutSize(part: Part, deg: number, kerf: number): { length: number; width: number } {
   const b = bounds(part.region.outer.map(placer(deg, 0, 0)));
-  return { length: b.maxX - b.minX + kerf, width: b.maxY - b.minY + kerf };
+  return { length: boxWidth(b) + kerf, width: boxHeight(b) + kerf };
 }
 
 export function checkPartsFit(parts: Part[], s: CutSettings): void {

@@ -1,7 +1,7 @@
 // Cut-ready parts and export files from a solved design (see README.md for the module map). Pure
 // TypeScript like lib/track: Node-only pieces are imported by path — labels/font-file.ts (reads the
 // font), export/png.ts (sharp) and export/zip.ts (archiver).
-export type { Part, PartKind, Region, Ring, DrillHole, CutWarning, CutWarningCode } from "./types";
+export type { Part, PartKind, Region, DrillHole, CutWarning, CutWarningCode } from "./types";
 export { CutError, isCutError, type CutErrorCode } from "./errors";
 export { cutSettingsSchema, parseCutSettings, DEFAULT_CUT_SETTINGS, insideRadius, type CutSettings, type CutSettingsInput } from "./settings";
 export { buildRun, hasTrack, type RunInfo } from "./run-length";

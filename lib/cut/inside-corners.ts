@@ -1,5 +1,5 @@
 // Concave corners tighter than the machine can cut. A round cutter of radius r leaves a fillet of
-// radius r in every inside corner (FAB.md §4.2: "a 1/4″ or 6.35 mm dia tool will create a 1/8″ or
+// radius r in every inside corner (docs/fabrication.md §4.2: "a 1/4″ or 6.35 mm dia tool will create a 1/8″ or
 // 3.175 radius on internal corners"); a laser or waterjet leaves about half its kerf.
 // - Joints (slots, keys): relief is added (dogbones, lib/cut/dogbone.ts) wherever the radius left
 //   would foul the mating part's sharp corner, i.e. when it exceeds the joint clearance.
@@ -13,7 +13,8 @@
 import type { Pt, SolveResult } from "@/lib/track";
 import { addDogbones, reflexVertices } from "./dogbone";
 import { insideRadius, type CutSettings } from "./settings";
-import type { CutWarning, Ring } from "./types";
+import type { CutWarning } from "./types";
+import type { Ring } from "@/lib/geometry/ring";
 import { fmtLen } from "./units";
 
 /** A vertex turning by more than this (radians) counts as a corner, not a sampled bend. */

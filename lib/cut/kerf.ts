@@ -2,15 +2,15 @@
 // Clipper 6.4.2, whose offsetter follows X. Chen & S. McMains, "Polygon Offsetting by Computing
 // Winding Numbers", ASME IDETC/CIE 2005, DETC2005-85513: the boundary of the ring's Minkowski sum
 // with a disc). The outer ring moves out by k/2, each hole in towards
-// its own inside by k/2 (FAB.md §4.1: "outer contours are offset outward by k/2 and holes inward by
+// its own inside by k/2 (docs/fabrication.md §4.1: "outer contours are offset outward by k/2 and holes inward by
 // k/2"). Joins are round: at a convex corner the cutter's centre swings round the corner on an arc
 // of radius k/2, which leaves the part's corner sharp; at a concave corner the centre path meets in
 // a point and the part keeps a radius of k/2, the least a round cutter can leave. Work is in integer
 // micrometres (SCALE_PER_MM = 1000), arcs to 1 µm.
 import { clipper, fromPath, loadClipper, SCALE_PER_MM, toPath, type ClipperLib } from "@/lib/geometry/clipper";
-import { cleanRing, orient, ringArea } from "./geometry";
+import { cleanRing, orient, ringArea, type Ring } from "@/lib/geometry/ring";
 import type { CutSettings } from "./settings";
-import type { CutWarning, Part, Region, Ring } from "./types";
+import type { CutWarning, Part, Region } from "./types";
 
 /** Largest departure of an offset arc from the true circle, mm. */
 export const ARC_TOLERANCE = 0.001;

@@ -4,9 +4,9 @@
 // (the smallest distance from the axle to the outline); a hole of radius a centred at distance c
 // then keeps |q − centre| − a ≥ ρ_in − c − a from the outline (triangle inequality). With the bore
 // radius b: c − a ≥ b + rim, c + a ≤ ρ_in − rim, and neighbours 2c·sin(π/count) − 2a ≥ rim.
-import { circleRing, distToRing, orient } from "./geometry";
+import { circleRing, orient, type Ring } from "@/lib/geometry/ring";
+import { distToRing } from "@/lib/geometry/segment";
 import type { CutSettings } from "./settings";
-import type { Ring } from "./types";
 
 export interface Lightening {
   holes: Ring[];

@@ -7,9 +7,9 @@
 // original, since each original edge lies within ε of one simplified edge. So a nest of these
 // outlines is a valid nest of the parts, at the cost of at most 2ε extra spacing.
 import { clipper, fromPath, loadClipper, toPath, SCALE_PER_MM } from "@/lib/geometry/clipper";
-import type { Pt } from "@/lib/track";
-import { distToSegment, ringArea } from "./geometry";
-import type { Ring } from "./types";
+import type { Pt } from "@/lib/geometry/point";
+import { ringArea, type Ring } from "@/lib/geometry/ring";
+import { distToSegment } from "@/lib/geometry/segment";
 
 /** Simplification tolerance, mm: far below any part spacing a shop uses. */
 export const NEST_OUTLINE_TOLERANCE = 1.5;

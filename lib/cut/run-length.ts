@@ -9,7 +9,7 @@
 // the profile without a step and the default cut stations (crests) fall on whole periods.
 import { tileRun, type Pt, type SolveResult, type TileResult } from "@/lib/track";
 import { CutError } from "./errors";
-import { yAt } from "./geometry";
+import { yAt } from "@/lib/geometry/polyline";
 import type { CutSettings } from "./settings";
 import type { CutWarning } from "./types";
 import { fmtLen, mmPerUnit, toMm } from "./units";

@@ -1,6 +1,6 @@
 // The cut settings: one zod schema with the limits, the defaults and a plain message for every
 // field, so the app's form, the command line and the stored cut plan all read the same thing.
-// Lengths are millimetres. Trade defaults follow FAB.md §4: 2440 × 1220 mm sheets (4 × 8 ft),
+// Lengths are millimetres. Trade defaults follow docs/fabrication.md §4: 2440 × 1220 mm sheets (4 × 8 ft),
 // a router's kerf is its cutter diameter (6 mm), edge margin 10 mm for a router; the rest
 // (base depth, joint sizes, support spacing) are starting values the user is expected to edit.
 import { z } from "zod";

@@ -4,7 +4,9 @@
 // result shape. It stands in when the real nester (lib/nest) is not available, and it is far from
 // dense: every part takes its whole bounding box.
 import type { NestItem, SheetNestResult, SheetPlacement } from "@/lib/nest/types";
-import { bounds, placer, ringArea } from "./geometry";
+import { bounds, boxHeight, boxWidth } from "@/lib/geometry/box";
+import { placer } from "@/lib/geometry/place";
+import { ringArea } from "@/lib/geometry/ring";
 
 interface Copy {
   id: string;
@@ -29,7 +31,7 @@ export function shelfLayout(input: { items: NestItem[]; sheet: { width: number; 
       .filter((r) => Math.abs(r / 90 - Math.round(r / 90)) < 1e-9)
       .map((r) => {
         const b = bounds(item.polygon.map(placer(r, 0, 0)));
-        return { r, w: b.maxX - b.minX, h: b.maxY - b.minY, minX: b.minX, minY: b.minY };
+        return { r, w: boxWidth(b), h: boxHeight(b), minX: b.minX, minY: b.minY };
       })
       .filter((o) => o.w <= W - 2 * m + 1e-9 && o.h <= H - 2 * m + 1e-9)
       // Long side along the sheet's length; then the lowest shelf.

@@ -1,7 +1,7 @@
 // Support holes along the base band: evenly spaced at no more than the support spacing, the first
 // and last a short distance in from the ends of the run, and kept clear of every joint (a support
 // that falls on a key or under a splice plate moves to the nearer edge of the joint's zone). The
-// span between supports is what the track's deflection check (SAFETY.md §2.4, a beam between
+// span between supports is what the track's deflection check (docs/safety.md §2.4, a beam between
 // supports) reads.
 import { keyShape } from "./joints/key";
 import { spliceGeometry } from "./joints/dowel";

@@ -4,8 +4,11 @@
 // each cut station. Support holes and dowel holes sit on the base band's centre line; the label is
 // engraved where the part has room. Parts are in their own coordinates (x from the segment's
 // start, y from the bottom edge); runOffset puts each back in the run.
-import type { Pt } from "@/lib/track";
-import { cleanRing, orient, sliceByX, translate, type Box } from "./geometry";
+import type { Pt } from "@/lib/geometry/point";
+import type { Box } from "@/lib/geometry/box";
+import { translate } from "@/lib/geometry/place";
+import { sliceByX } from "@/lib/geometry/polyline";
+import { cleanRing, orient, type Ring } from "@/lib/geometry/ring";
 import { relieveJointCorners } from "./inside-corners";
 import { jointHoles, splicePlate } from "./joints/dowel";
 import { keyShape, keySlot, keyTongue } from "./joints/key";
@@ -15,7 +18,7 @@ import type { RunInfo } from "./run-length";
 import { planCuts } from "./segments";
 import type { CutSettings } from "./settings";
 import { supportStations } from "./supports";
-import type { CutWarning, DrillHole, Part, Ring } from "./types";
+import type { CutWarning, DrillHole, Part } from "./types";
 
 export interface TrackParts {
   parts: Part[];

@@ -1,12 +1,11 @@
 // What the shop cuts: parts as flat regions with holes, drill points and engraving. lib/cut builds
 // every part in millimetres (a design in inches is converted ×25.4 first); the exporters convert to
-// the chosen output unit. Shared by the part builders (lib/cut), the nester (lib/nest) and the
-// exporters.
-import type { Pt } from "@/lib/track";
+// the chosen output unit. Shared by the part builders and the exporters; rings, boxes and
+// placements are lib/geometry's, and the nester (lib/nest) never imports from here.
+import type { Pt } from "@/lib/geometry/point";
+import type { Ring } from "@/lib/geometry/ring";
 
-/** A closed ring, first point not repeated. Outer rings counter-clockwise, holes clockwise. */
-export type Ring = Pt[];
-
+/** An outline with holes: the outer ring counter-clockwise, the holes clockwise. */
 export interface Region {
   outer: Ring;
   holes: Ring[];

@@ -1,7 +1,7 @@
 // Unit handling: lib/cut works in millimetres; a design in inches is converted by the exact
 // 25.4 mm/in (the international inch, NIST Handbook 44 Appendix C), and the exporters convert back
 // to the user's output unit.
-import type { Pt } from "@/lib/track";
+import type { Pt } from "@/lib/geometry/point";
 
 export const MM_PER_IN = 25.4;
 

@@ -4,13 +4,14 @@
 // (lightening.ts) and an engraved label. Partner and twin modes give two wheel parts.
 import type { SolveResult } from "@/lib/track";
 import { CutError } from "./errors";
-import { circleRing, cleanRing, distToRing, orient } from "./geometry";
+import { circleRing, cleanRing, orient, type Ring } from "@/lib/geometry/ring";
+import { distToRing } from "@/lib/geometry/segment";
 import { wheelSurfaceWarnings } from "./inside-corners";
 import type { GlyphTable } from "./labels/font";
 import { lighteningHoles } from "./lightening";
 import type { CutSettings } from "./settings";
 import { labelPart } from "./track-parts";
-import type { CutWarning, Part, PartKind, Ring } from "./types";
+import type { CutWarning, Part, PartKind } from "./types";
 import { fmtLen, mmPerUnit } from "./units";
 
 interface Body {

@@ -1,7 +1,10 @@
 // A still picture of a solved design as SVG: the track over a few periods with the wheel standing on
 // it (track modes), or the two wheels on their axles (pairs). Pure string building — no markup from
 // users ever reaches it, only numbers — so the server can rasterise it with sharp.
-import type { Pt, SolveResult } from "@/lib/track";
+import { bounds, boxHeight, boxWidth, emptyBox, union } from "@/lib/geometry/box";
+import { translate } from "@/lib/geometry/place";
+import type { Pt } from "@/lib/geometry/point";
+import type { SolveResult } from "@/lib/track";
 
 const INK = "#1d3557";
 const SOFT = "#8da2bb";
@@ -13,25 +16,13 @@ function path(points: Pt[], dx = 0, dy = 0, close = false): string {
   return close ? `${d} Z` : d;
 }
 
-interface Box {
-  minX: number;
-  minY: number;
-  maxX: number;
-  maxY: number;
-}
-
-function grow(box: Box, points: Pt[], dx = 0, dy = 0): void {
-  for (const [x, y] of points) {
-    box.minX = Math.min(box.minX, x + dx);
-    box.maxX = Math.max(box.maxX, x + dx);
-    box.minY = Math.min(box.minY, y + dy);
-    box.maxY = Math.max(box.maxY, y + dy);
-  }
-}
-
 /** SVG of the design at its start pose, width × height pixels, the drawing fitted with a margin. */
 export function previewSvg(result: SolveResult, width = 640, height = 360): string {
-  const box: Box = { minX: Infinity, minY: Infinity, maxX: -Infinity, maxY: -Infinity };
+  let box = emptyBox();
+  /** Widens the drawing's box to hold `points` moved by (dx, dy). */
+  const grow = (points: Pt[], dx = 0, dy = 0) => {
+    box = union(box, bounds(translate(points, dx, dy)));
+  };
   const parts: string[] = [];
   const stroke = (d: string, colour = INK, w = 2) =>
     parts.push(`<path d="${d}" fill="none" stroke="${colour}" stroke-width="${w}" vector-effect="non-scaling-stroke" stroke-linejoin="round"/>`);
@@ -40,30 +31,30 @@ export function previewSvg(result: SolveResult, width = 640, height = 360): stri
     const period = result.period ?? 0;
     const axleY = result.mode === "track-for-wheel" ? 0 : (result.axleHeight ?? 0);
     for (let k = -1; k <= 1; k++) {
-      grow(box, result.track.points, k * period);
+      grow(result.track.points, k * period);
       stroke(path(result.track.points, k * period), INK, 1.5);
     }
-    grow(box, result.wheel.points, 0, axleY);
+    grow(result.wheel.points, 0, axleY);
     stroke(path(result.wheel.points, 0, axleY, true));
     stroke(`M${box.minX} ${-axleY} L${box.maxX} ${-axleY}`, SOFT, 1);
     if (result.mode === "twin-wheels" && result.partner) {
       const lower = result.lowerAxleHeight ?? 0;
-      grow(box, result.partner.points, 0, lower);
+      grow(result.partner.points, 0, lower);
       stroke(path(result.partner.points, 0, lower, true));
     }
   } else {
-    grow(box, result.wheel.points);
+    grow(result.wheel.points);
     stroke(path(result.wheel.points, 0, 0, true));
     if (result.partner) {
       const c = -(result.centreDistance ?? 0);
-      grow(box, result.partner.points, 0, c);
+      grow(result.partner.points, 0, c);
       stroke(path(result.partner.points, 0, c, true));
       stroke(`M0 0 L0 ${-c}`, SOFT, 1);
     }
   }
   if (!Number.isFinite(box.minX)) return `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}"><rect width="100%" height="100%" fill="${PAPER}"/></svg>`;
-  const margin = 0.08 * Math.max(box.maxX - box.minX, box.maxY - box.minY);
-  const vb = [box.minX - margin, -(box.maxY + margin), box.maxX - box.minX + 2 * margin, box.maxY - box.minY + 2 * margin].map((v) => v.toFixed(3));
+  const margin = 0.08 * Math.max(boxWidth(box), boxHeight(box));
+  const vb = [box.minX - margin, -(box.maxY + margin), boxWidth(box) + 2 * margin, boxHeight(box) + 2 * margin].map((v) => v.toFixed(3));
   return [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="${vb.join(" ")}" preserveAspectRatio="xMidYMid meet">`,
     `<rect x="${vb[0]}" y="${vb[1]}" width="${vb[2]}" height="${vb[3]}" fill="${PAPER}"/>`,

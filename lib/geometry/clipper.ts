@@ -3,17 +3,13 @@
 // scale: with SCALE_PER_MM = 1000 one integer step is 1 µm. The web build inlines its WASM, so the
 // same import works in Node, in the Next.js server and in a Web Worker.
 import * as clipper from "js-angusj-clipper/web";
-import type { Pt } from "@/lib/track";
+import type { Pt } from "./point";
 
 export { clipper };
 export type ClipperLib = clipper.ClipperLibWrapper;
 
 /** Integer steps per millimetre (1 µm); per inch it is 25.4 times as many. */
 export const SCALE_PER_MM = 1000;
-
-export function scaleFor(units: "mm" | "in"): number {
-  return units === "mm" ? SCALE_PER_MM : SCALE_PER_MM * 25.4;
-}
 
 let loading: Promise<ClipperLib> | undefined;
 

@@ -3,7 +3,7 @@
 // Materials", 7th ed., Table G-2; the standard beam tables). A rolling wheel is a moving point load,
 // so the wheel at mid-span is the case to check. The limit is the smaller of L/360 (IBC Table
 // 1604.3, live load on floor members) and a share of the hump height, so the sag does not bump the
-// axle (5 %: a suggestion in the notes behind these checks, not a code value).
+// axle (5 %: a suggestion, docs/safety.md §2.4, not a code value).
 
 export interface Beam {
   /** Width (across the run) and depth (in the direction of the load) of the section, mm. */

@@ -18,7 +18,7 @@ export const DEFAULT_DYNAMIC_FACTOR = 2;
 export const DEFAULT_WHEELS = 2;
 /** A person leaning their weight on a piece they push or turn: 200 lbf, the point load ASCE 7-16 §4.5.1 puts on guards, taken by analogy (our choice). */
 export const HAND_LOAD_N = lbfToN(200);
-/** Traction or braking share when none is given: pedalling or braking a ride-on 0.2, pushing or cranking 0.1 (our defaults; the notes' T7 example values). */
+/** Traction or braking share when none is given: pedalling or braking a ride-on 0.2, pushing or cranking 0.1 (our defaults; the example values of docs/safety.md T7). */
 export const DEFAULT_TRACTION: Record<Use, number> = { "ride-on": 0.2, "push-along": 0.1, "hand-turned": 0.1, display: 0.1 };
 /** Below this modulus a tread is rubber-like: Hertz (small strain, linear elastic) does not apply (Johnson 1985 §4.1; the threshold is common practice). */
 export const SOFT_MODULUS_GPA = 0.2;
@@ -311,7 +311,7 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
       consequence: "The track dents at every trough and the corners wear, so the wheel loses step and the ride bumps.",
       avoid,
       figure: "contact radius 0 mm",
-      limit: ci.allowable !== null ? `p_max at most ${fmt(ci.allowable)} MPa` : "no allowable stress entered",
+      limit: ci.allowable !== null ? `peak pressure at most ${fmt(ci.allowable)} MPa` : "no allowable stress entered",
       source: hertzSource,
       at: contact.at,
     });
@@ -322,7 +322,7 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
       hazard: "The tread is rubber-like: the Hertz estimate does not apply to it.",
       consequence: "The contact stress shown may be far off.",
       avoid: "Test a sample of the tread on the track material under the wheel load.",
-      figure: `p_max ${fmt(contact.pMaxMpa!)} MPa (not valid)`,
+      figure: `peak pressure ${fmt(contact.pMaxMpa!)} MPa (not valid)`,
       limit: `modulus at least ${SOFT_MODULUS_GPA} GPa for Hertz`,
       source: `${hertzSource}: small strains, linear elastic; the threshold is common practice`,
       at: contact.at,
@@ -337,8 +337,8 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
           : "The corner radius is too small for the load: the contact patch runs off the rounding.",
       consequence: "The track or tread dents and wears, so the wheel loses step and the ride bumps.",
       avoid: "Use a larger corner radius, a wider tread, a harder track surface or a lower load.",
-      figure: `p_max ${fmt(contact.pMaxMpa!)} MPa, half-width ${fmt(contact.halfWidthMm, 3)} mm at radius ${fmt(contact.radiusMm, 1)} mm`,
-      limit: `p_max at most ${fmt(contact.allowableMpa ?? 0)} MPa; half-width at most ${PATCH_SHARE} × corner radius`,
+      figure: `peak pressure ${fmt(contact.pMaxMpa!)} MPa, half-width ${fmt(contact.halfWidthMm, 3)} mm at radius ${fmt(contact.radiusMm, 1)} mm`,
+      limit: `peak pressure at most ${fmt(contact.allowableMpa ?? 0)} MPa; half-width at most ${PATCH_SHARE} × corner radius`,
       source: hertzSource,
       at: contact.at,
     });
@@ -349,7 +349,7 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
       hazard: "No allowable contact stress for the wheel or the track.",
       consequence: "Contact stress cannot be judged.",
       avoid: "Enter the softer material's allowable (for wood, compression perpendicular to the grain).",
-      figure: contact.pMaxMpa === null ? "" : `p_max ${fmt(contact.pMaxMpa)} MPa`,
+      figure: contact.pMaxMpa === null ? "" : `peak pressure ${fmt(contact.pMaxMpa)} MPa`,
       limit: "",
       source: "USDA FPL Wood Handbook (FPL-GTR-282, 2021), ch. 5, compression perpendicular to grain",
     });

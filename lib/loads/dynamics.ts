@@ -1,4 +1,4 @@
-// The wheel's uneven turning on a level axle (SAFETY notes §3.2, derived there): the contact is
+// The wheel's uneven turning on a level axle (docs/safety.md §3.2, derived there): the contact is
 // straight below the axle at distance ρ, so at axle speed v the wheel turns at ω = v/ρ and
 // α = dω/dt = v²·(dρ/dx)/ρ²… with dρ/dx = ∓tan ψ: at a corner |α| = v²·tan ψ/ρ², and it changes sign
 // as the corner passes (a step of twice that). A regular n-gon of inradius r has ρ from r to

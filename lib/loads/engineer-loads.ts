@@ -1,5 +1,5 @@
 // Loads an engineer designing the supports, the frame and the guards will want, shown as inputs and
-// not as a structural design (each with where it comes from, as the notes behind these checks read it).
+// not as a structural design (each with where it comes from, as docs/safety.md §5 reads it).
 import { lbfToN, plfToNPerM, psfToKpa } from "./units";
 
 export interface EngineerLoad {

@@ -1,5 +1,5 @@
-// Gaps people can reach, against the published body-part tables (the figures as the notes behind
-// these checks read them; check the current edition where the piece is built):
+// Gaps people can reach, against the published body-part tables (the figures as docs/safety.md §1
+// reads them; check the current edition where the piece is built):
 // - ISO 13854:2017 minimum gaps to avoid crushing: finger 25, hand 100, foot 120, arm 120, leg 180 mm;
 // - ASTM F963 §4.18.1 (toys, ride-on wheels, wheel wells and fenders): a clearance that admits a 5 mm
 //   rod must also admit a 13 mm rod; EN 71-1 Annex A and RoSPA: no gaps between 5 and 12 mm;

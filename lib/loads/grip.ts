@@ -21,5 +21,5 @@ export function frictionNeededSigned(slope: number, H: number, V: number): numbe
 /** A measured tilt (slip) angle, degrees, as a friction coefficient: μ = tan θ (the tilt test). */
 export const muFromTilt = (deg: number) => Math.tan((deg * Math.PI) / 180);
 
-/** Margin asked of the available friction over the needed (a suggestion of 1.3 in the notes behind these checks; no code value exists). */
+/** Margin asked of the available friction over the needed (a suggestion of 1.3, docs/safety.md §2.2; no code value exists). */
 export const GRIP_MARGIN = 1.3;

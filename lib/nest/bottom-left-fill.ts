@@ -5,11 +5,12 @@
 // (Bennell & Oliveira 2008, §6); the position chosen is the vertex of that region where the shape's
 // left edge is lowest in x (along the length), then its bottom edge lowest in y. Holes left between earlier parts are feasible
 // regions like any other, so later, smaller parts fall into them (the "fill").
+import type { Box } from "@/lib/geometry/box";
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import { clipper } from "@/lib/geometry/clipper";
 import { innerFitRectangle } from "./inner-fit";
 import type { NoFitCache } from "./no-fit-cache";
-import { EXACT_FIT_STEPS, type IntBox, type ShapeSet } from "./shapes";
+import { EXACT_FIT_STEPS, type ShapeSet } from "./shapes";
 
 export interface PlacedShape {
   shape: number;
@@ -33,7 +34,7 @@ export function better(a: Position, b: Position | null): boolean {
  * Reference-point positions where `shape` overlaps none of `placed`: the inner-fit rectangle minus
  * the union of the placed shapes' no-fit polygons (Bennell & Oliveira 2008, §6). Empty when none.
  */
-export function feasibleRegion(lib: ClipperLib, nfps: NoFitCache, shape: number, placed: readonly PlacedShape[], ifp: IntBox): clipper.Paths {
+export function feasibleRegion(lib: ClipperLib, nfps: NoFitCache, shape: number, placed: readonly PlacedShape[], ifp: Box): clipper.Paths {
   const clip: clipper.Path[] = [];
   for (const p of placed) {
     const nfp = nfps.get(p.shape, shape);
@@ -68,7 +69,7 @@ export class Bin {
     private readonly lib: ClipperLib,
     private readonly set: ShapeSet,
     private readonly nfps: NoFitCache,
-    readonly container: IntBox,
+    readonly container: Box,
   ) {
     this.extentX = container.minX;
   }

@@ -1,7 +1,7 @@
 // Expands items into copies and checks the caller's item list.
 import type { Copy } from "./decoder";
 import { MAX_TOTAL_COPIES } from "./instance";
-import { ringArea } from "./ring";
+import { ringArea } from "@/lib/geometry/ring";
 import type { NestItem } from "./types";
 
 export function expandCopies(items: readonly NestItem[]): Copy[] {

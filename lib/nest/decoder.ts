@@ -3,10 +3,11 @@
 // Burke et al. 2006's multi-sheet use of BLF); a copy that fits nowhere is left out and counted.
 // Neighbouring sequences share a prefix, so a decode can start from the first changed position and
 // copy the earlier placements from the previous decode instead of searching for them again.
+import type { Box } from "@/lib/geometry/box";
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import { Bin } from "./bottom-left-fill";
 import type { NoFitCache } from "./no-fit-cache";
-import type { IntBox, ShapeSet } from "./shapes";
+import type { ShapeSet } from "./shapes";
 
 export interface Gene {
   /** Index into the list of copies. */
@@ -43,7 +44,7 @@ export interface DecoderSetup {
   nfps: NoFitCache;
   copies: Copy[];
   /** Usable region of every container, integer steps. */
-  container: IntBox;
+  container: Box;
   maxBins: number;
 }
 

@@ -1,7 +1,7 @@
 // Inner-fit polygon of a shape in a rectangular container (Bennell & Oliveira 2008, §5): the set
 // of reference-point positions that keep the shape inside. For a rectangle it is the rectangle
 // shrunk by the shape's bounding box.
-import type { IntBox } from "./shapes";
+import type { Box } from "@/lib/geometry/box";
 
 /**
  * Positions for a shape with bounding box `box` (in its own frame) inside `container`, widened by
@@ -9,7 +9,7 @@ import type { IntBox } from "./shapes";
  * Null when the shape does not fit; a shape exactly as long or wide as the container gets a
  * rectangle of zero width.
  */
-export function innerFitRectangle(container: IntBox, box: IntBox, slack = 0): IntBox | null {
+export function innerFitRectangle(container: Box, box: Box, slack = 0): Box | null {
   const r = {
     minX: container.minX - box.minX - slack,
     minY: container.minY - box.minY - slack,

@@ -1,8 +1,9 @@
 // Reads a 2D irregular strip-packing instance in either JSON key style used for the ESICUP
 // benchmarks (the ESICUP/OR-Datasets PascalCase conversion and the snake_case one of
-// Gardeyn, Vanden Berghe & Wauters 2025): see FAB.md §1.3.
-import type { Pt } from "@/lib/track";
-import { normaliseRing, signedArea, boundsOf } from "./ring";
+// Gardeyn, Vanden Berghe & Wauters 2025): see docs/fabrication.md §1.3.
+import type { Pt } from "@/lib/geometry/point";
+import { bounds, boxHeight, boxWidth } from "@/lib/geometry/box";
+import { normaliseRing, signedArea } from "@/lib/geometry/ring";
 import type { NestInstance, NestItem } from "./types";
 
 /** More copies than this is refused: a nest of that size is not what this tool is for. */
@@ -38,8 +39,8 @@ function readPolygon(raw: unknown, where: string): Pt[] {
   });
   const ring = normaliseRing(pts);
   if (ring.length < 3) fail(`${where}: a polygon needs at least 3 distinct points, it has ${ring.length}`);
-  const box = boundsOf(ring);
-  const size = Math.max(box.maxX - box.minX, box.maxY - box.minY);
+  const box = bounds(ring);
+  const size = Math.max(boxWidth(box), boxHeight(box));
   if (!(Math.abs(signedArea(ring)) > 1e-12 * size * size)) fail(`${where}: the polygon has zero area`);
   return ring;
 }

@@ -3,7 +3,7 @@
 // the NFP of B orbiting A is A ⊕ (−B), with B's reference point at its origin).
 //
 // Clipper's MinkowskiSum(pattern, path, closed) returns only the region swept while the pattern's
-// boundary moves along the path's boundary (FAB.md §6.3): for two squares an annulus. Every point
+// boundary moves along the path's boundary (docs/fabrication.md §6.3): for two squares an annulus. Every point
 // of A ⊕ P is either on that swept region, or in A + p (P's boundary wholly inside A), or in a + P
 // (A wholly inside P), for any fixed p ∈ P and a ∈ A; so the full sum is the union of the three.
 import type { ClipperLib } from "@/lib/geometry/clipper";

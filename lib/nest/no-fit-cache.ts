@@ -1,13 +1,14 @@
 // No-fit polygons per ordered pair of collision shapes (Bennell & Oliveira 2008), computed on
 // first use and kept for the rest of the run; copies of one item share them.
+import { boundsOfXY, union, type Box } from "@/lib/geometry/box";
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import type { clipper } from "@/lib/geometry/clipper";
 import { noFitPolygon } from "./minkowski";
-import { intBox, type IntBox, type ShapeSet } from "./shapes";
+import type { ShapeSet } from "./shapes";
 
 export interface Nfp {
   paths: clipper.Paths;
-  box: IntBox;
+  box: Box;
   /** Every edge of every ring as x1, y1, x2, y2 (for penetration depths). */
   edges: Float64Array;
 }
@@ -46,13 +47,7 @@ export class NoFitCache {
     let nfp = this.table[k];
     if (!nfp) {
       const paths = noFitPolygon(this.lib, this.set.shapes[fixed].stationary, this.set.shapes[moving].orbiting);
-      const boxes = paths.map(intBox);
-      const box = boxes.reduce((a, b) => ({
-        minX: Math.min(a.minX, b.minX),
-        minY: Math.min(a.minY, b.minY),
-        maxX: Math.max(a.maxX, b.maxX),
-        maxY: Math.max(a.maxY, b.maxY),
-      }));
+      const box = paths.map((p) => boundsOfXY(p)).reduce((a, b) => union(a, b));
       nfp = { paths, box, edges: edgeList(paths) };
       this.table[k] = nfp;
       this.computed++;

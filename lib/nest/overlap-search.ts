@@ -11,6 +11,7 @@
 // over the colliding parts, the penalties of the pairs still colliding grow (Voudouris & Tsang
 // 1999, "Guided local search and its application to the traveling salesman problem", EJOR
 // 113:469–499), so the search leaves local minima where a few large overlaps are stuck.
+import type { Box } from "@/lib/geometry/box";
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import { clamp, feasibleRegion, type PlacedShape } from "./bottom-left-fill";
 import type { Budget } from "./budget";
@@ -19,7 +20,7 @@ import { innerFitRectangle } from "./inner-fit";
 import type { Nfp, NoFitCache } from "./no-fit-cache";
 import { penetrationDepth } from "./penetration";
 import type { Random } from "./random";
-import { EXACT_FIT_STEPS, type IntBox, type ShapeSet } from "./shapes";
+import { EXACT_FIT_STEPS, type ShapeSet } from "./shapes";
 
 /** Positions of all copies, in integer steps; shape = index into the shape set. */
 export interface Arrangement {
@@ -35,7 +36,7 @@ export interface OverlapSetup {
   copies: readonly Copy[];
   /** Allowed shape indices (rotations) of each item. */
   shapesOf: readonly (readonly number[])[];
-  container: IntBox;
+  container: Box;
   rng: Random;
 }
 
@@ -83,9 +84,9 @@ export class OverlapSearch {
   private readonly rowW: Float64Array;
   private readonly rowF: Float64Array;
   private readonly rowSign: Int8Array;
-  private readonly ifps: (IntBox | null)[];
+  private readonly ifps: (Box | null)[];
   private readonly allowed: number[][];
-  private readonly slackIfps: (IntBox | null)[];
+  private readonly slackIfps: (Box | null)[];
 
   constructor(
     private readonly s: OverlapSetup,
@@ -279,7 +280,7 @@ export class OverlapSearch {
   }
 
   /** Coordinate descent: the step doubles after a success and halves after a failure, down to one integer step. */
-  private descend(start: { v: number; x: number; y: number }, f: IntBox, step0: number) {
+  private descend(start: { v: number; x: number; y: number }, f: Box, step0: number) {
     let { v, x, y } = start;
     const maxStep = Math.max(1, Math.round(step0));
     let step = maxStep;

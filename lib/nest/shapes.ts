@@ -6,19 +6,14 @@
 // Clipper drops. The stationary copy of each shape (the one the no-fit polygons are built around)
 // is therefore shrunk by EXACT_FIT_STEPS integer steps, which opens such regions to one step's
 // width. The price is a possible overlap of that depth, far below any cutting tolerance (scale.ts).
-import type { NestItem } from "./types";
-import { ringArea, rotateRing } from "./ring";
+import { boundsOfXY, type Box } from "@/lib/geometry/box";
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import { clipper, toPath } from "@/lib/geometry/clipper";
+import { rotateRing } from "@/lib/geometry/place";
+import { ringArea } from "@/lib/geometry/ring";
+import type { NestItem } from "./types";
 
 export const EXACT_FIT_STEPS = 1;
-
-export interface IntBox {
-  minX: number;
-  minY: number;
-  maxX: number;
-  maxY: number;
-}
 
 export interface Shape {
   item: number;
@@ -28,8 +23,8 @@ export interface Shape {
   stationary: clipper.Path;
   /** Inflated by spacing/2: used as the moving polygon of a no-fit polygon and for containment. */
   orbiting: clipper.Path;
-  /** Bounding box of `orbiting`. */
-  box: IntBox;
+  /** Bounding box of `orbiting`, in integer steps. */
+  box: Box;
 }
 
 export interface ShapeSet {
@@ -39,17 +34,6 @@ export interface ShapeSet {
   shapeOf: number[][];
   /** Area of each item as given (not inflated), in the input's units². */
   itemArea: number[];
-}
-
-export function intBox(path: clipper.ReadonlyPath): IntBox {
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
-  for (const p of path) {
-    if (p.x < minX) minX = p.x;
-    if (p.y < minY) minY = p.y;
-    if (p.x > maxX) maxX = p.x;
-    if (p.y > maxY) maxY = p.y;
-  }
-  return { minX, minY, maxX, maxY };
 }
 
 /** Offset of a simple polygon; keeps the outer ring of largest area (a hole closed up is filled). */
@@ -80,7 +64,7 @@ export function buildShapes(lib: ClipperLib, items: readonly NestItem[], scale: 
       const orbiting = offsetPolygon(lib, exact, half);
       // Clipper's mitred offset leaves edges one step long at the corners; they only breed slivers.
       const stationary = lib.cleanPolygon(offsetPolygon(lib, exact, half - EXACT_FIT_STEPS), 1.5);
-      shapes.push({ item: i, rotation, stationary, orbiting, box: intBox(orbiting) });
+      shapes.push({ item: i, rotation, stationary, orbiting, box: boundsOfXY(orbiting) });
       return shapes.length - 1;
     }),
   );

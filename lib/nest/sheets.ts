@@ -14,7 +14,8 @@ import { LateAcceptance } from "./late-acceptance";
 import { neighbour } from "./moves";
 import { NoFitCache } from "./no-fit-cache";
 import { seededRandom } from "./random";
-import { boundsOf, normaliseRing } from "./ring";
+import { bounds, boxHeight, boxWidth } from "@/lib/geometry/box";
+import { normaliseRing } from "@/lib/geometry/ring";
 import { scaleForExtent } from "./scale";
 import { buildShapes } from "./shapes";
 import type { SheetNestInput, SheetNestResult, SheetPlacement } from "./types";
@@ -55,11 +56,11 @@ export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResu
   const active: number[] = [];
   copies.forEach((c, k) => {
     if (fitting[c.item].length > 0) return active.push(k);
-    const b = boundsOf(items[c.item].polygon);
+    const b = bounds(items[c.item].polygon);
     unplaced.push({
       id: items[c.item].id,
       copy: c.index,
-      reason: `${items[c.item].id} is ${fmt(b.maxX - b.minX)} × ${fmt(b.maxY - b.minY)} ${units}; the sheet's usable area is ${usableW} × ${usableH} ${units} in every allowed rotation`,
+      reason: `${items[c.item].id} is ${fmt(boxWidth(b))} × ${fmt(boxHeight(b))} ${units}; the sheet's usable area is ${usableW} × ${usableH} ${units} in every allowed rotation`,
     });
   });
 
@@ -70,7 +71,7 @@ export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResu
   // Fewer sheets first, then the last sheet as short as possible; a copy left out costs more than a sheet.
   const cost = (d: Decoded) => {
     const last = d.bins[d.bins.length - 1];
-    const lastUse = last ? (last.extentX - container.minX) / (container.maxX - container.minX) : 0;
+    const lastUse = last ? (last.extentX - container.minX) / boxWidth(container) : 0;
     return d.unplacedArea / sheetArea + d.unplacedCount + Math.max(0, d.bins.length - 1) + lastUse;
   };
 

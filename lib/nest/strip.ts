@@ -16,7 +16,9 @@ import { greedyLayout } from "./greedy";
 import { DEFAULT_SEPARATION, OverlapSearch, type Arrangement, type SeparationTuning } from "./overlap-search";
 import { seededRandom } from "./random";
 import { NoFitCache } from "./no-fit-cache";
-import { boundsOf, normaliseRing, ringArea, rotateRing } from "./ring";
+import { bounds, boxHeight, boxWidth } from "@/lib/geometry/box";
+import { rotateRing } from "@/lib/geometry/place";
+import { normaliseRing, ringArea } from "@/lib/geometry/ring";
 import { scaleForExtent } from "./scale";
 import { buildShapes } from "./shapes";
 import type { Placement, StripNestInput, StripNestResult } from "./types";
@@ -57,21 +59,21 @@ export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEF
   const items = input.items.map((it) => ({ ...it, polygon: normaliseRing(it.polygon) }));
   const copies = expandCopies(items);
   const total = copies.length;
-  const boxes = items.map((it) => it.rotations.map((r) => boundsOf(rotateRing(it.polygon, r))));
+  const boxes = items.map((it) => it.rotations.map((r) => bounds(rotateRing(it.polygon, r))));
 
   // Rotations that fit across the strip; an item with none cannot be nested at all.
-  const usable = items.map((_, i) => boxes[i].map((b, k) => (b.maxY - b.minY <= height * (1 + 1e-9) ? k : -1)).filter((k) => k >= 0));
+  const usable = items.map((_, i) => boxes[i].map((b, k) => (boxHeight(b) <= height * (1 + 1e-9) ? k : -1)).filter((k) => k >= 0));
   usable.forEach((ks, i) => {
     if (ks.length > 0) return;
     const b = boxes[i][0];
-    throw new Error(`${items[i].id} is ${fmt(b.maxX - b.minX)} × ${fmt(b.maxY - b.minY)}; it does not fit across the strip (${fmt(height)}) in any allowed rotation`);
+    throw new Error(`${items[i].id} is ${fmt(boxWidth(b))} × ${fmt(boxHeight(b))}; it does not fit across the strip (${fmt(height)}) in any allowed rotation`);
   });
   if (total === 0) return { utilisation: 0, length: 0, placed: 0, seconds: budget.elapsed(), iterations: 0, cancelled: budget.aborted, placements: [] };
 
   const lib = await loadClipper();
   const area = items.map((it) => ringArea(it.polygon));
   const partArea = copies.reduce((s, c) => s + area[c.item], 0);
-  const widthOf = (i: number) => Math.min(...usable[i].map((k) => boxes[i][k].maxX - boxes[i][k].minX)) + spacing;
+  const widthOf = (i: number) => Math.min(...usable[i].map((k) => boxWidth(boxes[i][k]))) + spacing;
   const sumWidths = copies.reduce((s, c) => s + widthOf(c.item), 0);
   // The first layout's strip: long enough in practice, short enough for a fine integer scale.
   // (Bottom-left-fill alone packs well over 2/3 of the area, so 1.5 × area / height plus the widest

@@ -1,6 +1,9 @@
 // The nesting engine's public types. Coordinates: x along the sheet's or strip's length, y across.
-// A placed copy's outline is rotate(item.polygon, rotation° about (0, 0)) and then translate (x, y).
-import type { Ring } from "@/lib/cut/types";
+// A placed copy's outline is rotate(item.polygon, rotation° about (0, 0)) and then translate (x, y):
+// placeRing in lib/geometry/place.ts. The part builder (lib/cut) imports these types; the nester
+// imports nothing from lib/cut.
+import type { Pose } from "@/lib/geometry/place";
+import type { Ring } from "@/lib/geometry/ring";
 
 export interface NestItem {
   id: string;
@@ -32,15 +35,11 @@ export interface NestControl {
   maxIterations?: number;
 }
 
-export interface Placement {
+/** A copy's pose: rotation about the item's own origin first, then the translation. */
+export interface Placement extends Pose {
   id: string;
   /** 0-based copy index. */
   copy: number;
-  /** Degrees, about the item's own origin, applied first. */
-  rotation: number;
-  /** Translation applied after the rotation. */
-  x: number;
-  y: number;
 }
 
 export interface SheetPlacement extends Placement {

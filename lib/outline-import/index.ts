@@ -24,7 +24,7 @@ import { centroid, starShapedAbout, type Bounds, type StarResult } from "./geome
 import { detectKind, readText, type FileInput } from "./sniff";
 import { readSvg } from "./svg";
 
-export { MAX_FILE_BYTES, MAX_OUTPUT_POINTS } from "./common";
+export { MAX_OUTPUT_POINTS } from "./common";
 export type { Bounds, FileInput, StarResult };
 
 export interface ImportOptions {

@@ -1,249 +1,175 @@
-// The SVG path data reader: the grammar of SVG 1.1 §8.3.9 ("The grammar for path data") — commands
-// M L H V C S Q T A Z in absolute and relative form, implicit repeats (extra pairs after M are
-// line-tos), numbers run together ("1-2", "0.5.5"), arc flags written without separators
-// ("a1 1 0 00 1 1"), the S/T control-point reflection of §8.3.6/§8.3.7 and, after Z, a new
-// subpath starting at the closed one's first point (§8.3.3). Any error in the data refuses the
-// path, naming the character where it went wrong (renderers draw up to the error; an importer that
-// did that would hand the engine half a wheel). Curves are flattened after the transform m.
+// Path data (SVG 1.1 §8.3) is parsed by svg-pathdata: its grammar, implicit repeats, numbers run
+// together ("1-2", "0.5.5") and arc flags without separators ("a1 1 0 00 1 1"), and relative
+// commands made absolute (toAbs). Kept here: the command budget, the refusal of any error in the
+// data naming the character (renderers draw up to the error; an importer that did that would hand
+// the engine half a wheel), the S/T control-point reflection of §8.3.6/§8.3.7, the new subpath
+// after Z at the closed one's first point (§8.3.3), and flattening after the transform m with our
+// tolerance (curves.ts): arcs stay exact arcs here rather than svg-pathdata's cubic approximations.
 
+import { SVGPathData, type SVGCommand } from "svg-pathdata";
 import { fail, MAX_PATH_COMMANDS, PointBudget, type Pt, type Subpath } from "./common";
 import { endpointToCentre, flattenArc, flattenCubic, flattenQuad } from "./curves";
 import { apply, type Affine } from "./geometry";
-
-export type { Subpath };
 
 export interface PathCounter {
   commands: number;
 }
 
-const isDigit = (c: number) => c >= 48 && c <= 57;
-const isWsp = (c: number) => c === 32 || c === 9 || c === 10 || c === 13 || c === 12;
+const COMMAND_LETTER = /[MmLlHhVvCcSsQqTtAaZz]/;
 
-/** A cursor over a string of SVG numbers (path data, points lists, transform arguments). */
-export class NumberScanner {
-  i = 0;
-  constructor(readonly s: string) {}
-  get done(): boolean {
-    return this.i >= this.s.length;
+/** Counts the command letters of d against the file's budget before anything is parsed. */
+function countCommands(d: string, counter: PathCounter): void {
+  for (let i = 0; i < d.length; i++)
+    if (COMMAND_LETTER.test(d[i]) && ++counter.commands > MAX_PATH_COMMANDS)
+      fail(`The file has more than ${MAX_PATH_COMMANDS.toLocaleString("en-US")} path commands, the most the importer reads; simplify the drawing.`);
+}
+
+/** svg-pathdata's SyntaxError as what went wrong and the 0-based index where. */
+function describeSyntaxError(message: string, d: string): { what: string; at: number } {
+  let m: RegExpExecArray | null;
+  if ((m = /^Unexpected character "(.*)" at index (\d+)\. Command cannot follow comma/.exec(message))) return { what: `unexpected "${m[1]}" after a comma`, at: Number(m[2]) };
+  if ((m = /^Unexpected character "(.*)" at index (\d+)/.exec(message))) return { what: `unexpected "${m[1]}"`, at: Number(m[2]) };
+  if ((m = /^Unterminated command at index (\d+)/.exec(message))) return { what: "expected a number", at: Number(m[1]) };
+  if (/^Unterminated command at the path end/.test(message)) return { what: "expected a number", at: d.length };
+  if ((m = /^Invalid number ending at (\d+)/.exec(message))) return { what: "a number that cannot be read", at: Math.max(0, Number(m[1]) - 1) };
+  if ((m = /^Expected positive number, got "(.*)" at index "(\d+)"/.exec(message))) return { what: "an arc radius must not be negative", at: Math.max(0, Number(m[2]) - m[1].length) };
+  if ((m = /^Expected a flag, got "(.*)" at index "(\d+)"/.exec(message))) return { what: "expected an arc flag (0 or 1)", at: Math.max(0, Number(m[2]) - m[1].length) };
+  return { what: "the path data cannot be read", at: 0 };
+}
+
+/** The commands of d, absolute, or a refusal naming the character where the data goes wrong. */
+function parsePath(d: string, label: string): SVGCommand[] {
+  const bad = (what: string, at: number): never =>
+    fail(`${label}: ${what} at character ${at + 1} of its path data (d="${d.slice(Math.max(0, at - 12), at + 12)}").`);
+  const first = d.search(/[^ \t\r\n\f]/);
+  if (first >= 0 && d[first] !== "M" && d[first] !== "m")
+    bad(COMMAND_LETTER.test(d[first]) ? "path data must begin with a moveto (M or m)" : `unexpected "${d[first]}"`, first);
+  let commands: SVGCommand[];
+  try {
+    commands = new SVGPathData(SVGPathData.parse(d)).toAbs().commands;
+  } catch (e) {
+    const { what, at } = describeSyntaxError(e instanceof Error ? e.message : String(e), d);
+    return bad(what, at);
   }
-  skipWsp(): void {
-    while (this.i < this.s.length && isWsp(this.s.charCodeAt(this.i))) this.i++;
+  for (const c of commands) for (const v of Object.values(c)) if (typeof v === "number" && !Number.isFinite(v)) bad("a number out of range", 0);
+  return commands;
+}
+
+/** Draws absolute path commands as flattened subpaths mapped by m, tracking the current point. */
+class PathPen {
+  readonly out: Subpath[] = [];
+  private cur: Pt = [0, 0];
+  private start: Pt = [0, 0];
+  private ctrl: Pt | null = null; // last control point, for S (after C/S) and T (after Q/T)
+  private ctrlKind: "cubic" | "quad" | null = null;
+  private sub: Subpath | null = null;
+  index = 0;
+  get x(): number {
+    return this.cur[0];
   }
-  /** Whitespace, at most one comma, whitespace. */
-  skipCommaWsp(): void {
-    this.skipWsp();
-    if (this.s.charCodeAt(this.i) === 44) {
-      this.i++;
-      this.skipWsp();
-    }
+  get y(): number {
+    return this.cur[1];
   }
-  atNumber(): boolean {
-    const c = this.s.charCodeAt(this.i);
-    if (isDigit(c)) return true;
-    if (c === 43 || c === 45) {
-      const d = this.s.charCodeAt(this.i + 1);
-      return isDigit(d) || (d === 46 && isDigit(this.s.charCodeAt(this.i + 2)));
-    }
-    return c === 46 && isDigit(this.s.charCodeAt(this.i + 1));
+  constructor(
+    private readonly m: Affine,
+    private readonly tol: number,
+    private readonly budget: PointBudget,
+    private readonly label: string,
+  ) {}
+  private readonly where = () => `${this.label}, command ${this.index + 1},`;
+  private t(q: Pt): Pt {
+    return apply(this.m, q[0], q[1]);
   }
-  /** A number at the cursor, or null (cursor unchanged). */
-  number(): number | null {
-    const s = this.s;
-    let j = this.i;
-    if (s.charCodeAt(j) === 43 || s.charCodeAt(j) === 45) j++;
-    let digits = 0;
-    while (isDigit(s.charCodeAt(j))) {
-      j++;
-      digits++;
-    }
-    if (s.charCodeAt(j) === 46) {
-      j++;
-      while (isDigit(s.charCodeAt(j))) {
-        j++;
-        digits++;
-      }
-    }
-    if (digits === 0) return null;
-    const e = s.charCodeAt(j);
-    if (e === 101 || e === 69) {
-      let k = j + 1;
-      if (s.charCodeAt(k) === 43 || s.charCodeAt(k) === 45) k++;
-      if (isDigit(s.charCodeAt(k))) {
-        while (isDigit(s.charCodeAt(k))) k++;
-        j = k;
-      }
-    }
-    const v = Number(s.slice(this.i, j));
-    if (!Number.isFinite(v)) return null;
-    this.i = j;
-    return v;
+  private current(): Subpath {
+    if (!this.sub) this.moveTo(this.cur, false);
+    return this.sub!;
   }
-  /** An arc flag: a single '0' or '1'. */
-  flag(): boolean | null {
-    const c = this.s.charCodeAt(this.i);
-    if (c === 48 || c === 49) {
-      this.i++;
-      return c === 49;
+  /** The control point a smooth S or T reflects (SVG 1.1 §8.3.6–8.3.7), or the current point. */
+  private reflected(kind: "cubic" | "quad"): Pt {
+    const c = this.ctrl;
+    return c && this.ctrlKind === kind ? [2 * this.cur[0] - c[0], 2 * this.cur[1] - c[1]] : this.cur;
+  }
+  private remember(ctrl: Pt | null, kind: "cubic" | "quad" | null): void {
+    this.ctrl = ctrl;
+    this.ctrlKind = kind;
+  }
+  flush(): void {
+    if (this.sub && this.sub.points.length >= 2) this.out.push(this.sub);
+    this.sub = null;
+  }
+  moveTo(p: Pt, isStart = true): void {
+    this.flush();
+    this.budget.take(1, this.where);
+    this.sub = { points: [this.t(p)], closed: false, arcs: 0, curves: 0, label: `${this.label} subpath ${this.out.length + 1}` };
+    if (isStart) this.cur = this.start = p;
+    this.remember(null, null);
+  }
+  lineTo(p: Pt): void {
+    const s = this.current();
+    this.budget.take(1, this.where);
+    s.points.push(this.t(p));
+    this.cur = p;
+    this.remember(null, null);
+  }
+  cubic(c1: Pt | null, c2: Pt, p: Pt): void {
+    const from = this.cur;
+    const k1 = c1 ?? this.reflected("cubic");
+    const s = this.current();
+    s.points.push(...flattenCubic(this.t(from), this.t(k1), this.t(c2), this.t(p), this.tol, this.budget, this.where));
+    s.curves++;
+    this.cur = p;
+    this.remember(c2, "cubic");
+  }
+  quad(c1: Pt | null, p: Pt): void {
+    const k1 = c1 ?? this.reflected("quad");
+    const s = this.current();
+    s.points.push(...flattenQuad(this.t(this.cur), this.t(k1), this.t(p), this.tol, this.budget, this.where));
+    s.curves++;
+    this.cur = p;
+    this.remember(k1, "quad");
+  }
+  arc(c: { rX: number; rY: number; xRot: number; lArcFlag: number; sweepFlag: number }, p: Pt): void {
+    const e = endpointToCentre(this.cur[0], this.cur[1], c.rX, c.rY, c.xRot, c.lArcFlag === 1, c.sweepFlag === 1, p[0], p[1]);
+    if (e.kind === "line") return this.lineTo(p);
+    if (e.kind === "arc") {
+      const s = this.current();
+      const pts = flattenArc(e.arc, this.m, this.tol, this.budget, this.where);
+      pts[pts.length - 1] = this.t(p);
+      s.points.push(...pts);
+      s.arcs++;
+      this.cur = p;
     }
-    return null;
+    this.remember(null, null);
+  }
+  /** Z: closes the subpath; the next one starts at its first point (SVG 1.1 §8.3.3). */
+  close(): void {
+    if (this.sub) {
+      this.sub.closed = true;
+      this.flush();
+    }
+    this.cur = this.start;
+    this.remember(null, null);
   }
 }
 
 /** Flattened subpaths of one path's d attribute, mapped by m. */
 export function pathToSubpaths(d: string, m: Affine, tol: number, budget: PointBudget, label: string, counter: PathCounter): Subpath[] {
-  const sc = new NumberScanner(d);
-  const out: Subpath[] = [];
-  let cur: Pt = [0, 0];
-  let start: Pt = [0, 0];
-  let ctrl: Pt | null = null; // last control point, for S (after C/S) and T (after Q/T)
-  let ctrlKind: "cubic" | "quad" | null = null;
-  const st: { sub: Subpath | null } = { sub: null };
-  const bad = (what: string): never => fail(`${label}: ${what} at character ${sc.i + 1} of its path data (d="${d.slice(Math.max(0, sc.i - 12), sc.i + 12)}").`);
-  const where = () => `${label}, command at character ${sc.i + 1},`;
-  const flush = () => {
-    if (st.sub && st.sub.points.length >= 2) out.push(st.sub);
-    st.sub = null;
-  };
-  const begin = (p: Pt) => {
-    flush();
-    budget.take(1, where);
-    st.sub = { points: [apply(m, p[0], p[1])], closed: false, arcs: 0, curves: 0, label: `${label} subpath ${out.length + 1}` };
-  };
-  const current = (): Subpath => {
-    if (!st.sub) begin(cur);
-    return st.sub as Subpath;
-  };
-  const num = (): number => {
-    sc.skipCommaWsp();
-    const v = sc.number();
-    if (v === null) bad("expected a number");
-    return v as number;
-  };
-  const flag = (): boolean => {
-    sc.skipCommaWsp();
-    const v = sc.flag();
-    if (v === null) bad("expected an arc flag (0 or 1)");
-    return v as boolean;
-  };
-  const lineTo = (p: Pt) => {
-    const s = current();
-    budget.take(1, where);
-    s.points.push(apply(m, p[0], p[1]));
-    cur = p;
-  };
-  const more = (): boolean => {
-    const save = sc.i;
-    sc.skipCommaWsp();
-    if (sc.atNumber()) return true;
-    sc.i = save;
-    return false;
-  };
-
-  sc.skipWsp();
-  let first = true;
-  while (!sc.done) {
-    const ch = d[sc.i];
-    if (!/[MmLlHhVvCcSsQqTtAaZz]/.test(ch)) bad(`unexpected "${ch}"`);
-    if (first && ch !== "M" && ch !== "m") bad("path data must begin with a moveto (M or m)");
-    first = false;
-    sc.i++;
-    if (++counter.commands > MAX_PATH_COMMANDS)
-      fail(`The file has more than ${MAX_PATH_COMMANDS.toLocaleString("en-US")} path commands, the most the importer reads; simplify the drawing.`);
-    const rel = ch === ch.toLowerCase();
-    const C = ch.toUpperCase();
-    if (C === "Z") {
-      if (st.sub) {
-        st.sub.closed = true;
-        flush();
-      }
-      cur = start;
-      ctrl = null;
-      ctrlKind = null;
-      sc.skipWsp();
-      continue;
-    }
-    let firstSet = true;
-    do {
-      const ox = rel ? cur[0] : 0;
-      const oy = rel ? cur[1] : 0;
-      let nextCtrl: Pt | null = null;
-      let nextKind: "cubic" | "quad" | null = null;
-      switch (C) {
-        case "M": {
-          const p: Pt = [ox + num(), oy + num()];
-          if (firstSet) {
-            begin(p);
-            cur = p;
-            start = p;
-          } else lineTo(p);
-          break;
-        }
-        case "L":
-          lineTo([ox + num(), oy + num()]);
-          break;
-        case "H":
-          lineTo([ox + num(), cur[1]]);
-          break;
-        case "V":
-          lineTo([cur[0], oy + num()]);
-          break;
-        case "C":
-        case "S": {
-          let c1: Pt;
-          if (C === "C") c1 = [ox + num(), oy + num()];
-          else c1 = ctrl && ctrlKind === "cubic" ? [2 * cur[0] - ctrl[0], 2 * cur[1] - ctrl[1]] : cur;
-          const c2: Pt = [ox + num(), oy + num()];
-          const p: Pt = [ox + num(), oy + num()];
-          const s = current();
-          const t = (q: Pt) => apply(m, q[0], q[1]);
-          s.points.push(...flattenCubic(t(cur), t(c1), t(c2), t(p), tol, budget, where));
-          s.curves++;
-          cur = p;
-          nextCtrl = c2;
-          nextKind = "cubic";
-          break;
-        }
-        case "Q":
-        case "T": {
-          let c1: Pt;
-          if (C === "Q") c1 = [ox + num(), oy + num()];
-          else c1 = ctrl && ctrlKind === "quad" ? [2 * cur[0] - ctrl[0], 2 * cur[1] - ctrl[1]] : cur;
-          const p: Pt = [ox + num(), oy + num()];
-          const s = current();
-          const t = (q: Pt) => apply(m, q[0], q[1]);
-          s.points.push(...flattenQuad(t(cur), t(c1), t(p), tol, budget, where));
-          s.curves++;
-          cur = p;
-          nextCtrl = c1;
-          nextKind = "quad";
-          break;
-        }
-        case "A": {
-          const rx = num();
-          const ry = num();
-          const rot = num();
-          const large = flag();
-          const sweep = flag();
-          const p: Pt = [ox + num(), oy + num()];
-          const e = endpointToCentre(cur[0], cur[1], rx, ry, rot, large, sweep, p[0], p[1]);
-          if (e.kind === "line") lineTo(p);
-          else if (e.kind === "arc") {
-            const s = current();
-            const pts = flattenArc(e.arc, m, tol, budget, where);
-            pts[pts.length - 1] = apply(m, p[0], p[1]);
-            s.points.push(...pts);
-            s.arcs++;
-            cur = p;
-          }
-          break;
-        }
-      }
-      ctrl = nextCtrl;
-      ctrlKind = nextKind;
-      firstSet = false;
-    } while (more());
-    sc.skipWsp();
+  countCommands(d, counter);
+  const commands = parsePath(d, label);
+  const pen = new PathPen(m, tol, budget, label);
+  for (; pen.index < commands.length; pen.index++) {
+    const c = commands[pen.index];
+    if (c.type === SVGPathData.CLOSE_PATH) pen.close();
+    else if (c.type === SVGPathData.MOVE_TO) pen.moveTo([c.x, c.y]);
+    else if (c.type === SVGPathData.LINE_TO) pen.lineTo([c.x, c.y]);
+    else if (c.type === SVGPathData.HORIZ_LINE_TO) pen.lineTo([c.x, pen.y]);
+    else if (c.type === SVGPathData.VERT_LINE_TO) pen.lineTo([pen.x, c.y]);
+    else if (c.type === SVGPathData.CURVE_TO) pen.cubic([c.x1, c.y1], [c.x2, c.y2], [c.x, c.y]);
+    else if (c.type === SVGPathData.SMOOTH_CURVE_TO) pen.cubic(null, [c.x2, c.y2], [c.x, c.y]);
+    else if (c.type === SVGPathData.QUAD_TO) pen.quad([c.x1, c.y1], [c.x, c.y]);
+    else if (c.type === SVGPathData.SMOOTH_QUAD_TO) pen.quad(null, [c.x, c.y]);
+    else if (c.type === SVGPathData.ARC) pen.arc(c, [c.x, c.y]);
   }
-  flush();
-  return out;
+  pen.flush();
+  return pen.out;
 }

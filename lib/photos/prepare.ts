@@ -5,10 +5,9 @@
 // (GPS included), with a 480 px thumbnail.
 import sharp from "sharp";
 import { AppError } from "@/lib/server/errors";
+import { PHOTO_MAX_BYTES } from "@/lib/validation/limits";
 
-export const PHOTO_MAX_BYTES = 15 * 1024 * 1024;
 export const PHOTO_MAX_PIXELS = 40_000_000;
-export const PHOTO_MAX_COUNT = 6;
 export const THUMB_WIDTH = 480;
 
 type Kind = "jpeg" | "png" | "webp";

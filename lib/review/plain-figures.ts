@@ -39,7 +39,7 @@ export function plainFigures(r: Checked): PlainFigure[] {
     {
       key: "grip",
       label: "Grip needed",
-      // Indicative dry static friction, SAFETY.md §2.2: rubber on dry concrete about 1.0 and wood on
+      // Indicative dry static friction, docs/safety.md §2.2: rubber on dry concrete about 1.0 and wood on
       // wood about 0.5 (S. A. Hill, "Coefficients of friction"; textbook tables); they vary with the
       // materials, dust and wet, so the shop tests the real pair.
       text:

@@ -12,7 +12,7 @@ import { mmPerUnit } from "@/lib/cut/units";
 import { axleLineY, followerAt, lowerAngleAt, trackYAtX, wheelAngleAt } from "@/lib/studio/motion";
 import { rayReach, tileTrack } from "@/lib/studio/view-math";
 import type { Pt, SolvedGeometry } from "@/lib/track";
-import { personOutline, PERSON_HEIGHT_MM } from "./person";
+import { personOutline } from "./person";
 
 export type EndTreatment = "flat" | "half" | "scale";
 
@@ -264,4 +264,3 @@ export function placeOfPosition(scene: RunScene, p: number): number {
   return scene.kind === "pair" ? 360 * t : scene.rollStart + t * (scene.rollEnd - scene.rollStart);
 }
 
-export { PERSON_HEIGHT_MM };

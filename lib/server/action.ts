@@ -14,7 +14,6 @@ export interface ActionState {
   values?: Record<string, string>;
 }
 
-export const initialActionState: ActionState = {};
 
 const SECRET_FIELDS = new Set(["password", "newPassword", "currentPassword", "newPasswordAgain"]);
 

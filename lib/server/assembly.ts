@@ -7,16 +7,13 @@ import type { AssemblySheet } from "@/lib/assembly/sheet";
 import type { CutPlanRow } from "@/db/queries/cut-plans";
 import { jobForPlan, requireStoredPlan } from "./cut-plans";
 import { requireRevisionAccess, requireUser } from "./dal";
-import { AppError } from "./errors";
+import { AppError, notFoundAs } from "./errors";
 
 /** The plan and the caller's access to its project: any member; 404 for the rest, as if it did not exist. */
 export async function requireSheetAccess(cutPlanId: number) {
   await requireUser();
   const plan = await requireStoredPlan(cutPlanId);
-  const access = await requireRevisionAccess(plan.revisionId).catch((e) => {
-    if (e instanceof AppError && e.kind === "not_found") throw new AppError("not_found", "No such cut plan.");
-    throw e;
-  });
+  const access = await requireRevisionAccess(plan.revisionId).catch(notFoundAs("No such cut plan."));
   return { ...access, plan };
 }
 
@@ -33,6 +30,7 @@ export async function assemblySheetFor(plan: CutPlanRow, access: Awaited<ReturnT
   return buildAssemblySheet({
     job,
     cutPlanId: plan.id,
+    cutPlanNumber: plan.number,
     project: { name: project?.name ?? "Project", site: project?.site ?? "", client: project?.clientOrganisation ?? null },
     approval: job.approval ?? null,
     shop,

@@ -1,15 +1,19 @@
 import "server-only";
 // People's build-log entries: who may write what, the form read with its size cap, each photo
-// checked and cleaned (lib/server/photos.ts) before anything is stored.
-import { insertLogEntry } from "@/db/queries/build-log";
+// checked and cleaned (lib/photos/prepare.ts) before anything is stored. An entry with photos is
+// written object-first: every photo (and its thumbnail) goes to the store, then the entry and its
+// photo rows go in one transaction; if that fails the objects are removed again. So there is never a
+// row without its object, and an object left without a row only if the store itself fails the
+// clean-up (logged).
+import { randomUUID } from "node:crypto";
+import { insertLogEntry, type StoredPhoto } from "@/db/queries/build-log";
 import { logEntrySchema } from "@/lib/validation/build-log";
 import type { ProjectAccess } from "./dal";
 import { AppError } from "./errors";
 import { formBody } from "./form-body";
-import { PHOTO_MAX_BYTES, PHOTO_MAX_COUNT, preparePhoto, type PreparedPhoto } from "@/lib/photos/prepare";
-
-/** The whole form: every photo at its largest, and room for the fields. */
-export const LOG_FORM_LIMIT = PHOTO_MAX_COUNT * PHOTO_MAX_BYTES + 1024 * 1024;
+import { PHOTO_EXTENSION, preparePhoto, type PreparedPhoto } from "@/lib/photos/prepare";
+import { deleteObject, putObject } from "./storage";
+import { LOG_FORM_LIMIT, PHOTO_MAX_COUNT } from "@/lib/validation/limits";
 
 /** The fabricator, the installer and an admin write any kind; the client adds notes (text only). */
 export function mayWrite(access: ProjectAccess, kind: string, withPhotos: boolean): void {
@@ -33,5 +37,23 @@ export async function addLogEntry(access: ProjectAccess, request: Request): Prom
   if (files.length > PHOTO_MAX_COUNT) throw new AppError("bad_request", `At most ${PHOTO_MAX_COUNT} photos in one entry.`, { photos: [`At most ${PHOTO_MAX_COUNT}.`] });
   const photos: PreparedPhoto[] = [];
   for (const file of files) photos.push(await preparePhoto(Buffer.from(await file.arrayBuffer()), file.name));
-  return insertLogEntry(access.user, access.projectId, parsed.data, photos);
+  return storeWithPhotos(photos, access.projectId, (stored) => insertLogEntry(access.user, access.projectId, parsed.data, stored));
+}
+
+/** Puts each photo and its thumbnail in the store, then runs `write` with their keys; on any failure the stored objects are removed. */
+async function storeWithPhotos<T>(photos: PreparedPhoto[], projectId: number, write: (stored: StoredPhoto[]) => Promise<T>): Promise<T> {
+  const stored: StoredPhoto[] = [];
+  try {
+    for (const photo of photos) {
+      const stem = `projects/${projectId}/photos/${randomUUID()}`;
+      const item = { photo, key: `${stem}.${PHOTO_EXTENSION[photo.contentType]}`, thumbKey: `${stem}-thumb.webp` };
+      stored.push(item);
+      await putObject(item.key, photo.data, photo.contentType);
+      await putObject(item.thumbKey, photo.thumb, photo.thumbType);
+    }
+    return await write(stored);
+  } catch (error) {
+    await Promise.all(stored.flatMap((s) => [deleteObject(s.key), deleteObject(s.thumbKey)]));
+    throw error;
+  }
 }

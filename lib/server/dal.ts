@@ -6,15 +6,13 @@ import { redirect } from "next/navigation";
 import { cache } from "react";
 import { auth } from "@/auth";
 import { db } from "@/db";
+import { findDesign, findRevision } from "@/db/queries/designs";
+import type { CurrentUser } from "@/db/queries/current-user";
+import { findReview } from "@/db/queries/reviews";
 import { projectMembers, projects, users, type MemberRole, type UserRole } from "@/db/schema";
-import { AppError } from "./errors";
+import { AppError, notFoundAs } from "./errors";
 
-export interface CurrentUser {
-  id: number;
-  email: string;
-  name: string;
-  role: UserRole;
-}
+export type { CurrentUser };
 
 /** The signed-in, active user, read fresh from the database, or null. */
 export const getCurrentUser = cache(async (): Promise<CurrentUser | null> => {
@@ -85,26 +83,18 @@ export async function requirePageUser(): Promise<CurrentUser> {
 /** Access to a design goes through its project: the same rules, and 404 for what one cannot see. */
 export async function requireDesignAccess(designId: number, need: "view" | "manage" = "view") {
   await requireUser();
-  const { findDesign } = await import("@/db/queries/designs");
   const design = await findDesign(designId);
   if (!design) throw new AppError("not_found", "No such design.");
-  const access = await requireProjectAccess(design.projectId, need).catch((e) => {
-    if (e instanceof AppError && e.kind === "not_found") throw new AppError("not_found", "No such design.");
-    throw e;
-  });
+  const access = await requireProjectAccess(design.projectId, need).catch(notFoundAs("No such design."));
   return { ...access, design };
 }
 
 /** Access to a revision: any member of its project may view it; nobody may change it. */
 export async function requireRevisionAccess(revisionId: number) {
   await requireUser();
-  const { findRevision } = await import("@/db/queries/designs");
   const found = await findRevision(revisionId);
   if (!found) throw new AppError("not_found", "No such revision.");
-  const access = await requireProjectAccess(found.projectId).catch((e) => {
-    if (e instanceof AppError && e.kind === "not_found") throw new AppError("not_found", "No such revision.");
-    throw e;
-  });
+  const access = await requireProjectAccess(found.projectId).catch(notFoundAs("No such revision."));
   return { ...access, revision: found.revision, designName: found.designName };
 }
 
@@ -121,13 +111,9 @@ export async function requireCutPlanAccess(revisionId: number) {
 /** Access to a review goes through its project: any member (and an admin) may read it and comment; 404 for the rest. */
 export async function requireReviewAccess(reviewId: number) {
   await requireUser();
-  const { findReview } = await import("@/db/queries/reviews");
   const review = await findReview(reviewId);
   if (!review) throw new AppError("not_found", "No such review.");
-  const access = await requireProjectAccess(review.projectId).catch((e) => {
-    if (e instanceof AppError && e.kind === "not_found") throw new AppError("not_found", "No such review.");
-    throw e;
-  });
+  const access = await requireProjectAccess(review.projectId).catch(notFoundAs("No such review."));
   return { ...access, review };
 }
 

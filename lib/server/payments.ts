@@ -8,6 +8,7 @@ import { isDuplicateKey } from "@/db/duplicate-key";
 import { eventSeen, findDeposit, markDepositPaid, recordEvent, setCheckoutSession } from "@/db/queries/deposits";
 import { getProjectSummary } from "@/db/queries/projects";
 import type { ReviewRow } from "@/db/queries/reviews";
+import { PAYMENT_SERVICE_TIMEOUT_MS } from "@/lib/validation/limits";
 import { AppError } from "./errors";
 import { appUrl } from "./request";
 
@@ -20,7 +21,7 @@ function stripe(): Stripe {
   client ??= new Stripe(key, {
     ...(host ? { host, port: Number(process.env.STRIPE_API_PORT ?? 443), protocol: (process.env.STRIPE_API_PROTOCOL ?? "https") as "http" | "https" } : {}),
     maxNetworkRetries: 1,
-    timeout: 10_000,
+    timeout: PAYMENT_SERVICE_TIMEOUT_MS,
   });
   return client;
 }

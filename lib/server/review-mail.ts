@@ -99,7 +99,7 @@ export function reviewDecidedMail(m: {
     "",
     headline,
     "",
-    ...(approved ? [`Approval reference: ${m.reference} (signed ${when})`, "Cut files of this revision now carry the reference."] : [`Recorded ${when}. A new revision, sent for review again, is needed.`]),
+    ...(approved ? [`Approval reference: ${m.reference} (signed ${when})`, "Cut files of this revision now carry the reference."] : [`Saved ${when}. A new revision, sent for review again, is needed.`]),
     ...(m.comment ? ["", "Their comment:", ...m.comment.split("\n").map((l) => `> ${l}`)] : []),
     "",
     `The review: ${m.link}`,

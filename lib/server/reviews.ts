@@ -19,35 +19,26 @@ import {
   type SignOffRow,
 } from "@/db/queries/reviews";
 import type { EndTreatment, Revision } from "@/db/schema";
-import { isCutError } from "@/lib/cut";
 import { parseCutSettings } from "@/lib/cut/settings";
 import { buildRun, hasTrack } from "@/lib/cut/run-length";
 import { animatedPreview } from "@/lib/drawing/animated-preview";
 import { formatMoney, toMinor } from "@/lib/money/currency";
 import { approvalReference } from "@/lib/review/reference";
 import { reviewStatus, showsRun } from "@/lib/review/review-state";
-import { ENGINE_VERSION, isEngineError, solve, specHash, type SolveResult } from "@/lib/track";
+import { ENGINE_VERSION, specHash, type SolveResult } from "@/lib/track";
 import type { Decision, NewReview } from "@/lib/validation/reviews";
 import { reviewDecidedMail, reviewRequestMail } from "./review-mail";
 import type { CurrentUser, ProjectAccess } from "./dal";
-import { AppError } from "./errors";
+import { solveStored } from "./designs";
+import { AppError, toAppError } from "./errors";
 import { sendMail } from "./mail";
 import { appUrl, clientAddress, userAgent } from "./request";
 
-const SOLVE_LIMIT_MS = 10_000;
 /** The run a review shows when neither the request, a cut plan nor an earlier review says (the cut settings' default). */
 const DEFAULT_RUN_MM = 2400;
 
 export const reviewPath = (projectId: number, reviewId: number) => `/projects/${projectId}/reviews/${reviewId}`;
 
-function solveRevision(revision: Revision): SolveResult {
-  try {
-    return solve(revision.spec, { deadlineMs: SOLVE_LIMIT_MS });
-  } catch (error) {
-    if (isEngineError(error)) throw new AppError(error.code === "timeout" ? "timeout" : "bad_request", error.message);
-    throw error;
-  }
-}
 
 /** The run the mock-up shows: as asked, else the revision's cut plan, else an earlier review of the design, else the default. */
 async function chooseRun(revision: Revision, input: NewReview, result: SolveResult): Promise<{ runLengthMm: number; endTreatment: EndTreatment } | null> {
@@ -65,8 +56,8 @@ async function chooseRun(revision: Revision, input: NewReview, result: SolveResu
     try {
       buildRun(result, parseCutSettings({ runLength: runLengthMm, endTreatment }));
     } catch (error) {
-      if (isCutError(error)) throw new AppError("bad_request", error.message, { runLength: [error.message] });
-      throw error;
+      // The request's only cut figure is the run length: any refusal of the run is put beside it.
+      throw toAppError(error, { cutField: "runLength" });
     }
   }
   return { runLengthMm, endTreatment };
@@ -77,7 +68,7 @@ export async function requestReview(access: ProjectAccess & { revision: Revision
   const { revision, projectId } = access;
   const clients = await clientMembers(projectId);
   if (clients.length === 0) throw new AppError("unprocessable", "This project has no client member to review it: add the client to the project first.");
-  const result = solveRevision(revision);
+  const result = solveStored(revision.spec);
   const run = await chooseRun(revision, input, result);
   let deposit: { amountMinor: number; currency: string } | null = null;
   if (input.deposit) {
@@ -150,7 +141,7 @@ export async function decideReview(
   // gives its recorded hash is not signed, whatever the page showed.
   const hash = specHash(found.revision.spec);
   if (hash !== found.revision.specHash)
-    throw new AppError("conflict", `R${found.revision.number}'s stored spec no longer matches its recorded hash, so it cannot be signed. Nothing was recorded; tell the shop.`);
+    throw new AppError("conflict", `R${found.revision.number}'s stored spec no longer matches its recorded hash, so it cannot be signed. Nothing was saved; tell the shop.`);
   const signOff = await insertSignOff(user, review, {
     decision: input.decision,
     typedName: input.typedName.trim().replace(/\s+/g, " "),

@@ -4,6 +4,7 @@ import "server-only";
 import { NextResponse } from "next/server";
 import { z } from "zod";
 import { AppError, toAppError } from "./errors";
+import { DEFAULT_BODY_LIMIT } from "@/lib/validation/limits";
 import { rawTextBody } from "./raw-body";
 
 type Params = Record<string, string | string[] | undefined>;
@@ -21,8 +22,6 @@ export function route<P extends Params = Params>(handler: Handler<P>) {
     }
   };
 }
-
-export const DEFAULT_BODY_LIMIT = 64 * 1024;
 
 /** Reads and validates a JSON body; refuses anything over `limit` bytes (counted as it arrives) before parsing it. */
 export async function jsonBody<T extends z.ZodType>(request: Request, schema: T, limit = DEFAULT_BODY_LIMIT): Promise<z.infer<T>> {

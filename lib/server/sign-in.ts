@@ -4,7 +4,7 @@ import "server-only";
 import { and, count, eq, gt } from "drizzle-orm";
 import { db } from "@/db";
 import { signInAttempts, users } from "@/db/schema";
-import { audit } from "./audit";
+import { audit } from "@/db/queries/audit";
 import { AppError } from "./errors";
 import { hashPassword, verifyPassword } from "./passwords";
 

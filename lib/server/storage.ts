@@ -3,6 +3,7 @@ import "server-only";
 // development and tests, a hosted S3-compatible store in production (same variables). The bucket is
 // private: objects are only ever served through routes that check who is asking.
 import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { OBJECT_STORE_CONNECT_TIMEOUT_MS, OBJECT_STORE_REQUEST_TIMEOUT_MS } from "@/lib/validation/limits";
 import { AppError } from "./errors";
 
 let client: S3Client | undefined;
@@ -15,7 +16,7 @@ function s3(): S3Client {
     credentials: { accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "", secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "" },
     // A store that does not answer is a clear failure after a short wait, not a hung upload.
     maxAttempts: 2,
-    requestHandler: { connectionTimeout: 3000, requestTimeout: 20_000 },
+    requestHandler: { connectionTimeout: OBJECT_STORE_CONNECT_TIMEOUT_MS, requestTimeout: OBJECT_STORE_REQUEST_TIMEOUT_MS },
   });
   return client;
 }

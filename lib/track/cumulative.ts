@@ -1,7 +1,7 @@
 // A cumulative integral F(t) = ∫_{t0}^{t} f and its inverse, for positive f: the tables x(θ) = ∫ r dθ,
 // θ(x) = ∫ dx / r, the follower angle and the arc lengths. Built panel by panel with the G7/K15 rule
 // (Piessens et al., QUADPACK 1983) and inverted with Newton's method safeguarded by bisection, using
-// the exact derivative F' = f (MATH.md §8.2). Pieces may carry a closed form for F and its inverse
+// the exact derivative F' = f (docs/math.md §8.2). Pieces may carry a closed form for F and its inverse
 // (a straight wheel edge gives a catenary arc, a straight track edge a log spiral) and then skip
 // quadrature altogether.
 

@@ -2,7 +2,7 @@
 // independent rolling simulation. Central 4th-order stencils away from corners, 4th-order one-sided
 // stencils when a corner (a break) is within reach, so a stencil never straddles a kink.
 // Step sizes follow the usual balance of truncation and rounding, h ≈ ε^{1/5} for the 4th-order
-// first derivative and h ≈ ε^{1/6} for the second (common practice; cf. MATH.md §8.3).
+// first derivative and h ≈ ε^{1/6} for the second (common practice; cf. docs/math.md §8.3).
 
 export type Side = -1 | 0 | 1;
 

@@ -2,8 +2,8 @@
 // between the contact normal and the axle ray, i.e. the track slope; the contact slips unless the
 // friction coefficient is at least this), and the smallest radii of curvature of wheel and track.
 // Curvatures use κ_w = (r² + 2r′² − r r″)/(r² + r′²)^{3/2} for a polar curve and the rolling
-// identity κ_w − κ_r = 1/√(r² + r′²) between a wheel and its road (MATH.md §1.7, derived there and
-// checked numerically), or κ₁ + κ₂ = (a/r₂)/√(r₁² + r₁′²) for a pair on fixed axles (MATH.md §5.5).
+// identity κ_w − κ_r = 1/√(r² + r′²) between a wheel and its road (docs/math.md §1.7, derived there and
+// checked numerically), or κ₁ + κ₂ = (a/r₂)/√(r₁² + r₁′²) for a pair on fixed axles (docs/math.md §5.5).
 // Corners and cusps have radius 0.
 // The contact's own combined radius, 1/(κ₁ + κ₂) with each body convex towards the other positive
 // (the radius Hertz contact is computed at; K. L. Johnson, "Contact Mechanics", 1985, §4.2), follows

@@ -3,7 +3,7 @@
 // Rolling Curves", 1849; F. L. Litvin et al., "Noncircular Gears: Design and Generation",
 // Cambridge UP 2009). So θ₂ = ∫ r₁ / (a − r₁) dθ₁, and the partner closes with m lobes when one
 // sector of the driver (2π/n) turns it by 2π/m. F(a) = ∫ r₁/(a − r₁) − 2π/m decreases strictly on
-// (r_max, ∞); with q = n/m the root lies in [max(r_max, r_min(1+q)/q), r_max(1+q)/q] (MATH.md §5.3),
+// (r_max, ∞); with q = n/m the root lies in [max(r_max, r_min(1+q)/q), r_max(1+q)/q] (docs/math.md §5.3),
 // where Brent's method (1973) finds it.
 // Placement: driver axle at the origin, partner axle straight below at (0, −a); the partner's body
 // ray τ points along (sin τ, cos τ) in the start pose, so τ = 0 touches the driver's ray t = 0.

@@ -4,7 +4,7 @@
 // (J. C. Maxwell, "On the Theory of Rolling Curves", 1849). Arc lengths come from their own
 // quadratures of |c′| (derivatives by finite differences of the output curves), and each pose is
 // found by matching arc length and tangent, never from x = ∫r dθ or r₁dθ₁ = r₂dθ₂. Interference is
-// the radial test of MATH.md §7.4 (a point at distance ρ and body angle u is inside a star-shaped
+// the radial test of docs/math.md §7.4 (a point at distance ρ and body angle u is inside a star-shaped
 // wheel iff ρ < r(u)), or a vertical test against a track graph, over the whole outline and the
 // whole motion.
 

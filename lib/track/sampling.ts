@@ -6,8 +6,9 @@
 
 import { Deadline, NO_DEADLINE } from "./deadline";
 import { EngineError } from "./errors";
+import type { Pt } from "@/lib/geometry/point";
 
-export type Pt = [number, number];
+export type { Pt };
 
 export interface Sampled {
   /** Parameter of each vertex. */

@@ -1,6 +1,6 @@
 // Twin wheels from a track: the track is a virtual rack between two axles; the upper wheel has
 // r₁ = h₁ − y and the lower r₂ = y − h₂, and with dx = r₁dθ₁ = r₂dθ₂ and r₁ + r₂ = h₁ − h₂ they
-// form a pair on fixed axles that rolls without the rack (MATH.md §6.1; the pair relations are
+// form a pair on fixed axles that rolls without the rack (docs/math.md §6.1; the pair relations are
 // Maxwell's, 1849). If the track is point-symmetric (invariant under a half turn about a point of
 // its mid-line) the two wheels are congruent — identical pitch curves in the sense of S.-H. Tong and
 // D. C. H. Yang, ASME J. Mech. Design 120(2), 1998. Each axle height is solved for closure on its

@@ -2,7 +2,7 @@
 // θ = ∫ x′(s) / (h − y(s)) ds), L. Hall and S. Wagon, "Roads and Wheels", Math. Mag. 65(5), 1992.
 // The axle height h is the root of the closure condition ∫_period dx / (h − y) = 2π / k, found by
 // Brent's method (Brent 1973) on the bracket h ∈ [kP/2π + y_min, kP/2π + y_max] ∩ (y_max, ∞)
-// (MATH.md §1.5, §1.8). A straight track segment is integrated in closed form (it gives a log-spiral
+// (docs/math.md §1.5, §1.8). A straight track segment is integrated in closed form (it gives a log-spiral
 // arc of the wheel). The same code serves the lower wheel of a twin pair (sgn = −1: r = y − h).
 
 import { brent, NotBracketedError } from "./brent";

@@ -22,7 +22,6 @@ export const logEntrySchema = z
       .pipe(z.array(z.string().regex(PART_ID, { error: "Part ids are letters and digits as engraved, e.g. T01 or W1." })).max(50, { error: "At most 50 parts in one entry." })),
   });
 
-export type LogEntryInput = z.infer<typeof logEntrySchema>;
 
 /** A tick on the assembly sheet: one part, or one joint ("T01/T02"), installed or not after all. */
 export const tickSchema = z.strictObject({

@@ -11,7 +11,7 @@ export const nestSchema = z.strictObject({
   sheets: z
     .array(z.strictObject({ index: z.number().int().min(0).max(500), utilisation: z.number().finite(), placements: z.array(placement).max(5000) }), { error: "The nest needs its sheets." })
     .min(1, { error: "The nest places nothing." })
-    .max(500, { error: "A nest of more than 500 sheets is not stored." }),
+    .max(500, { error: "A cut plan of more than 500 sheets cannot be saved." }),
   unplaced: z.array(z.strictObject({ id: partId, copy: z.number().int().min(0), reason: z.string().max(500) })).max(5000),
   seconds: z.number().finite().min(0),
   cancelled: z.boolean(),
@@ -29,5 +29,3 @@ export const newCutPlanSchema = planChoiceSchema.extend({
   purpose: z.enum(CUT_PLAN_PURPOSES, { error: `The purpose must be "review" or "production".` }).optional(),
   reason: z.string({ error: "The reason must be text." }).trim().max(500, { error: "A reason has at most 500 characters." }).optional(),
 });
-
-export const CUT_PLAN_BODY_LIMIT = 512 * 1024;

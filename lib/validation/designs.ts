@@ -15,6 +15,3 @@ export const newRevisionSchema = z.object({
   /** The load settings to keep with the revision; absent: the design's own. */
   loads: loadsSettingsSchema.optional(),
 });
-
-// Uploaded outlines of thousands of points fit in this.
-export const SPEC_BODY_LIMIT = 512 * 1024;

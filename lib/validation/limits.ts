@@ -1,4 +1,43 @@
+// The app's limits in one place: password length, request body sizes, upload sizes and the engine's
+// time limits on the server. Plain constants with no imports, so forms in the browser, the route
+// handlers and the server's wrappers all read the same figures.
+
 export const PASSWORD_MIN_LENGTH = 10;
 
 /** Poisson's ratio when none is given: 0.3, the usual figure for wood and metals (common practice; the column's default too). */
 export const DEFAULT_POISSON = 0.3;
+
+// Request bodies, in bytes, counted as they arrive and refused (413) before anything is parsed.
+
+/** Any JSON body without a limit of its own. */
+export const DEFAULT_BODY_LIMIT = 64 * 1024;
+/** A design spec (new design, draft, revision, /api/solve): an uploaded outline of thousands of points fits. */
+export const SPEC_BODY_LIMIT = 512 * 1024;
+/** A cut plan's settings and its nest (every placement of every part). */
+export const CUT_PLAN_BODY_LIMIT = 512 * 1024;
+/** A payment service event; real ones are a few kilobytes. */
+export const WEBHOOK_BODY_LIMIT = 256 * 1024;
+
+// Site photos of the build log.
+
+/** One photo: 15 MB. */
+export const PHOTO_MAX_BYTES = 15 * 1024 * 1024;
+/** Photos on one log entry. */
+export const PHOTO_MAX_COUNT = 6;
+/** A build-log form: every photo at its largest, plus 1 MB for the text fields and the multipart framing. */
+export const LOG_FORM_LIMIT = PHOTO_MAX_COUNT * PHOTO_MAX_BYTES + 1024 * 1024;
+
+// The engine's deadlines on the server (the engine checks them cooperatively and stops with a "timeout" error).
+
+/** POST /api/solve: an interactive solve for whoever asks. */
+export const SOLVE_ROUTE_DEADLINE_MS = 5_000;
+/** A solve the server runs for itself: saving a revision, a cut plan, a review, a preview, a comparison. */
+export const SERVER_SOLVE_DEADLINE_MS = 10_000;
+
+// Waits on the services the server calls: one that does not answer is a clear failure, not a hung request.
+
+/** The payment service (each attempt; the SDK retries once). */
+export const PAYMENT_SERVICE_TIMEOUT_MS = 10_000;
+/** The object store: connecting, and one whole request (a photo of up to PHOTO_MAX_BYTES). */
+export const OBJECT_STORE_CONNECT_TIMEOUT_MS = 3_000;
+export const OBJECT_STORE_REQUEST_TIMEOUT_MS = 20_000;

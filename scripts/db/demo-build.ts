@@ -12,6 +12,7 @@ import sharp from "sharp";
 import * as schema from "../../db/schema";
 import { buildCutParts, nestItemsFor, shelfLayout } from "../../lib/cut";
 import { composeSettings } from "../../lib/cut-plan/compose";
+import { cutPlanName } from "../../lib/cut-plan/name";
 import { summariseCutPlan } from "../../lib/cut-plan/summary";
 import { approvalReference } from "../../lib/review/reference";
 import { PHOTO_EXTENSION, preparePhoto } from "../../lib/photos/prepare";
@@ -80,6 +81,8 @@ export async function seedDemoBuild(db: Db, projectId: number, designName: strin
   const planId = await db.transaction(async (tx) => {
     const [res] = await tx.insert(cutPlans).values({
       revisionId: revision.id,
+      // The revision's first plan (none is seeded before it).
+      number: 1,
       settings: { ...choice, composed: s } as unknown as Record<string, unknown>,
       nest: stored,
       summary: summary as unknown as Record<string, unknown>,
@@ -89,10 +92,10 @@ export async function seedDemoBuild(db: Db, projectId: number, designName: strin
     await tx.insert(buildLogEntries).values({
       projectId,
       kind: "cut-plan",
-      text: `Cut plan ${res.insertId} stored for ${summary.purpose}: ${summary.copies} parts on ${summary.sheets} × ${summary.sheet}.`,
+      text: `${cutPlanName(1, revision.number)} saved for ${summary.purpose}: ${summary.copies} parts on ${summary.sheets} × ${summary.sheet}.`,
       parts: [],
       cutPlanId: res.insertId,
-      detail: { revisionId: revision.id },
+      detail: { revisionId: revision.id, number: 1 },
       authorId: fabricatorId,
       createdAt: new Date(demo.log[0]?.at ?? Date.now()),
     });

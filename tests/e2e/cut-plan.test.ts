@@ -21,7 +21,7 @@ afterAll(async () => {
 let cutPageUrl = "";
 
 describe("the demo job's cut plan", () => {
-  it("builds the parts, nests them with progress, stores the plan and downloads the ZIP", async () => {
+  it("builds the parts, nests them with progress, saves the cut plan and downloads the ZIP", async () => {
     const { context, page } = await signedIn(browser, "fabricator@example.test");
     const cut = new CutPlanPage(page);
     await cut.openFromProject("Square-wheel trike run", "Trike run track");
@@ -46,8 +46,10 @@ describe("the demo job's cut plan", () => {
     expect(await cut.nestSummary().innerText()).toMatch(/^\d+ sheet\(s\), \d+\.\d % of the stock used overall/);
     expect(await page.getByTestId("unplaced").count()).toBe(0);
     expect(await page.getByTestId("sheet-view").count()).toBeGreaterThan(0);
-    expect(await cut.store()).toMatch(/^Stored as cut plan \d+/);
-    await page.getByTestId("stored-plan").waitFor();
+    // Named by its number within the revision, never the database id.
+    const saved = (await cut.save()).match(/^Saved as cut plan (\d+) of (R\d+)/);
+    expect(saved).not.toBeNull();
+    await page.getByTestId("stored-plan").filter({ hasText: `Cut plan ${saved![1]} of ${saved![2]}, saved` }).waitFor();
     await page.screenshot({ path: screenshotPath("cut-plan-demo"), fullPage: true });
 
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("download-zip").click()]);

@@ -32,7 +32,7 @@ describe("load-path cautions in the studio", () => {
       const before = await loads.cautions();
       const grip = before.find((c) => c.check === "grip")!;
       expect(grip.signal).toBe("WARNING");
-      expect(grip.text).toMatch(/μ needed 1\.5 with traction H\/V = 0\.2/); // tan(45° + atan 0.2), T7 of the notes
+      expect(grip.text).toMatch(/μ needed 1\.5 with traction H\/V = 0\.2/); // tan(45° + atan 0.2), docs/safety.md T7
       expect(grip.text).toContain("(0.8)");
       // The caution is linked to its place: "show" stops the roll at the corner and marks it.
       await page.getByTestId("loads-caution").filter({ hasText: "more grip" }).getByRole("button", { name: /Show where/ }).click();

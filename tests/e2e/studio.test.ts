@@ -202,10 +202,11 @@ describe("the studio, as the fabricator", () => {
     const r1 = solve(presetSpec("square"));
     const r2 = solve({ ...presetSpec("square"), wheel: { kind: "polygon", sides: 4, side: 300, cornerRadius: 0 } });
     const rows: Array<[string, (r: SolveResult) => number]> = [
-      ["Period", (r) => r.period!],
-      ["Depth", (r) => r.depth!],
-      ["Wheel r max", (r) => r.wheel.rMax],
-      ["Friction demand (max)", (r) => r.check.frictionDemand.max],
+      ["Period (one hump to the next)", (r) => r.period!],
+      ["Track depth", (r) => r.depth!],
+      ["Wheel radius, largest", (r) => r.wheel.rMax],
+      // The studio's check figure, shown to 3 significant digits: the square's grip needed is 1 (slope 45°).
+      ["Grip needed (μ)", (r) => r.check.frictionDemand.max],
     ];
     for (const [label, get] of rows) {
       const cells = (await compare.figure(label)).map((c) => Number(c.replace(/ mm$/, "")));
@@ -213,8 +214,8 @@ describe("the studio, as the fabricator", () => {
       expect(Math.abs(cells[1] - get(r2)), `${label}, R2`).toBeLessThanOrEqual(0.0005);
     }
     // Hall & Wagon 1992: period 2A·asinh(1) for inradius A = 200 and 150 mm.
-    expect((await compare.figure("Period"))[0]).toBe("352.549 mm");
-    expect((await compare.figure("Period"))[1]).toBe("264.412 mm");
+    expect((await compare.figure("Period (one hump to the next)"))[0]).toBe("352.549 mm");
+    expect((await compare.figure("Period (one hump to the next)"))[1]).toBe("264.412 mm");
     expect((await compare.figure("Note"))).toEqual(["400 mm side", "300 mm side"]);
 
     const overlay = compare.overlay();

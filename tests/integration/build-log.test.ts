@@ -18,7 +18,7 @@ import * as sheetRoute from "@/app/api/cut-plans/[id]/assembly-sheet/route";
 import * as cutPlansRoute from "@/app/api/revisions/[id]/cut-plans/route";
 import { db, pool } from "@/db";
 import { buildLogEntries, buildLogPhotos, designs, users } from "@/db/schema";
-import { saveRevision } from "@/db/queries/designs";
+import { saveRevision } from "@/lib/server/designs";
 import { insertReview } from "@/db/queries/reviews";
 import * as decisionRoute from "@/app/api/reviews/[id]/decision/route";
 import { cameraJpeg, hasGpsPointer, pngBomb } from "../support/images";

@@ -11,7 +11,7 @@ import * as planListRoute from "@/app/api/cut-plans/[id]/files/route";
 import * as cutPlansRoute from "@/app/api/revisions/[id]/cut-plans/route";
 import { db, pool } from "@/db";
 import { cutPlans, designs, stockSheets } from "@/db/schema";
-import { saveRevision } from "@/db/queries/designs";
+import { saveRevision } from "@/lib/server/designs";
 import type { PlanChoice } from "@/lib/cut-plan/compose";
 import { demoChoice, SQUARE, validNest } from "./support/cut-plan";
 import { actAs } from "./support/session";

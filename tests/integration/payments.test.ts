@@ -14,7 +14,7 @@ import * as decisionRoute from "@/app/api/reviews/[id]/decision/route";
 import * as webhookRoute from "@/app/api/payments/webhook/route";
 import { db, pool } from "@/db";
 import { auditLog, deposits, designs, paymentEvents, users } from "@/db/schema";
-import { saveRevision } from "@/db/queries/designs";
+import { saveRevision } from "@/lib/server/designs";
 import { insertReview } from "@/db/queries/reviews";
 import { actAs } from "./support/session";
 import { CALLERS, clientOnly, makeCallers, type CallerIds } from "./support/callers";

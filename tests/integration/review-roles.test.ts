@@ -11,7 +11,7 @@ import * as decisionRoute from "@/app/api/reviews/[id]/decision/route";
 import * as previewRoute from "@/app/api/reviews/[id]/preview/route";
 import { db, pool } from "@/db";
 import { deposits, designs, reviewComments, reviews, signOffs, users } from "@/db/schema";
-import { saveRevision } from "@/db/queries/designs";
+import { saveRevision } from "@/lib/server/designs";
 import { insertReview } from "@/db/queries/reviews";
 import { eq } from "drizzle-orm";
 import { actAs } from "./support/session";

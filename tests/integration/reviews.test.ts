@@ -14,7 +14,7 @@ import * as commentsRoute from "@/app/api/reviews/[id]/comments/route";
 import * as decisionRoute from "@/app/api/reviews/[id]/decision/route";
 import { db, pool } from "@/db";
 import { auditLog, deposits, designs, projects, reviewComments, reviews, revisions, signOffs, users } from "@/db/schema";
-import { saveRevision } from "@/db/queries/designs";
+import { saveRevision } from "@/lib/server/designs";
 import { ENGINE_VERSION, specHash } from "@/lib/track";
 import type { PlanChoice } from "@/lib/cut-plan/compose";
 import { demoChoice, SQUARE, validNest } from "./support/cut-plan";

@@ -33,7 +33,7 @@ afterAll(async () => {
 describe("the seeded library", () => {
   it("holds the demo's plywood, sheet and router, each with a source", async () => {
     const library = await listShopLibrary();
-    // The demo scenario (BRIEF.md): 18 mm birch plywood on 2440 × 1220 mm sheets, a 6 mm router.
+    // The demo scenario (docs/product.md §3): 18 mm birch plywood on 2440 × 1220 mm sheets, a 6 mm router.
     const ply = library.materials.find((m) => m.name === "Birch plywood 18 mm");
     expect(ply?.thicknessMm).toBe(18);
     const sheet = library.stockSheets.find((s) => s.name === "Birch plywood 18 mm, 2440 x 1220");

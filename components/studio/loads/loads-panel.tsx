@@ -11,7 +11,7 @@ import { Badge, Panel } from "@/components/ui/panel";
 import type { Caution, LoadsReport, Suggestion } from "@/lib/loads";
 import type { LibraryMaterial } from "@/lib/loads/settings";
 import { USE_LABELS, USES, type LoadsSettings, type Use } from "@/lib/validation/loads";
-import { NumberInput, SelectInput } from "../spec-form/inputs";
+import { NumberInput, SelectInput, TextInput } from "@/components/ui/inputs";
 
 
 const n = (v: number | null | undefined, d = 2) => (v === null || v === undefined || !Number.isFinite(v) ? "—" : Number(v.toFixed(d)).toString());
@@ -123,10 +123,9 @@ function Inputs({ settings: s, library, readOnly, onChange }: Pick<LoadsPanelPro
         </div>
       ))}
       <div className="flex items-end gap-2">
-        <label className="flex flex-1 flex-col gap-1 text-sm">
-          <span className="font-medium">New gap, e.g. wheel to frame</span>
-          <input className="rounded-plate border border-ink-line bg-white/70 px-2 py-1 text-sm" maxLength={60} value={gapName} onChange={(e) => setGapName(e.target.value)} />
-        </label>
+        <div className="flex-1">
+          <TextInput label="New gap, e.g. wheel to frame" maxLength={60} value={gapName} onChange={setGapName} />
+        </div>
         <Button
           type="button"
           variant="quiet"
@@ -148,7 +147,7 @@ function Figures({ r }: { r: LoadsReport }) {
   const rows: Array<[string, string]> = [
     ["Wheel load", `${n(r.wheelLoadN, 0)} N`],
     ["Grip needed (μ)", `${n(r.grip.needed)} against ${n(r.grip.available)} available (asks ${r.grip.marginAsked}×)`],
-    ["Contact", r.contact.radiusMm === 0 ? "a sharp corner: no bound" : `p_max ${n(r.contact.pMaxMpa)} MPa over ${n(2 * r.contact.halfWidthMm, 3)} mm at radius ${n(r.contact.radiusMm, 1)} mm`],
+    ["Contact", r.contact.radiusMm === 0 ? "a sharp corner: no bound" : `peak pressure ${n(r.contact.pMaxMpa)} MPa over ${n(2 * r.contact.halfWidthMm, 3)} mm at radius ${n(r.contact.radiusMm, 1)} mm`],
     ["Track sag", `${n(r.deflection.pointLoadMm + r.deflection.selfWeightMm, 3)} mm against ${n(r.deflection.limitMm, 3)} mm; longest span ${n(r.deflection.maxSpanMm, 0)} mm`],
   ];
   return (
@@ -181,7 +180,7 @@ function CautionItem({ c, showAt }: { c: Caution; showAt: LoadsPanelProps["showA
           </Button>
         ) : null}
       </div>
-      <p className="ml-1 text-xs text-ink-faint">Source: {c.source}</p>
+      <p className="ml-1 text-xs text-ink-soft">Source: {c.source}</p>
     </li>
   );
 }
@@ -232,7 +231,7 @@ export function LoadsPanel(props: LoadsPanelProps) {
               <ul className="mt-1 flex flex-col gap-1 text-xs" data-testid="engineer-loads">
                 {loads.report.engineerLoads.map((l) => (
                   <li key={l.what}>
-                    <span className="font-medium">{l.what}:</span> <span className="font-mono">{l.value}</span> <span className="text-ink-faint">({l.source})</span>
+                    <span className="font-medium">{l.what}:</span> <span className="font-mono">{l.value}</span> <span className="text-ink-soft">({l.source})</span>
                   </li>
                 ))}
               </ul>

@@ -44,7 +44,7 @@ export function OutlineUpload({ want, units, onPoints }: { want: "wheel" | "trac
         }}
       />
       {message ? (
-        <p role={message.ok ? "status" : "alert"} data-testid="upload-message" className={`text-xs ${message.ok ? "text-pass" : "font-medium text-caution"}`}>
+        <p role={message.ok ? "status" : "alert"} data-testid="upload-message" className={`text-xs ${message.ok ? "text-pass" : "font-medium text-caution-ink"}`}>
           {message.text}
         </p>
       ) : null}

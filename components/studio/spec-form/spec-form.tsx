@@ -2,35 +2,12 @@
 // Every parameter of a design spec, in the units the user chose. Errors show beside the field that
 // causes them: the engine's schema for ranges and combinations, its formula reader as one types.
 import { convertSpec, type Units } from "@/lib/studio/units";
-import { designSpecSchema, type DesignSpecInput } from "@/lib/track";
-import { compileFormula } from "@/lib/track/formula";
+import type { DesignSpecInput } from "@/lib/track";
 import { defaultSpecFor, MODE_LABELS, type Mode } from "./defaults";
-import { NumberInput, SelectInput } from "./inputs";
+import { NumberInput, SelectInput } from "@/components/ui/inputs";
+import { specErrors } from "./field-errors";
 import { TrackFields } from "./track-fields";
 import { WheelFields } from "./wheel-fields";
-
-export type FieldErrors = Record<string, string>;
-
-/** Schema messages keyed by their dotted path ("wheel.side"), for the fields to show. */
-export function specErrors(spec: DesignSpecInput): FieldErrors {
-  const parsed = designSpecSchema.safeParse(spec);
-  if (parsed.success) return {};
-  const errors: FieldErrors = {};
-  for (const issue of parsed.error.issues) {
-    const key = issue.path.join(".");
-    errors[key] ??= issue.message;
-  }
-  return errors;
-}
-
-export function formulaError(source: string, variable: string): string | undefined {
-  try {
-    compileFormula(source, variable, "formula");
-    return undefined;
-  } catch (e) {
-    return (e as Error).message;
-  }
-}
 
 export function SpecForm({ spec, onChange, readOnly }: { spec: DesignSpecInput; onChange: (spec: DesignSpecInput) => void; readOnly?: boolean }) {
   const units: Units = spec.units ?? "mm";
@@ -89,7 +66,7 @@ export function SpecForm({ spec, onChange, readOnly }: { spec: DesignSpecInput; 
           onChange={(tolerance) => onChange({ ...spec, tolerance })}
         />
       </div>
-      {errors[""] ? <p className="text-xs text-caution">{errors[""]}</p> : null}
+      {errors[""] ? <p className="text-xs text-caution-ink">{errors[""]}</p> : null}
     </fieldset>
   );
 }

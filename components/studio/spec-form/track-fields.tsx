@@ -2,9 +2,9 @@
 import type { Units } from "@/lib/studio/units";
 import type { DesignSpecInput } from "@/lib/track";
 import { inUnits, TRACK_DEFAULTS } from "./defaults";
-import { FormulaInput, NumberInput, SelectInput } from "./inputs";
+import { FormulaInput, NumberInput, SelectInput } from "@/components/ui/inputs";
 import { OutlineUpload } from "./outline-upload";
-import { formulaError, type FieldErrors } from "./spec-form";
+import { formulaError, type FieldErrors } from "./field-errors";
 
 type Track = NonNullable<DesignSpecInput["track"]>;
 type Kind = Track["kind"];

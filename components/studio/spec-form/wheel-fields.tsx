@@ -3,9 +3,9 @@ import type { Units } from "@/lib/studio/units";
 import type { DesignSpecInput } from "@/lib/track";
 import { axleRefusal } from "@/lib/studio/axle-placement";
 import { inUnits, WHEEL_DEFAULTS } from "./defaults";
-import { FormulaInput, NumberInput, SelectInput } from "./inputs";
+import { FormulaInput, NumberInput, SelectInput } from "@/components/ui/inputs";
 import { OutlineUpload } from "./outline-upload";
-import { formulaError, type FieldErrors } from "./spec-form";
+import { formulaError, type FieldErrors } from "./field-errors";
 
 type Wheel = NonNullable<DesignSpecInput["wheel"]>;
 type Kind = Wheel["kind"];

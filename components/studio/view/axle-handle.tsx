@@ -96,7 +96,7 @@ export function AxleHandle({ at, axle, units, pixelsPerUnit, box, onDragStart, o
         </span>
       ) : null}
       {refusal ? (
-        <p role="alert" data-testid="axle-refusal" className="absolute bottom-6 left-2 max-w-[70%] rounded-plate border border-caution bg-paper/95 px-2 py-1 text-xs font-medium text-caution">
+        <p role="alert" data-testid="axle-refusal" className="absolute bottom-6 left-2 max-w-[70%] rounded-plate border border-caution bg-paper/95 px-2 py-1 text-xs font-medium text-caution-ink">
           {refusal}
         </p>
       ) : null}

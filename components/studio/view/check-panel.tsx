@@ -66,7 +66,7 @@ export function CheckPanel({ result, checking, error, onPointAt }: CheckPanelPro
               <Badge tone={BADGE[f.state].tone}>{BADGE[f.state].word}</Badge>
             </dd>
             {f.locate && f.state === "warn" ? <dd>{show(f.locate, f.label.toLowerCase())}</dd> : null}
-            {f.note ? <dd className={`basis-full text-xs ${f.state === "warn" ? "text-caution" : "text-ink-soft"}`}>{f.note}</dd> : null}
+            {f.note ? <dd className={`basis-full text-xs ${f.state === "warn" ? "text-caution-ink" : "text-ink-soft"}`}>{f.note}</dd> : null}
           </div>
         ))}
       </dl>

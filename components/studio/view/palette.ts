@@ -1,7 +1,6 @@
 // Canvas colours, the same values as the Tailwind theme (tailwind.config.ts): Konva draws on a
 // <canvas>, which cannot read CSS classes.
 export const INK = { base: "#1d3557", soft: "#3d5a80", faint: "#8da2bb", line: "#c4cfdc" } as const;
-export const PAPER = "#f6f0e1";
 /** The single safety orange, for cautions only. */
 export const CAUTION = "#e8590c";
 

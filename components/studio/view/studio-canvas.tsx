@@ -3,8 +3,6 @@
 import dynamic from "next/dynamic";
 import type { CanvasStageProps } from "./canvas-stage";
 
-export type { CanvasHighlight } from "./canvas-stage";
-
 export type StudioCanvasProps = Omit<CanvasStageProps, "result" | "height"> & {
   /** undefined while the engine is solving. */
   result?: CanvasStageProps["result"];

@@ -113,7 +113,7 @@ export function StudioView({ result, options, check, checkError, spec, error, on
               <PlayControls {...clock.controls} describePosition={describePosition} />
             </div>
             {highlight ? (
-              <button type="button" className="no-print text-xs text-caution underline" onClick={() => setHighlight(null)}>
+              <button type="button" className="no-print text-xs text-caution-ink underline" onClick={() => setHighlight(null)}>
                 Clear the mark
               </button>
             ) : null}

@@ -1,5 +1,5 @@
 // A caution as a boxed row: the signal word in a coloured panel on the left, the message beside it.
-// The words mean what ANSI Z535.4 §4.14 says they mean (SAFETY.md §4.1); the panel carries the
+// The words mean what ANSI Z535.4 §4.14 says they mean (docs/safety.md §4.1); the panel carries the
 // safety alert symbol for the personal-injury words only (Z535.4: never with NOTICE). Our palette
 // has one safety orange, so DANGER, WARNING and CAUTION share it and NOTICE is ink blue.
 import type { SheetCaution, SignalWord } from "../sheet";

@@ -43,7 +43,7 @@ export function cover(flow: Flow, sheet: AssemblySheet): ContentsSlot {
         : cell("Sign-off reference", 62, { text: "NOT APPROVED", style: orangeBold }, { text: "The client has not signed off this revision.", style: STYLE.small }),
       cell("Date of this sheet", 38, { text: isoDay(sheet.date), style: { ...mono, font: FONT.mono } }),
     ],
-    [cell("Shop", 62, { text: sheet.shop.name, style: value }, { text: sheet.shop.contact, style: STYLE.small }), cell("Cut plan", 38, { text: `#${sheet.cutPlanId}`, style: { ...mono, font: FONT.mono } })],
+    [cell("Shop", 62, { text: sheet.shop.name, style: value }, { text: sheet.shop.contact, style: STYLE.small }), cell("Cut plan", 38, { text: `${sheet.cutPlanNumber} of R${sheet.design.revision}`, style: { ...mono, font: FONT.mono } })],
     [cell("Spec hash (SHA-256 of the signed design)", 1, { text: sheet.design.specHash, style: { font: FONT.mono, size: SIZE.small, color: COLOUR.inkSoft } })],
   ]);
   flow.gap(10);

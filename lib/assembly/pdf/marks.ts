@@ -28,14 +28,3 @@ export function alertSymbol(doc: PDFKit.PDFDocument, x: number, y: number, size:
   doc.rect(cx - w / 2, y + h * 0.76, w, w).fill(mark);
   doc.restore();
 }
-
-/**
- * A horizontal chain line (long dash, short dash), the line type drawings use for datums and centre
- * lines (ISO 128-2, type 04). pdfkit's typed dash() takes one length, so the pattern is set with the
- * PDF "d" operator itself (ISO 32000-1 §8.4.3.6).
- */
-export function chainLine(doc: PDFKit.PDFDocument, x0: number, x1: number, y: number, width = 0.7): void {
-  doc.save().lineWidth(width).strokeColor(COLOUR.ink);
-  doc.addContent("[9 2 1.5 2] 0 d");
-  doc.moveTo(x0, y).lineTo(x1, y).stroke().undash().restore();
-}

@@ -1,16 +1,21 @@
 // One strip of the layout plan drawn to scale in x and y: the track parts (profile over the base
 // band) standing on the datum line, a heavy line at each joint with its station above, the
 // segments' ids, the supports under the datum line with S1…Sn and their stations, and the
-// direction of travel. strip-layout.ts decides where everything goes.
+// direction of travel. The lines and shapes are the makerjs plan model (plan-paths.ts);
+// strip-layout.ts decides where the labels go.
+import { partsIn, planModel } from "../plan-drawing";
 import type { SheetRun } from "../sheet";
 import { FONT } from "./fonts";
 import { COLOUR, SIZE } from "./look";
-import { arrow, chainLine } from "./marks";
-import { partOutline, topAt } from "./run-geometry";
-import { HEADER, LEADER, LINE, NAME, SYMBOL, within, type PlacedLabel, type StripLayout, type StripPlace } from "./strip-layout";
+import { arrow } from "./marks";
+import { drawDatum, drawParts, planPathData } from "./plan-paths";
+import { topAt } from "./run-geometry";
+import { HEADER, LEADER, LINE, NAME, SYMBOL, type PlacedLabel, type StripLayout, type StripPlace } from "./strip-layout";
 import { STYLE, widthOf, write, writeCentred, writeRight, type TextStyle } from "./text";
 
 const SEGMENT: TextStyle = { font: FONT.monoSemibold, size: SIZE.small, color: COLOUR.ink };
+/** A part id's line height, pt: it goes in the base band when the band is this deep. */
+const ID_HEIGHT = SIZE.small * 1.3;
 
 export function drawStrip(doc: PDFKit.PDFDocument, run: SheetRun, s: StripLayout, top: number): void {
   const { range, k, origin } = s;
@@ -18,39 +23,20 @@ export function drawStrip(doc: PDFKit.PDFDocument, run: SheetRun, s: StripLayout
   const datumPt = top + HEADER + s.aboveRows * s.row + LEADER + s.trackPt;
   const Y = (y: number) => datumPt - (y - run.datumY) * k;
   const xa = X(range.x0);
-  const xb = X(range.x1);
 
   // Header: which stretch this is, and the way the wheel goes.
   write(doc, `Strip ${s.index + 1} of ${s.count}   ·   x = ${range.x0.toFixed(1)} to ${range.x1.toFixed(1)} mm`, s.bounds.left, top, STYLE.bodyStrong);
   writeRight(doc, "direction of travel", s.bounds.right - 46, top + 1, STYLE.small);
   arrow(doc, s.bounds.right - 40, s.bounds.right, top + 5.5);
 
-  // The track parts over this stretch, and the top of the base band dashed across them.
-  const outline = partOutline(run, range.x0, range.x1).map(([x, y]) => [X(x), Y(y)]);
-  doc.save().lineWidth(0.8).lineJoin("round").polygon(...outline).fillAndStroke(COLOUR.paperDeep, COLOUR.ink).restore();
+  // The drawing itself is the plan model (../plan-drawing.ts), the same the screen shows.
+  const model = planModel(run, range, { supportHalf: 3.6 / k, supportHeight: SYMBOL / k, datumOver: 12 / k, idHeight: ID_HEIGHT / k });
+  const paths = planPathData(model, k, range.x0, xa, run.datumY, datumPt);
   const bandTop = Math.min(...run.profile.map(([, y]) => y));
   const band = Y(run.baseY) - Y(bandTop);
-  if (band > 2)
-    doc.save().lineWidth(0.4).strokeColor(COLOUR.inkSoft).dash(2, { space: 2 }).moveTo(xa, Y(bandTop)).lineTo(xb, Y(bandTop)).stroke().undash().restore();
-
-  // Joints: the cut through the part, heavy.
-  for (const seg of run.segments.slice(0, -1)) {
-    if (!within(seg.x1, range)) continue;
-    doc.save().lineWidth(1.6).strokeColor(COLOUR.ink).moveTo(X(seg.x1), Y(run.baseY)).lineTo(X(seg.x1), Y(topAt(run.profile, seg.x1))).stroke().restore();
-  }
+  drawParts(doc, paths, band);
   segmentIds(doc, run, s, band, X, Y);
-
-  // Where the run goes on in the next strip, the part's end is a dashed break, not an edge.
-  for (const [x, runX, goesOn] of [[xa, range.x0, range.x0 > 0], [xb, range.x1, range.x1 < run.length]] as const) {
-    if (!goesOn) continue;
-    const y0 = Y(run.baseY);
-    const y1 = Y(topAt(run.profile, runX));
-    doc.save().lineWidth(1.2).strokeColor(COLOUR.white).moveTo(x, y0).lineTo(x, y1).stroke().restore();
-    doc.save().lineWidth(0.6).strokeColor(COLOUR.inkSoft).dash(1.5, { space: 1.5 }).moveTo(x, y0).lineTo(x, y1).stroke().undash().restore();
-  }
-
-  // The datum line, a chain line a little past both ends, named at its left.
-  chainLine(doc, xa - 12, xb + 12, datumPt);
+  drawDatum(doc, paths);
   writeRight(doc, "DATUM", xa - 14, datumPt - 3.5, { ...NAME, color: COLOUR.inkSoft });
 
   // Stations above: a leader from each label down to the track's top.
@@ -61,9 +47,8 @@ export function drawStrip(doc: PDFKit.PDFDocument, run: SheetRun, s: StripLayout
     drawLabel(doc, l, labelTop, s.bounds);
   }
 
-  // Supports below: a filled triangle under the datum, a leader to the label.
+  // Supports below: the triangle under the datum (in the model), a leader to the label.
   for (const l of s.below) {
-    doc.save().polygon([l.x, datumPt], [l.x - 3.6, datumPt + SYMBOL], [l.x + 3.6, datumPt + SYMBOL]).fill(COLOUR.ink).restore();
     const labelTop = datumPt + SYMBOL + 3 + l.row * s.row;
     if (l.row > 0) leader(doc, l.x, datumPt + SYMBOL, labelTop - 0.5);
     drawLabel(doc, l, labelTop, s.bounds);
@@ -92,16 +77,12 @@ function drawLabel(doc: PDFKit.PDFDocument, l: PlacedLabel, top: number, b: Stri
 
 /** Segment ids centred in the part of each segment this strip shows: in the base band when it has room, else over the track. */
 function segmentIds(doc: PDFKit.PDFDocument, run: SheetRun, s: StripLayout, band: number, X: (x: number) => number, Y: (y: number) => number): void {
-  for (const seg of run.segments) {
-    const a = Math.max(seg.x0, s.range.x0);
-    const b = Math.min(seg.x1, s.range.x1);
-    if (b - a <= 1e-6) continue;
+  for (const { id, a, b, whole } of partsIn(run, s.range)) {
     // A sliver of a segment at a strip's end goes unnamed: the next strip names it in full.
-    const whole = seg.x0 >= s.range.x0 - 1e-6 && seg.x1 <= s.range.x1 + 1e-6;
-    if (!whole && (b - a) * s.k < widthOf(doc, seg.id, SEGMENT) + 6) continue;
+    if (!whole && (b - a) * s.k < widthOf(doc, id, SEGMENT) + 6) continue;
     const cx = X((a + b) / 2);
-    const h = SIZE.small * 1.3;
+    const h = ID_HEIGHT;
     const y = band >= h ? Y(run.baseY) - band / 2 - h / 2 : Y(topAt(run.profile, (a + b) / 2)) - h - 2;
-    writeCentred(doc, seg.id, cx, y, SEGMENT);
+    writeCentred(doc, id, cx, y, SEGMENT);
   }
 }

@@ -1,7 +1,7 @@
 // The bill of materials as CSV (RFC 4180: CRLF line ends, a field holding a comma, a double quote
 // or a line break is enclosed in double quotes, and a double quote inside it is doubled).
 import type { SheetNestResult } from "@/lib/nest/types";
-import { bounds } from "../geometry";
+import { bounds, boxHeight, boxWidth } from "@/lib/geometry/box";
 import type { Part } from "../types";
 import { fromMm, type OutputUnits } from "../units";
 
@@ -28,7 +28,7 @@ export function bomCsv(parts: Part[], opts: { material: string; thickness: numbe
   const rows = [csvRow(["part", "name", "material", `thickness (${u})`, "sheet", `size L×W (${u})`, "quantity"])];
   for (const p of parts) {
     const b = bounds(p.region.outer);
-    rows.push(csvRow([p.id, p.name, opts.material, n(opts.thickness), sheetsOf(p.id, opts.nest), `${n(b.maxX - b.minX)} × ${n(b.maxY - b.minY)}`, p.quantity]));
+    rows.push(csvRow([p.id, p.name, opts.material, n(opts.thickness), sheetsOf(p.id, opts.nest), `${n(boxWidth(b))} × ${n(boxHeight(b))}`, p.quantity]));
   }
   return rows.join("\r\n") + "\r\n";
 }

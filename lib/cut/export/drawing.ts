@@ -1,13 +1,15 @@
 // The drawing every exporter writes: closed rings, circles and line segments on the five layers of
-// FAB.md §3.2 (CUT_OUTSIDE, CUT_INSIDE, ENGRAVE, DRILL, REFERENCE), in the output unit. Built from
+// docs/fabrication.md §3.2 (CUT_OUTSIDE, CUT_INSIDE, ENGRAVE, DRILL, REFERENCE), in the output unit. Built from
 // parts placed by a nest (rotation about the part's own origin first, then the translation — the
 // nester's convention) or laid out once each in a row. Cut shops ask for closed contours with no
-// duplicate or zero-length lines (FAB.md §3.2): rings are cleaned of edges under 2 µm, engraving
+// duplicate or zero-length lines (docs/fabrication.md §3.2): rings are cleaned of edges under 2 µm, engraving
 // strokes and drill holes are de-duplicated on their points rounded to 1 µm, and two identical
 // outlines (two parts on top of each other) stop the export.
 import type { SheetNestResult, SheetPlacement } from "@/lib/nest/types";
-import type { Pt } from "@/lib/track";
-import { bounds, cleanRing, placer, type Box } from "../geometry";
+import type { Pt } from "@/lib/geometry/point";
+import { bounds, boxRing, boxWidth, type Box } from "@/lib/geometry/box";
+import { placer, type Pose } from "@/lib/geometry/place";
+import { cleanRing } from "@/lib/geometry/ring";
 import type { ToolPath } from "../kerf";
 import type { Part, Region } from "../types";
 import { fromMm, type OutputUnits } from "../units";
@@ -27,11 +29,9 @@ export interface Drawing {
   texts: Array<{ layer: LayerName; x: number; y: number; height: number; text: string }>;
 }
 
-export interface PlacedPart {
+/** A part at a pose (rotation about its own origin, then the translation). */
+export interface PlacedPart extends Pose {
   part: Part;
-  rotation: number;
-  x: number;
-  y: number;
 }
 
 /** Shortest edge kept, mm: anything shorter is rounding noise (Clipper works on a 1 µm grid). */
@@ -66,7 +66,7 @@ export function buildDrawing(placed: PlacedPart[], opts: { units: OutputUnits; t
     all.push(...r);
     rings.push({ layer, points: r.map(U) });
   };
-  for (const frame of opts.frames ?? []) addRing("REFERENCE", [[frame.minX, frame.minY], [frame.maxX, frame.minY], [frame.maxX, frame.maxY], [frame.minX, frame.maxY]]);
+  for (const frame of opts.frames ?? []) addRing("REFERENCE", boxRing(frame));
   for (const { part, rotation, x, y } of placed) {
     const T = placer(rotation, x, y);
     const region: Region = opts.toolPaths?.get(part.id) ?? part.region;
@@ -117,7 +117,7 @@ export function partsRow(parts: Part[], opts: { gap: number; toolPaths?: Map<str
   for (const part of parts) {
     const b = bounds((opts.toolPaths?.get(part.id) ?? part.region).outer);
     out.push({ part, rotation: 0, x: x - b.minX, y: opts.gap - b.minY });
-    x += b.maxX - b.minX + opts.gap;
+    x += boxWidth(b) + opts.gap;
   }
   return out;
 }

@@ -1,7 +1,7 @@
 // DXF out with @tarikjabiri/dxf (AC1021, i.e. AutoCAD 2007): $INSUNITS 4 (mm) or 1 (in) in the
 // header (Autodesk DXF Reference, "$INSUNITS"), one LAYER table entry per layer, every ring a
 // closed LWPOLYLINE (group 70 flag 1), drill holes as CIRCLE, engraving as LINE entities so that
-// every polyline in the file is a closed contour (FAB.md §3.2: open paths read as slits); notes (the
+// every polyline in the file is a closed contour (docs/fabrication.md §3.2: open paths read as slits); notes (the
 // approval line) as TEXT on REFERENCE, which is never cut.
 import { DxfWriter, LWPolylineFlags, Units } from "@tarikjabiri/dxf";
 import { LAYERS, type Drawing, type LayerName } from "./drawing";

@@ -1,6 +1,6 @@
 // Every file of a cut job except the PNG previews (which need sharp: export/zip.ts), from one plan:
 // a parts DXF and SVG (each part once, in a row), a DXF and SVG per nested sheet, the bill of
-// materials and the README. File names carry the output unit, as shops ask (FAB.md §3.1).
+// materials and the README. File names carry the output unit, as shops ask (docs/fabrication.md §3.1).
 import { checkLoads, type LoadsReport } from "@/lib/loads";
 import { defaultLoadsSettings, loadsInputFor } from "@/lib/loads/settings";
 import type { SheetNestResult } from "@/lib/nest/types";
@@ -33,8 +33,10 @@ export interface JobInput {
   nestNote?: string;
   /** The client's approval of the revision; null or absent: the files are marked NOT APPROVED. */
   approval?: ApprovalStamp | null;
-  /** Why the shop stored this plan for production without an approval, if it did. */
+  /** Why the shop saved this plan for production without an approval, if it did. */
   unapprovedReason?: string | null;
+  /** The saved plan's number within its revision (absent: files made from a spec file). */
+  cutPlanNumber?: number;
 }
 
 export interface JobFile {
@@ -125,6 +127,7 @@ export function jobTextFiles(j: JobInput): JobTextFiles {
       nestNote: j.nestNote,
       approval: stamp,
       unapprovedReason: j.unapprovedReason ?? null,
+      cutPlanNumber: j.cutPlanNumber,
       loads: loadsOf(j),
       loadsFromDefaults: j.loadsFromDefaults ?? !j.loads,
     }),

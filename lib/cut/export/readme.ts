@@ -3,7 +3,7 @@
 // the sheets and their utilisation, the parts, the warnings, and the cautions.
 import type { SheetNestResult } from "@/lib/nest/types";
 import { MODE_NAMES, type SolveResult } from "@/lib/track";
-import { bounds } from "../geometry";
+import { bounds } from "@/lib/geometry/box";
 import type { RunPlan } from "../plan";
 import { insideRadius, ROTATION_LABELS, type CutSettings } from "../settings";
 import type { CutWarning, Part } from "../types";
@@ -25,6 +25,8 @@ export interface ReadmeInput {
   nestNote?: string;
   approval?: ApprovalStamp | null;
   unapprovedReason?: string | null;
+  /** The saved plan's number within its revision: "Cut plan: 2 of R3". */
+  cutPlanNumber?: number;
   /** The load-path check (lib/loads) whose cautions the README lists. */
   loads: LoadsReport;
   /** True: the check ran on the library's starting figures, not the revision's own settings. */
@@ -46,11 +48,12 @@ export function jobReadme(j: ReadmeInput): string {
   } else {
     const banner = `*** ${NOT_APPROVED} ***`;
     out.push(banner, "The client has not approved this revision. Do not cut production parts from these files.");
-    if (j.unapprovedReason) out.push(`Stored for production without approval; the shop's reason: ${j.unapprovedReason}`);
+    if (j.unapprovedReason) out.push(`Saved for production without approval; the shop's reason: ${j.unapprovedReason}`);
   }
   out.push("");
   out.push(`Design:      ${j.design ?? "(unnamed)"}; ${MODE_NAMES[j.result.mode].toLowerCase()}, drawn in ${j.result.units === "in" ? "inches" : "millimetres"}`);
-  out.push(`Revision:    ${j.revision ?? "not stored (made from a spec file)"}`);
+  out.push(`Revision:    ${j.revision ?? "not saved (made from a spec file)"}`);
+  if (j.cutPlanNumber !== undefined) out.push(`Cut plan:    ${j.cutPlanNumber} of R${j.revision}`);
   out.push(`Spec hash:   ${j.result.specHash} (SHA-256 of the canonical spec)`);
   out.push(`Engine:      ${j.result.engineVersion}`);
   out.push(`Files in:    ${u === "mm" ? "millimetres ($INSUNITS 4)" : "inches ($INSUNITS 1)"}`, "");

@@ -5,7 +5,7 @@
 // shared vertical face. Its inside corners get dogbones (lib/cut/inside-corners.ts) so the
 // mating sharp corners seat. The head is wider than the neck, so the joint carries tension along
 // the run as well as shear (the dovetail and "bowtie" keys of joinery work the same way).
-import type { Pt } from "@/lib/track";
+import type { Pt } from "@/lib/geometry/point";
 import type { CutSettings } from "../settings";
 
 export interface KeyShape {

@@ -6,7 +6,7 @@
 // the Bernstein form; a glyph with any other command is left out. Pure: it takes
 // the file's text, so the browser and the tests can use it; lib/cut/labels/font-file.ts reads the
 // file in Node. Glyph coordinates are font units with y up, as SVG fonts define them.
-import type { Pt } from "@/lib/track";
+import type { Pt } from "@/lib/geometry/point";
 
 export interface Glyph {
   advance: number;

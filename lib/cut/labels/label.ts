@@ -2,8 +2,8 @@
 // travel (the wheel rolls towards +x), in single strokes, as large as fits up to the asked cap
 // height and placed where the part has room (place.ts). If the full label does not fit, the id and
 // arrow alone are tried.
-import type { Pt } from "@/lib/track";
-import type { Box } from "../geometry";
+import type { Pt } from "@/lib/geometry/point";
+import type { Box } from "@/lib/geometry/box";
 import type { DrillHole, Region } from "../types";
 import type { GlyphTable } from "./font";
 import { findSpot } from "./place";

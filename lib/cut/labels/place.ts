@@ -3,8 +3,9 @@
 // tried nearest the preferred point first; a box fits when its corners are inside the outline and
 // outside every hole and no edge of the outline or of a hole crosses it (point-in-polygon and
 // segment-rectangle tests, O'Rourke, "Computational Geometry in C", 1998, §7.4).
-import type { Pt } from "@/lib/track";
-import { bounds, pointInRing, type Box } from "../geometry";
+import type { Pt } from "@/lib/geometry/point";
+import { bounds, boxRing, inflate, intersection, type Box } from "@/lib/geometry/box";
+import { pointInRing } from "@/lib/geometry/ring";
 import type { DrillHole, Region } from "../types";
 
 function segmentHitsBox(a: Pt, b: Pt, r: Box): boolean {
@@ -37,8 +38,8 @@ function ringHitsBox(ring: Pt[], r: Box): boolean {
 }
 
 export function boxFits(box: Box, region: Region, drill: DrillHole[], margin: number): boolean {
-  const r = { minX: box.minX - margin, minY: box.minY - margin, maxX: box.maxX + margin, maxY: box.maxY + margin };
-  const corners: Pt[] = [[r.minX, r.minY], [r.maxX, r.minY], [r.maxX, r.maxY], [r.minX, r.maxY]];
+  const r = inflate(box, margin);
+  const corners = boxRing(r);
   if (!corners.every((c) => pointInRing(c, region.outer))) return false;
   if (ringHitsBox(region.outer, r)) return false;
   for (const h of region.holes) {
@@ -56,9 +57,7 @@ export function boxFits(box: Box, region: Region, drill: DrillHole[], margin: nu
 /** The lower-left corner of a w × h box that fits (inside `within` too, if given), nearest `prefer` (the box's centre), or null. */
 export function findSpot(region: Region, drill: DrillHole[], w: number, h: number, opts: { margin: number; prefer: Pt; step?: number; maxTries?: number; within?: Box }): Pt | null {
   const r = bounds(region.outer);
-  const b = opts.within
-    ? { minX: Math.max(r.minX, opts.within.minX), minY: Math.max(r.minY, opts.within.minY), maxX: Math.min(r.maxX, opts.within.maxX), maxY: Math.min(r.maxY, opts.within.maxY) }
-    : r;
+  const b = opts.within ? intersection(r, opts.within) : r;
   const step = opts.step ?? Math.max(0.5, Math.min(w, h) / 2);
   const cx0 = b.minX + w / 2 + opts.margin;
   const cx1 = b.maxX - w / 2 - opts.margin;

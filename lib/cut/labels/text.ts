@@ -1,8 +1,8 @@
 // Lays out single-stroke text: each glyph's strokes scaled so the font's cap height is the asked
 // height, placed along a baseline at y = 0 by the glyphs' advance widths (SVG 1.1 §20.5). A
 // character the font lacks is drawn as "?" and reported.
-import type { Pt } from "@/lib/track";
-import { bounds, type Box } from "../geometry";
+import type { Pt } from "@/lib/geometry/point";
+import { bounds, boxHeight, boxWidth, type Box } from "@/lib/geometry/box";
 import type { GlyphTable } from "./font";
 
 export interface TextBlock {
@@ -55,14 +55,14 @@ export function layoutBlock(font: GlyphTable, lines: string[], capHeight: number
     for (const s of arrowStrokes(2 * capHeight, capHeight)) last.strokes.push(s.map(([x, y]) => [x + gap, y]));
     last.box = bounds(last.strokes.flat());
   }
-  const width = Math.max(...laid.map((l) => l.box.maxX - l.box.minX));
+  const width = Math.max(...laid.map((l) => boxWidth(l.box)));
   laid.forEach((l, i) => {
     const dy = -i * 1.6 * capHeight;
-    const dx = (width - (l.box.maxX - l.box.minX)) / 2 - l.box.minX;
+    const dx = (width - boxWidth(l.box)) / 2 - l.box.minX;
     for (const s of l.strokes) strokes.push(s.map(([x, y]) => [x + dx, y + dy]));
     missing.push(...l.missing);
   });
   const b = bounds(strokes.flat());
   const moved = strokes.map((s) => s.map(([x, y]): Pt => [x - b.minX, y - b.minY]));
-  return { strokes: moved, box: { minX: 0, minY: 0, maxX: b.maxX - b.minX, maxY: b.maxY - b.minY }, missing };
+  return { strokes: moved, box: { minX: 0, minY: 0, maxX: boxWidth(b), maxY: boxHeight(b) }, missing };
 }

@@ -1,7 +1,7 @@
 // Ellipse and circle wheels with the axle at any inner point, measured by the exact ray–conic
 // intersection (a quadratic in the distance along the ray). With the axle at a focus this is the
 // focal polar form r = a(1 − e²)/(1 + e cos t), whose road is the exact cosine
-// y = −a + a·e·cos(x/b) (Hall & Wagon 1992; MATH.md §3).
+// y = −a + a·e·cos(x/b) (Hall & Wagon 1992; docs/math.md §3).
 // Start pose: the major axis is vertical; "focus" is the lower focus, so the near vertex touches the
 // track at x = 0; an axle {x, y} is given relative to the ellipse's centre in that pose.
 

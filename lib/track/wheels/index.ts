@@ -7,8 +7,8 @@ import { polarWheel } from "./polar";
 import { polygonWheel } from "./polygon";
 import type { Wheel } from "./wheel";
 
-export type { Wheel, WheelPiece } from "./wheel";
-export { ray, TAU, wrapAngle } from "./wheel";
+export type { Wheel } from "./wheel";
+export { ray, TAU } from "./wheel";
 
 export function buildWheel(spec: WheelSpec): Wheel {
   switch (spec.kind) {

@@ -1,5 +1,5 @@
 // Wheels given as a polar formula r(theta), theta being the body angle t from the ray that touches
-// the track at the start (the convention of Hall & Wagon 1992 and MATH.md §1.1). The formula goes
+// the track at the start (the convention of Hall & Wagon 1992 and docs/math.md §1.1). The formula goes
 // through the locked-down compiler in formula.ts, then is checked on a fine grid to be finite,
 // positive and 2π-periodic; the first failing angle is named in the error.
 

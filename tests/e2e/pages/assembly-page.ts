@@ -1,7 +1,7 @@
 import type { Page } from "playwright-core";
 import { baseUrl } from "../support/browser";
 
-/** The installer's assembly sheet of a stored cut plan, and the project's build log. */
+/** The installer's assembly sheet of a saved cut plan, and the project's build log. */
 export class AssemblyPage {
   constructor(private readonly page: Page) {}
 

@@ -1,7 +1,7 @@
 import type { Page } from "playwright-core";
 import { baseUrl } from "../support/browser";
 
-/** The parts-and-cut-files page of a design. */
+/** The cut plan page of a design: its parts, the nest and the saved cut plan's files. */
 export class CutPlanPage {
   constructor(private readonly page: Page) {}
 
@@ -10,8 +10,9 @@ export class CutPlanPage {
     await this.page.goto(`${baseUrl}/projects`);
     await this.page.getByRole("link", { name: projectName }).click();
     const row = this.page.getByRole("row").filter({ hasText: designName });
-    await row.getByRole("link", { name: "Parts and cut files" }).click();
-    await this.page.getByRole("heading", { name: `Parts and cut files: ${designName}` }).waitFor();
+    // The "Cut plan" column names the latest revision's saved plan ("Cut plan 1 of R1"), or offers to make one.
+    await row.getByRole("link", { name: /cut plan/i }).click();
+    await this.page.getByRole("heading", { name: `Cut plan: ${designName}` }).waitFor();
   }
 
   async choose(label: string, option: string) {
@@ -39,8 +40,8 @@ export class CutPlanPage {
     return this.page.getByTestId("nest-summary");
   }
 
-  async store() {
-    await this.page.getByRole("button", { name: "Store as this revision's cut plan" }).click();
+  async save() {
+    await this.page.getByRole("button", { name: "Save as this revision's cut plan" }).click();
     await this.page.getByTestId("save-message").waitFor();
     return this.page.getByTestId("save-message").innerText();
   }

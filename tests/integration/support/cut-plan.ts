@@ -1,4 +1,4 @@
-// The demo job's cut-plan request (BRIEF.md: 400 mm square wheels on a 6.0 m run, 18 mm birch
+// The demo job's cut-plan request (docs/product.md §3: 400 mm square wheels on a 6.0 m run, 18 mm birch
 // plywood on 2440 × 1220 mm sheets, a 6 mm router), and a nest that holds, made the way a browser
 // would (here with the plain shelf layout of lib/cut).
 import { eq } from "drizzle-orm";

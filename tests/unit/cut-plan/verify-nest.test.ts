@@ -1,7 +1,8 @@
 // The server's check of a nest: hand-made layouts of 100 × 50 rectangles whose gaps are known
 // exactly (plain arithmetic on axis-aligned boxes), so each verdict can be worked out by hand.
 import { describe, expect, it } from "vitest";
-import { checkNest, placeRing } from "@/lib/cut-plan/verify-nest";
+import { checkNest } from "@/lib/cut-plan/verify-nest";
+import { placeRing } from "@/lib/geometry/place";
 import type { NestItem, SheetPlacement } from "@/lib/nest/types";
 
 const rect: NestItem = { id: "T01", polygon: [[0, 0], [100, 0], [100, 50], [0, 50]], quantity: 2, rotations: [0, 180] };

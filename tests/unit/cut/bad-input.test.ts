@@ -19,7 +19,7 @@ function cutError(f: () => unknown): CutError {
 const build = (settings: object) => () => buildCutParts(SQUARE_SPEC, squareResult(), { ...DEMO_SETTINGS, ...settings });
 
 describe("bad input", () => {
-  it("has sensible defaults (FAB.md §4: 2440 × 1220 sheets, a 6 mm router cutter, 10 mm margin)", () => {
+  it("has sensible defaults (docs/fabrication.md §4: 2440 × 1220 sheets, a 6 mm router cutter, 10 mm margin)", () => {
     expect(DEFAULT_CUT_SETTINGS.sheet).toEqual({ length: 2440, width: 1220, thickness: 18, grain: "length" });
     expect(DEFAULT_CUT_SETTINGS.machine.kerf).toBe(6);
     expect(DEFAULT_CUT_SETTINGS.margin).toBe(10);

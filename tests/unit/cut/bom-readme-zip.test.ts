@@ -101,7 +101,7 @@ describe("BOM, README and ZIP", () => {
     expect(readme).toMatch(/Source: ISO 13854:2017/);
     expect(readme).toContain("the authority having jurisdiction");
     expect(readme).toContain("licensed professional engineer");
-    // The square needs μ = tan(45° + atan 0.1) = 1.22 at its corners with the default traction (T7 of the notes).
+    // The square needs μ = tan(45° + atan 0.1) = 1.22 at its corners with the default traction (docs/safety.md T7).
     expect(readme).toMatch(/μ needed 1\.22 with traction H\/V = 0\.1/);
     // No approval came with this job: it says so at the top.
     expect(readme.split("\n").slice(0, 4).join("\n")).toContain("*** NOT APPROVED — FOR REVIEW ONLY ***");

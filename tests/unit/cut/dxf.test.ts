@@ -1,6 +1,6 @@
 // DXF files read back by an independent parser: ezdxf 0.18.1 (strict readfile + audit, run by
 // tests/reference/dxf_check.py with /usr/bin/python3), and dxf-parser 1.1.2 in-process. Checks
-// follow FAB.md §6.5: $INSUNITS (Autodesk DXF Reference: 4 = mm, 1 = in), layers in the LAYER
+// follow docs/fabrication.md §6.5: $INSUNITS (Autodesk DXF Reference: 4 = mm, 1 = in), layers in the LAYER
 // table, closed polylines, no duplicate or zero-length segments (end points hashed at 1 µm), and the
 // geometry equal to the parts' (which the track and wheel tests tie to the engine).
 import { mkdtempSync, writeFileSync } from "node:fs";
@@ -13,7 +13,7 @@ import { buildCutParts, type CutPlanResult } from "@/lib/cut/plan";
 import { kerfParts, type ToolPath } from "@/lib/cut/kerf";
 import { buildDrawing, partsRow, sheetParts } from "@/lib/cut/export/drawing";
 import { drawingToDxf } from "@/lib/cut/export/dxf";
-import { ringArea } from "@/lib/cut/geometry";
+import { ringArea } from "@/lib/geometry/ring";
 import type { SheetNestResult } from "@/lib/nest/types";
 import { DEMO_SETTINGS, font, rowNest, SQUARE_SPEC, squareResult } from "./support/fixtures";
 import { ezdxfCheck, type EzEntity, type EzFile } from "./support/dxf-check";
@@ -189,7 +189,7 @@ describe("DXF export", () => {
     const byId = new Map(plan.parts.map((p) => [p.id, p]));
     const expected = nest.sheets[0].placements.map((pl) => ringArea(paths.get(pl.id)!.outer)).sort((a, b) => a - b);
     expect(outs.map((e) => e.area!).sort((a, b) => a - b).map((a) => Number(a.toFixed(3)))).toEqual(expected.map((a) => Number(a.toFixed(3))));
-    // Each tool path is larger than its part by about perimeter × k/2 (FAB.md §4.1).
+    // Each tool path is larger than its part by about perimeter × k/2 (docs/fabrication.md §4.1).
     for (const pl of nest.sheets[0].placements) expect(ringArea(paths.get(pl.id)!.outer)).toBeGreaterThan(ringArea(byId.get(pl.id)!.region.outer));
   });
 

@@ -1,9 +1,10 @@
-// Concave-corner detection, dogbones (FAB.md §4.2) and the rolling-surface warnings.
+// Concave-corner detection, dogbones (docs/fabrication.md §4.2) and the rolling-surface warnings.
 import { describe, expect, it } from "vitest";
 import type { Pt } from "@/lib/track";
 import { concaveCorners, jointNeedsRelief } from "@/lib/cut/inside-corners";
 import { addDogbones, reflexVertices } from "@/lib/cut/dogbone";
-import { distToRing, ringArea } from "@/lib/cut/geometry";
+import { ringArea } from "@/lib/geometry/ring";
+import { distToRing } from "@/lib/geometry/segment";
 import { buildCutParts } from "@/lib/cut/plan";
 import { parseCutSettings } from "@/lib/cut/settings";
 import { DEMO_SETTINGS, SQUARE_SPEC, squareResult } from "./support/fixtures";

@@ -3,9 +3,9 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { loadClipper, type ClipperLib } from "@/lib/geometry/clipper";
 import { ARC_TOLERANCE, kerfParts, kerfRegion } from "@/lib/cut/kerf";
-import { circleRing, orient, perimeter, ringArea, signedArea } from "@/lib/cut/geometry";
+import { circleRing, orient, perimeter, ringArea, signedArea, type Ring } from "@/lib/geometry/ring";
 import { buildCutParts } from "@/lib/cut/plan";
-import type { Part, Ring } from "@/lib/cut/types";
+import type { Part } from "@/lib/cut/types";
 import { DEMO_SETTINGS, SQUARE_SPEC, squareResult } from "./support/fixtures";
 import { jBuffer, jDistance, jHausdorff, jPoint, jPolygon, jRing } from "./support/geometry-check";
 
@@ -17,11 +17,11 @@ beforeAll(async () => {
 const rect: Ring = [[0, 0], [100, 0], [100, 50], [0, 50]];
 
 describe("kerf offsets", () => {
-  it("grows a 100 × 50 rectangle by d = 1.5 to A + P·d + πd² = 5457.0686 (FAB.md §6.1)", () => {
+  it("grows a 100 × 50 rectangle by d = 1.5 to A + P·d + πd² = 5457.0686 (docs/fabrication.md §6.1)", () => {
     const t = kerfRegion(lib, { outer: rect, holes: [] }, 3);
     const exact = 5000 + 300 * 1.5 + Math.PI * 1.5 ** 2; // 5457.0686, the closed form for a round-joined offset of a convex ring
     expect(exact).toBeCloseTo(5457.0686, 4);
-    // FAB.md §6.1: |A − A_exact| ≤ P · arcTolerance.
+    // docs/fabrication.md §6.1: |A − A_exact| ≤ P · arcTolerance.
     expect(Math.abs(ringArea(t.outer) - exact)).toBeLessThanOrEqual(perimeter(t.outer) * ARC_TOLERANCE);
     expect(signedArea(t.outer)).toBeGreaterThan(0);
     const j = jBuffer(jPolygon({ outer: rect, holes: [] }), 1.5).getArea();
@@ -48,7 +48,7 @@ describe("kerf offsets", () => {
       const A = ringArea(p.region.outer);
       const Ak = ringArea(t.outer);
       const P = perimeter(p.region.outer);
-      // Outer ring area grows by about perimeter × k/2 (FAB.md §4.1's sign check).
+      // Outer ring area grows by about perimeter × k/2 (docs/fabrication.md §4.1's sign check).
       expect((Ak - A) / (P * 3)).toBeGreaterThan(0.98);
       expect((Ak - A) / (P * 3)).toBeLessThan(1.02);
       const j = jBuffer(jPolygon({ outer: p.region.outer, holes: [] }), 3);

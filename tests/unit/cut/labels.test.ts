@@ -6,7 +6,7 @@ import { parseStrokePath, type GlyphTable } from "@/lib/cut/labels/font";
 import { HERSHEY_SANS_PATH } from "@/lib/cut/labels/font-file";
 import { arrowStrokes, layoutLine } from "@/lib/cut/labels/text";
 import { buildCutParts } from "@/lib/cut/plan";
-import { pointInRing } from "@/lib/cut/geometry";
+import { pointInRing } from "@/lib/geometry/ring";
 import { DEMO_SETTINGS, font, SQUARE_SPEC, squareResult } from "./support/fixtures";
 import { jDistance, jPoint, jRing } from "./support/geometry-check";
 

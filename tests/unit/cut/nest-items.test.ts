@@ -1,10 +1,10 @@
-// What the nester receives (nestItemsFor) and the fallback shelf layout, checked the way FAB.md §6.4
+// What the nester receives (nestItemsFor) and the fallback shelf layout, checked the way docs/fabrication.md §6.4
 // says a nest is checked: every copy placed once, in an allowed rotation, inside the sheet less its
 // margin, no two parts overlapping and at least the spacing apart (polyclip-ts, jsts).
 import { beforeAll, describe, expect, it } from "vitest";
 import type { Pt } from "@/lib/track";
 import { buildCutParts, nestItemsFor, type CutPlanResult } from "@/lib/cut/plan";
-import { perimeter, ringArea } from "@/lib/cut/geometry";
+import { perimeter, ringArea } from "@/lib/geometry/ring";
 import { shelfLayout } from "@/lib/cut/shelf-layout";
 import { kerfParts, type ToolPath } from "@/lib/cut/kerf";
 import { NEST_OUTLINE_TOLERANCE } from "@/lib/cut/nest-outline";
@@ -35,7 +35,7 @@ describe("nest items and the shelf layout", () => {
       // The nest outline holds the whole tool path (checked by polyclip-ts, not by our own code) …
       const tool = paths.get(p.id)!.outer;
       expect(pcDifferenceArea({ outer: tool, holes: [] }, { outer: it.polygon, holes: [] })).toBeLessThan(1e-6);
-      // … and grows the nominal outline by about perimeter × k/2 (FAB.md §4.1), plus at most 2ε of
+      // … and grows the nominal outline by about perimeter × k/2 (docs/fabrication.md §4.1), plus at most 2ε of
       // coarsening (nest-outline.ts: Douglas–Peucker within ε, then grown by ε).
       const grown = (ringArea(it.polygon) - ringArea(p.region.outer)) / perimeter(p.region.outer);
       expect(grown).toBeGreaterThan(3 * 0.98);

@@ -6,7 +6,7 @@ import { tileRun } from "@/lib/track";
 import { buildRun } from "@/lib/cut/run-length";
 import { parseCutSettings } from "@/lib/cut/settings";
 import { CutError } from "@/lib/cut/errors";
-import { yAt } from "@/lib/cut/geometry";
+import { yAt } from "@/lib/geometry/polyline";
 import { squareResult } from "./support/fixtures";
 
 const A = 200;

@@ -1,10 +1,13 @@
-// The demo "Square-wheel trike run" (BRIEF.md) made into track parts, checked against the engine's
+// The demo "Square-wheel trike run" (docs/product.md §3) made into track parts, checked against the engine's
 // profile, the closed-form catenary (Hall & Wagon 1992) and an independent polygon library
 // (polyclip-ts) for the joints.
 import { beforeAll, describe, expect, it } from "vitest";
 import { tileRun, type Pt } from "@/lib/track";
 import { buildCutParts, type CutPlanResult } from "@/lib/cut/plan";
-import { bounds, ringArea, signedArea, translate, yAt } from "@/lib/cut/geometry";
+import { bounds } from "@/lib/geometry/box";
+import { translate } from "@/lib/geometry/place";
+import { yAt } from "@/lib/geometry/polyline";
+import { ringArea, signedArea } from "@/lib/geometry/ring";
 import { keyShape } from "@/lib/cut/joints/key";
 import { spliceGeometry } from "@/lib/cut/joints/dowel";
 import { jointZone } from "@/lib/cut/supports";

@@ -5,7 +5,7 @@ import { solve } from "@/lib/track";
 import { buildCutParts } from "@/lib/cut/plan";
 import { parseCutSettings } from "@/lib/cut/settings";
 import { buildWheelParts } from "@/lib/cut/wheel-parts";
-import { ringArea, signedArea } from "@/lib/cut/geometry";
+import { ringArea, signedArea } from "@/lib/geometry/ring";
 import { CutError } from "@/lib/cut/errors";
 import { DEMO_SETTINGS, font, SQUARE_SPEC, squareResult } from "./support/fixtures";
 import { jDistance, jPoint, jPolygon, jRing } from "./support/geometry-check";

@@ -1,4 +1,4 @@
-// The load-path checks against the test vectors T1–T12 of the notes behind them, each with its own
+// The load-path checks against the test vectors T1–T12 of docs/safety.md §6, each with its own
 // source beside it, and a circle on a flat track against the Hertz closed form.
 import { describe, expect, it } from "vitest";
 import { checkLoads } from "@/lib/loads";
@@ -35,7 +35,7 @@ describe("Hertz line contact", () => {
     expect(Math.abs(c.depth - 0.041)).toBeLessThan(0.0005); // at 0.041 in (Norton Ex. 7-2)
   });
 
-  it("T2: the same in SI (notes' conversion of Norton Ex. 7-2): a = 1.315 mm, p_max = 484.3 MPa", () => {
+  it("T2: the same in SI (Norton Ex. 7-2 converted, docs/safety.md T2): a = 1.315 mm, p_max = 484.3 MPa", () => {
     const steel = { modulus: psiToMpa(30e6), poisson: 0.28 }; // 206.84 GPa
     const c = lineContact(lbfToN(5000), inToMm(0.875), inToMm(6), contactModulus(steel, steel));
     expect(Math.abs(c.halfWidth - 1.315)).toBeLessThan(0.0005);
@@ -57,7 +57,7 @@ describe("Hertz line contact", () => {
     }
   });
 
-  it("a circle of 150 mm on its flat road, steel on steel, 1000 N over 50 mm (the notes' derived vector: E* 115.4 GPa, a 0.182 mm, p₀ 70.0 MPa, τ 21.0 MPa at 0.143 mm)", () => {
+  it("a circle of 150 mm on its flat road, steel on steel, 1000 N over 50 mm (the derived vector of docs/safety.md §2.3: E* 115.4 GPa, a 0.182 mm, p₀ 70.0 MPa, τ 21.0 MPa at 0.143 mm)", () => {
     const report = checkLoads(input({ spec: { mode: "track-for-wheel", wheel: { kind: "circle", radius: 150 } }, load: { wheelLoadN: 1000 } }));
     const c = report.contact;
     expect(rel(c.radiusMm, 150)).toBeLessThan(1e-9);
@@ -93,7 +93,7 @@ describe("grip", () => {
     [5, 0.7265],
     [6, 0.5774],
     [8, 0.4142],
-  ])("T5: a regular %i-gon under a vertical load needs μ = tan(π/n) = %f (friction cone; the notes' table)", (n, mu) => {
+  ])("T5: a regular %i-gon under a vertical load needs μ = tan(π/n) = %f (friction cone; docs/safety.md T5)", (n, mu) => {
     const report = checkLoads(input({ spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: n, inradius: 100 } } }));
     expect(Math.abs(report.grip.needed - mu)).toBeLessThan(5e-5);
   });
@@ -143,7 +143,7 @@ describe("dynamics", () => {
     expect(rel(polarSecondMoment([[-1, -1], [1, -1], [1, 1], [-1, 1]]), 16 / 6)).toBeLessThan(1e-14);
   });
 
-  it("the wheel's own inertia adds to the traction the corner needs (the notes' §2.1 example: I 0.5 kg·m², 1.5 m/s, r 0.15 m, 400 N → h 0.29)", () => {
+  it("the wheel's own inertia adds to the traction the corner needs (the example of docs/safety.md §2.1: I 0.5 kg·m², 1.5 m/s, r 0.15 m, 400 N → h 0.29)", () => {
     // H = I·α/ρ with α = v² tan ψ / ρ² at the corner ρ = r√2: 0.5 × 50 / 0.2121 / 400 = 0.295.
     const h = (0.5 * alphaAt(1.5, 0.15 * Math.SQRT2, 1)) / (0.15 * Math.SQRT2) / 400;
     expect(Math.abs(h - 0.29)).toBeLessThan(0.01);
@@ -183,13 +183,13 @@ describe("track deflection", () => {
 });
 
 describe("interference and units", () => {
-  it("T11: the triangle's vertex cuts the next hump (the notes' sampled check: 0.095 r), and it is flagged", () => {
+  it("T11: the triangle's vertex cuts the next hump (the sampled check of docs/safety.md T11: 0.095 r), and it is flagged", () => {
     const report = checkLoads(input({ spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: 3, inradius: 1 } } }));
     const c = report.cautions.find((x) => x.check === "interference");
     expect(c).toBeDefined();
     expect(c!.signal).toBe("CAUTION"); // push-along; WARNING on a ride-on
     expect(checkLoads(input({ use: "ride-on", spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: 3, inradius: 1 } } })).cautions.find((x) => x.check === "interference")!.signal).toBe("WARNING");
-    // The notes' 0.095 r is how far the vertex dips below the road, measured straight down; the
+    // The 0.095 r of docs/safety.md T11 is how far the vertex dips below the road, measured straight down; the
     // engine measures along the ray from the axle, which is shorter for a vertex coming in at a
     // slant (0.064 r), and more than the shortest distance to the road (0.032 r, sampled by hand).
     const depth = Number(c!.figure.replace(/ mm$/, ""));

@@ -24,8 +24,8 @@ function toPascalCase(raw: Raw) {
 }
 
 describe("loadInstance", () => {
-  // Σ item area: jakobs1 392, shapes0 1596, fu 1083 (FAB.md §1.2 B and §6.7, computed from the
-  // instance files); piece counts 25, 43, 12 (FAB.md §6.7; Jakobs 1996, Oliveira et al. 2000, Fujita et al. 1993).
+  // Σ item area: jakobs1 392, shapes0 1596, fu 1083 (docs/fabrication.md §1.2 B and §6.7, computed from the
+  // instance files); piece counts 25, 43, 12 (docs/fabrication.md §6.7; Jakobs 1996, Oliveira et al. 2000, Fujita et al. 1993).
   it.each([
     ["jakobs1", 392, 25],
     ["shapes0", 1596, 43],

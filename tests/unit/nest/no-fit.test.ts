@@ -35,7 +35,7 @@ describe("Minkowski sum", () => {
   it("10 × 10 square ⊕ 5 × 5 square = 15 × 15 = 225 (closed form: sum of convex boxes)", () => {
     const a = toPath(sq(0, 0, 10), S);
     const b = toPath(sq(0, 0, 5), S);
-    // Clipper alone returns the swept annulus, outer 225 less a hole of 25 (FAB.md §6.3).
+    // Clipper alone returns the swept annulus, outer 225 less a hole of 25 (docs/fabrication.md §6.3).
     expect(netArea(lib.minkowskiSumPath(b, a, true))).toBeCloseTo(200, 9);
     const sum = minkowskiSum(lib, a, b);
     expect(sum).toHaveLength(1);

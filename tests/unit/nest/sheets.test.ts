@@ -4,7 +4,7 @@ import { describe, expect, it } from "vitest";
 import { loadInstance, nestOnSheets, type NestItem, type SheetNestResult } from "@/lib/nest";
 import { expectValidLayout, readFixture } from "./layout-check";
 
-const sheet = { width: 2440, height: 1220 }; // 8 × 4 ft plywood (FAB.md §4.3)
+const sheet = { width: 2440, height: 1220 }; // 8 × 4 ft plywood (docs/fabrication.md §4.3)
 const rect = (id: string, w: number, h: number, quantity: number, rotations = [0, 90]): NestItem => ({
   id,
   polygon: [[0, 0], [w, 0], [w, h], [0, h]],

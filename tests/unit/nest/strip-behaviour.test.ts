@@ -11,7 +11,7 @@ describe("nestStrip", () => {
   it("fu: every copy once, in its allowed rotations, inside the strip, no overlaps", async () => {
     const result = await nestStrip({ items: fu.items, height: fu.height, seconds: 3, seed: 3 });
     const { utilisation } = expectValidStrip(fu.items, result, fu.height);
-    // Ceiling: the best fu layout known is 92.40 % (arXiv:2509.13329 logs, FAB.md §1.2 A).
+    // Ceiling: the best fu layout known is 92.40 % (arXiv:2509.13329 logs, docs/fabrication.md §1.2 A).
     expect(utilisation).toBeLessThan(0.925);
     expect(result.placed).toBe(12);
   });

@@ -22,8 +22,8 @@ describe("strip nesting targets (fixed iteration budget)", () => {
     // Target 85 %, acceptance requirement. Published best: Gardeyn, Vanden Berghe & Wauters 2025
     // (arXiv:2509.13329), 89.08 % average of 100 runs of 1200 s (the issue text rounds it to 89.1 %).
     expect(utilisation).toBeGreaterThanOrEqual(0.85);
-    // Sanity ceiling (FAB.md §6.4): the best layout known, L = 10.980 at this height (89.25 %,
-    // FAB.md §1.2 A), is below 89.3 %; anything above means an overlap or an area bug.
+    // Sanity ceiling (docs/fabrication.md §6.4): the best layout known, L = 10.980 at this height (89.25 %,
+    // docs/fabrication.md §1.2 A), is below 89.3 %; anything above means an overlap or an area bug.
     expect(utilisation).toBeLessThan(0.893);
   }, 600_000);
 
@@ -35,7 +35,7 @@ describe("strip nesting targets (fixed iteration budget)", () => {
     expect(result.iterations).toBe(SHAPES0_ITERATIONS);
     // Target 63 %, acceptance requirement. Published: arXiv:2509.13329, 68.59 % average (issue text 68.6 %).
     expect(utilisation).toBeGreaterThanOrEqual(0.63);
-    // Sanity ceiling (FAB.md §6.4): the best known, 69.98 % (sparrow's record, FAB.md §1.2 A notes), is below 70 %.
+    // Sanity ceiling (docs/fabrication.md §6.4): the best known, 69.98 % (sparrow's record, docs/fabrication.md §1.2 A), is below 70 %.
     expect(utilisation).toBeLessThan(0.7);
   }, 600_000);
 });

@@ -121,3 +121,26 @@ describe("hostile and unusable files", () => {
     expect(refusals).toBeGreaterThan(runs / 4);
   });
 });
+
+describe("the readers behind the packages (saxes, svg-pathdata, dxf-parser)", () => {
+  const svgText = (body: string) => `<svg xmlns="http://www.w3.org/2000/svg">${body}<rect width="10" height="10"/></svg>`;
+  const dxfText = (entities: string[]) => ["0", "SECTION", "2", "ENTITIES", ...entities, "0", "ENDSEC", "0", "EOF"].join("\n");
+
+  it("names the line of a bare & and of an undeclared entity in text, in our words", () => {
+    refused(importOutline({ name: "a.svg", text: svgText("\n<desc>Tom & Jerry</desc>") }, W), /^line 2: a bare "&" \(write &amp;\)\.$/);
+    refused(importOutline({ name: "a.svg", text: svgText("<desc>&nbsp;</desc>") }, W), /&nbsp; is not one of XML's predefined entities/);
+    refused(importOutline({ name: "a.svg", text: svgText('<path d="M0 0" d="M1 1"/>') }, W), /<path> gives the attribute d twice/);
+    refused(importOutline({ name: "a.svg", text: svgText("<g><!DOCTYPE x></g>") }, W), /DOCTYPE declaration, which is refused/);
+  });
+
+  it("skips raw text that is not XML, and reads nothing after the root closes", () => {
+    const r = ok(importOutline({ name: "a.svg", text: `\n <?xml version="1.0"?>${svgText("<style>a > b { }</style><script>if (a < b && c) {}</script>")}trailing <junk` }, W));
+    expect(r.points).toHaveLength(4);
+  });
+
+  it("reads an LWPOLYLINE as listed (vertex count and vertex identifiers aside) and refuses groups out of order", () => {
+    const square = ["0", "LWPOLYLINE", "70", "1", "10", "0", "20", "0", "91", "1", "10", "1", "20", "0", "91", "2", "10", "1", "20", "1", "10", "0", "20", "1"];
+    expect(ok(importOutline({ name: "a.dxf", text: dxfText(square) }, W)).points).toHaveLength(4);
+    refused(importOutline({ name: "a.dxf", text: dxfText(["0", "LINE", "10", "0", "30", "0", "20", "0", "11", "1", "21", "1"]) }, W), /DXF line 7: in the LINE, group 10 must be followed by group 20/);
+  });
+});

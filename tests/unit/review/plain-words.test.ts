@@ -16,7 +16,7 @@ describe("plain figures", () => {
     const r = solve(SQUARE);
     const f = plainFigures({ mode: r.mode, units: r.units, check: summarise(r).check });
     const grip = f.find((x) => x.key === "grip")!;
-    // The friction a regular n-gon needs on its road is tan(π/n): 1 for a square (SAFETY.md §2.1, the friction cone).
+    // The friction a regular n-gon needs on its road is tan(π/n): 1 for a square (docs/safety.md §2.1, the friction cone).
     expect(grip.text).toContain(r.check.frictionDemand.max.toFixed(2));
     expect(r.check.frictionDemand.max).toBeCloseTo(1, 2);
     expect(grip.ok).toBe(false);

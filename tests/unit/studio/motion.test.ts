@@ -138,7 +138,7 @@ describe("a triangle on its own track cuts in, and the view can point at it", ()
   it("places the interference spot inside the run at the pose where it happens", () => {
     const r = solve({ mode: "track-for-wheel", wheel: { kind: "polygon", sides: 3, side: 300 } });
     // A triangle's corner digs into the next arc of its own road (Hall & Wagon 1992 on n = 3;
-    // BRIEF.md asks the tool to say so); the engine reports the depth and where.
+    // docs/product.md §2 asks the tool to say so); the engine reports the depth and where.
     expect(r.check.interference.depth).toBeGreaterThan(0);
     const loc = interferenceLocation(r)!;
     expect(loc).not.toBeNull();

@@ -61,7 +61,7 @@ describe("panels render", () => {
 
   it("plots friction with the 0.6 guide and labelled axes", () => {
     const html = renderToStaticMarkup(createElement(CheckPlots, { result: sine }));
-    expect(html).toContain("Friction demand |dy/dx|");
+    expect(html).toContain("Grip needed (μ = |dy/dx|)");
     expect(html).toContain("axle x (mm)");
     expect(html).toContain('stroke="#e8590c"');
     expect(html).toContain("Track curvature");

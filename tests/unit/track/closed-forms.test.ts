@@ -23,10 +23,10 @@ describe("track for a regular n-gon (Hall & Wagon 1992: y = −A cosh(x/A))", ()
     expect(r.check.closureError).toBeLessThan(1e-10);
   });
 
-  it("MATH.md §2.2 check values (mpmath 1.3.0): square period 1.762747174039086050, hexagon ln 3", () => {
+  it("docs/math.md §2.2 check values (mpmath 1.3.0): square period 1.762747174039086050, hexagon ln 3", () => {
     expect(Math.abs(solve({ mode: "track-for-wheel", wheel: { kind: "polygon", sides: 4, inradius: 1 } }).period! - 1.76274717403908605)).toBeLessThan(1e-15);
     expect(Math.abs(solve({ mode: "track-for-wheel", wheel: { kind: "polygon", sides: 6, inradius: 1 } }).period! - Math.log(3))).toBeLessThan(1e-15);
-    // Side 400 mm square (BRIEF demo): bump height (s/2)(√2 − 1), MATH.md §2.2.
+    // Side 400 mm square (the demo of docs/product.md §3): bump height (s/2)(√2 − 1), docs/math.md §2.2.
     const s = solve({ mode: "track-for-wheel", wheel: { kind: "polygon", sides: 4, side: 400 } });
     expect(rel(s.depth!, 200 * (Math.SQRT2 - 1))).toBeLessThan(1e-13);
   });
@@ -40,7 +40,7 @@ describe("track for a regular n-gon (Hall & Wagon 1992: y = −A cosh(x/A))", ()
     expect(sq.warnings.map((w) => w.code)).not.toContain("interference");
   });
 
-  it("friction demand at the corners is tan(π/n) (the cusp slope, MATH.md §2.1)", () => {
+  it("friction demand at the corners is tan(π/n) (the cusp slope, docs/math.md §2.1)", () => {
     const sq = solve({ mode: "track-for-wheel", wheel: { kind: "polygon", sides: 4, inradius: 1 } });
     expect(Math.abs(sq.check.frictionDemand.max - 1)).toBeLessThan(1e-9);
     expect(sq.warnings.map((w) => w.code)).toEqual(expect.arrayContaining(["friction", "sharp-corner"]));
@@ -59,23 +59,23 @@ describe("ellipse about a focus (Hall & Wagon 1992): y = −a + a·e·cos(x/b), 
     expect(rel(r.depth!, 2 * a * e)).toBeLessThan(1e-12);
     expect(maxDev(r.track!.points, (x) => -a + a * e * Math.cos(x / b))).toBeLessThan(1e-9 * a);
     expect(r.check.axleDeviation).toBeLessThan(1e-6 * a);
-    // Curvature radii: ellipse b²/a at the vertices; road b²/(a e) at crest and trough (MATH.md §3.1).
+    // Curvature radii: ellipse b²/a at the vertices; road b²/(a e) at crest and trough (docs/math.md §3.1).
     expect(rel(r.check.minCurvatureRadius.wheel, (b * b) / a)).toBeLessThan(1e-6);
     expect(rel(r.check.minCurvatureRadius.track!, (b * b) / (a * e))).toBeLessThan(1e-6);
     // Friction demand max |r′|/r = e/√(1 − e²) for the focal ellipse (derived: r'/r = e sin t/(1 + e cos t)).
     expect(rel(r.check.frictionDemand.max, e / Math.sqrt(1 - e * e))).toBeLessThan(1e-7);
   });
 
-  it("MATH.md §4 centred ellipse a = 2, b = 1: period 4.3130312949992864709 (mpmath 1.3.0)", () => {
+  it("docs/math.md §4 centred ellipse a = 2, b = 1: period 4.3130312949992864709 (mpmath 1.3.0)", () => {
     const r = solve({ mode: "track-for-wheel", wheel: { kind: "ellipse", semiMajor: 2, semiMinor: 1, axle: "centre" } });
     expect(Math.abs(r.period! - 4.3130312949992864709)).toBeLessThan(1e-13);
   });
 
-  it("MATH.md §1.8 generic polar wheel 1 + 0.3cos + 0.1 sin 2θ: x(1) = 1.323248637269726 (mpmath 1.3.0)", () => {
+  it("docs/math.md §1.8 generic polar wheel 1 + 0.3cos + 0.1 sin 2θ: x(1) = 1.323248637269726 (mpmath 1.3.0)", () => {
     const r = solve({ mode: "track-for-wheel", wheel: { kind: "polar", r: "1 + 0.3*cos(theta) + 0.1*sin(2*theta)" }, tolerance: 1e-5 });
     expect(Math.abs(r.period! - 2 * Math.PI)).toBeLessThan(1e-13);
     const row = r.motion!.reduce((p, q) => (Math.abs(q.angle - 1) < Math.abs(p.angle - 1) ? q : p));
-    const exact = row.angle + 0.3 * Math.sin(row.angle) + 0.05 * (1 - Math.cos(2 * row.angle)); // MATH.md §1.8 closed form x(θ)
+    const exact = row.angle + 0.3 * Math.sin(row.angle) + 0.05 * (1 - Math.cos(2 * row.angle)); // docs/math.md §1.8 closed form x(θ)
     expect(Math.abs(row.x - exact)).toBeLessThan(1e-12);
     expect(r.wheel.symmetry).toBe(1);
   });
@@ -95,7 +95,7 @@ describe("wheel for a track", () => {
     expect(rel(opt.rMax, h + A)).toBeLessThan(1e-13);
   });
 
-  it("cosine road, MATH.md §4 (mpmath 1.3.0): d = √(1 + k²) and the wheel k²/(d + cos kθ)", () => {
+  it("cosine road, docs/math.md §4 (mpmath 1.3.0): d = √(1 + k²) and the wheel k²/(d + cos kθ)", () => {
     // y = cos x − d with datum y = 0 at the axle... expressed as the function track y = cos(x) and h = d.
     for (const [k, d] of [[1, 1.4142135623730950488], [2, 2.2360679774997896964], [3, 3.162277660168379332], [4, 4.1231056256176605498]]) {
       const r = solve({ mode: "wheel-for-track", track: { kind: "function", y: "cos(x)", period: 2 * Math.PI }, periodsPerTurn: k, tolerance: 1e-4 });
@@ -119,7 +119,7 @@ describe("wheel for a track", () => {
       const r = solve({ mode: "wheel-for-track", track: { kind: "cycloid", radius: 1 }, periodsPerTurn: k, tolerance: 1e-3 });
       expect(rel(r.axleHeight!, (2 * q) / (1 - q))).toBeLessThan(1e-12);
     }
-    // k = 1 would need r = 0 at the cusps (the cardioid, MATH.md §4): refused.
+    // k = 1 would need r = 0 at the cusps (the cardioid, docs/math.md §4): refused.
     expect(() => solve({ mode: "wheel-for-track", track: { kind: "cycloid", radius: 1 }, periodsPerTurn: 1 })).toThrow(/r = 0/);
   });
 });
@@ -134,12 +134,12 @@ describe("partner wheels (Litvin et al. 2009; Schwamb & Merrill 1904)", () => {
     expect(r.check.axleDeviation).toBeLessThan(1e-6 * A);
     expect(r.check.closureError).toBeLessThan(1e-10);
     expect(r.check.interference.depth).toBe(0);
-    // The partner is the same ellipse (MATH.md §5.4): same rMin and rMax.
+    // The partner is the same ellipse (docs/math.md §5.4): same rMin and rMax.
     expect(rel(r.partner!.rMin, A * (1 - e))).toBeLessThan(1e-12);
     expect(rel(r.partner!.rMax, A * (1 + e))).toBeLessThan(1e-12);
   });
 
-  it("MATH.md §5.4 follower table, A = 1, e = 0.5 (mpmath 1.3.0): θ₂(π/2) = 2.4980915447965088517", () => {
+  it("docs/math.md §5.4 follower table, A = 1, e = 0.5 (mpmath 1.3.0): θ₂(π/2) = 2.4980915447965088517", () => {
     const r = solve({ mode: "partner-wheel", wheel: { kind: "ellipse", semiMajor: 1, semiMinor: Math.sqrt(0.75), axle: "focus" }, lobes: 1, tolerance: 1e-4 });
     // Closed form θ₂ = 2·atan(((1+e)/(1−e))·tan(θ₁/2)) in this engine's phase (near vertex first): ((1−e)/(1+e)).
     for (const row of r.follower!.filter((f) => f.driver < 3)) {
@@ -147,7 +147,7 @@ describe("partner wheels (Litvin et al. 2009; Schwamb & Merrill 1904)", () => {
     }
   });
 
-  it("circle R = 1: a = k + 1; limaçon 1 + 0.2 cos θ closed form (MATH.md §5.4, mpmath 1.3.0)", () => {
+  it("circle R = 1: a = k + 1; limaçon 1 + 0.2 cos θ closed form (docs/math.md §5.4, mpmath 1.3.0)", () => {
     // An axle offset makes the limaçon-like offset circle; the plain circle with offset 0 is the check.
     for (const k of [1, 2, 3]) {
       const r = solve({ mode: "partner-wheel", wheel: { kind: "circle", radius: 1 }, lobes: k });
@@ -161,7 +161,7 @@ describe("partner wheels (Litvin et al. 2009; Schwamb & Merrill 1904)", () => {
   });
 });
 
-describe("twin wheels (MATH.md §6.3, mpmath 1.3.0): sine road −a/2 + s sin x closes at a/2 = √(k² + s²)", () => {
+describe("twin wheels (docs/math.md §6.3, mpmath 1.3.0): sine road −a/2 + s sin x closes at a/2 = √(k² + s²)", () => {
   it.each([
     [1, 0.5, 2.2360679774997896964],
     [2, 1, 4.4721359549995793928],

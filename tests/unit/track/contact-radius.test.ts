@@ -13,7 +13,7 @@ describe("tightest combined radius of the contact", () => {
   });
 
   it.each([0.3, 0.5, 0.8])("an ellipse about a focus, e = %f, on its road: a(1 − e), at the crest (x = 0)", (e) => {
-    // Ellipse vertex radius b²/a and road crest radius b²/(a e) (Hall & Wagon 1992; MATH.md §3.1), both
+    // Ellipse vertex radius b²/a and road crest radius b²/(a e) (Hall & Wagon 1992; docs/math.md §3.1), both
     // convex towards each other: 1/(a/b² + a e/b²) = b²/(a(1 + e)) = a(1 − e).
     const a = 100;
     const b = a * Math.sqrt(1 - e * e);
@@ -31,7 +31,7 @@ describe("tightest combined radius of the contact", () => {
 
   it.each([1, 2, 3])("the wheel for y = A sin(2πx/P), k = %i: h − A, on the crest (the crest is flat-topped with radius P²/(4π²A))", (k) => {
     // At the crest y′ = 0; the road's radius P²/(4π²A) and the wheel's there combine to h − A by the
-    // rolling identity κ_w − κ_road = 1/r (MATH.md §1.7), with h = √((kP/2π)² + A²) (integral tables).
+    // rolling identity κ_w − κ_road = 1/r (docs/math.md §1.7), with h = √((kP/2π)² + A²) (integral tables).
     const A = 10;
     const P = 100;
     const r = solve({ mode: "wheel-for-track", track: { kind: "sine", amplitude: A, period: P }, periodsPerTurn: k });

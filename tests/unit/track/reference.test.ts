@@ -69,7 +69,7 @@ describe("against SciPy / mpmath references", () => {
     expect(rel(r.check.interference.depth, ref[6].depth)).toBeLessThan(1e-6);
   });
 
-  it("generic driver 1 + 0.3cos θ + 0.1 sin 2θ (MATH.md §5.4 table, mpmath 1.3.0, recomputed here)", () => {
+  it("generic driver 1 + 0.3cos θ + 0.1 sin 2θ (docs/math.md §5.4 table, mpmath 1.3.0, recomputed here)", () => {
     const table = [2.0944760282156716107, 3.0730166125735512179, 4.0655111384308936829];
     for (const [i, k] of [[7, 1], [8, 3]]) {
       const r = solve({ mode: "partner-wheel", wheel: { kind: "polar", r: "1 + 0.3*cos(theta) + 0.1*sin(2*theta)" }, lobes: k, tolerance: 1e-3 });

@@ -21,9 +21,16 @@ import { listAssignableUsers } from "@/db/queries/users";
 import { requirePageUser, requireProjectAccess } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
 import { roleLabel } from "@/lib/labels";
+import { cutPlanName } from "@/lib/cut-plan/name";
 
 export const metadata: Metadata = { title: "Project" };
 
+
+/** The "Cut plan" column: the latest revision's saved plan by its name, or the way to make one. */
+function latestPlanName(plans: { designId: number; number: number; revisionNumber: number }[], designId: number, latestRevision: number): string {
+  const plan = plans.find((p) => p.designId === designId && p.revisionNumber === latestRevision);
+  return plan ? cutPlanName(plan.number, plan.revisionNumber) : `Make a cut plan of R${latestRevision}`;
+}
 
 /** What the send form offers: each saved revision, the run its mock-up would show, and why it cannot go now. */
 async function sendable(projectId: number, reviews: Awaited<ReturnType<typeof listProjectReviews>>): Promise<SendableRevision[]> {
@@ -80,7 +87,7 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
         <dt className="text-ink-soft">Last change</dt>
         <dd className="font-mono text-xs">{formatWhen(project.updatedAt)}</dd>
         <dt className="text-ink-soft">Your role</dt>
-        <dd>{access.memberRole ?? "admin (not a member)"}</dd>
+        <dd>{access.memberRole ? roleLabel(access.memberRole) : `${roleLabel("admin")} (not a member)`}</dd>
         <dt className="text-ink-soft">Deposit</dt>
         <dd data-testid="project-deposit">{depositText(deposit)}</dd>
       </dl>
@@ -91,7 +98,7 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
             <tr key={m.id}>
               <td>
                 {m.name}
-                {m.active ? null : <span className="ml-2 text-xs text-caution">(deactivated)</span>}
+                {m.active ? null : <span className="ml-2 text-xs text-caution-ink">(deactivated)</span>}
               </td>
               <td className="font-mono text-xs">{m.email}</td>
               <td>{roleLabel(m.role)}</td>
@@ -138,7 +145,7 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
                   <td>
                     {d.latestRevision ? (
                       <Link href={`/projects/${access.projectId}/designs/${d.id}/cut`} className="text-sm underline decoration-ink-line underline-offset-2">
-                        Parts and cut files
+                        {latestPlanName(plans, d.id, d.latestRevision)}
                       </Link>
                     ) : (
                       <span className="text-xs text-ink-soft">save a revision first</span>
@@ -167,7 +174,7 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
 
       <Panel title="Assembly sheets">
         {plans.length === 0 ? (
-          <p className="text-sm text-ink-soft">No cut plan is stored yet: the assembly sheet comes from a stored cut plan.</p>
+          <p className="text-sm text-ink-soft">No cut plan is saved yet: the assembly sheet comes from a saved cut plan.</p>
         ) : (
           <ul className="flex flex-col gap-1 text-sm" data-testid="assembly-sheets">
             {plans.map((p) => (
@@ -175,7 +182,7 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
                 <Link href={`/projects/${access.projectId}/cut-plans/${p.id}/assembly`} className="font-medium underline decoration-ink-line underline-offset-2">
                   Assembly sheet: {p.designName} R{p.revisionNumber}
                 </Link>{" "}
-                <span className="text-xs text-ink-soft">(cut plan {p.id}, {String((p.summary as { purpose?: string }).purpose ?? "review")})</span>
+                <span className="text-xs text-ink-soft">({cutPlanName(p.number, p.revisionNumber, { midSentence: true })}, {String((p.summary as { purpose?: string }).purpose ?? "review")})</span>
               </li>
             ))}
           </ul>

@@ -1,7 +1,9 @@
-import { listRevisions, updateDesign } from "@/db/queries/designs";
+import { listRevisions } from "@/db/queries/designs";
 import { requireDesignAccess } from "@/lib/server/dal";
+import { updateDesign } from "@/lib/server/designs";
 import { idParam, jsonBody, route } from "@/lib/server/route";
-import { designUpdateSchema, SPEC_BODY_LIMIT } from "@/lib/validation/designs";
+import { designUpdateSchema } from "@/lib/validation/designs";
+import { SPEC_BODY_LIMIT } from "@/lib/validation/limits";
 
 export const GET = route<{ id: string }>(async (_request, params) => {
   const access = await requireDesignAccess(idParam(params.id, "design"));

@@ -1,6 +1,6 @@
 import { findPhoto } from "@/db/queries/build-log";
 import { requireProjectAccess, requireUser } from "@/lib/server/dal";
-import { AppError } from "@/lib/server/errors";
+import { AppError, notFoundAs } from "@/lib/server/errors";
 import { idParam, route } from "@/lib/server/route";
 import { getObject } from "@/lib/server/storage";
 
@@ -10,10 +10,7 @@ export const GET = route<{ id: string }>(async (request, params) => {
   await requireUser();
   const photo = await findPhoto(idParam(params.id, "photo"));
   if (!photo) throw new AppError("not_found", "No such photo.");
-  await requireProjectAccess(photo.projectId).catch((e) => {
-    if (e instanceof AppError && e.kind === "not_found") throw new AppError("not_found", "No such photo.");
-    throw e;
-  });
+  await requireProjectAccess(photo.projectId).catch(notFoundAs("No such photo."));
   const thumb = new URL(request.url).searchParams.get("size") === "thumb";
   const object = await getObject(thumb ? photo.thumbKey : photo.objectKey);
   return new Response(new Uint8Array(object.body), {

@@ -1,11 +1,11 @@
-// The demo "Square-wheel trike run" (BRIEF.md): square wheels of 400 mm side on a 6.0 m run,
+// The demo "Square-wheel trike run" (docs/product.md §3): square wheels of 400 mm side on a 6.0 m run,
 // 18 mm birch plywood on 2440 × 1220 mm sheets, a 6 mm router cutter. Solved once per test file.
 import { solve, type SolveResult } from "@/lib/track";
 import { loadHersheyFont } from "@/lib/cut/labels/font-file";
 import type { GlyphTable } from "@/lib/cut/labels/font";
 import type { SheetNestResult } from "@/lib/nest/types";
 import type { Part } from "@/lib/cut/types";
-import { bounds } from "@/lib/cut/geometry";
+import { bounds } from "@/lib/geometry/box";
 
 export const SQUARE_SPEC = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 } } as const;
 

@@ -16,7 +16,6 @@ const gf = new GeometryFactory();
 const closed = (ring: readonly Pt[]) => [...ring, ring[0]].map(([x, y]) => new Coordinate(x, y));
 
 export const jRing = (ring: readonly Pt[]): Geometry => gf.createLinearRing(closed(ring));
-export const jLine = (pts: readonly Pt[]): Geometry => gf.createLineString(pts.map(([x, y]) => new Coordinate(x, y)));
 export const jPoint = (p: readonly [number, number]): Geometry => gf.createPoint(new Coordinate(p[0], p[1]));
 export const jPolygon = (r: Pick<Region, "outer" | "holes">): Geometry => gf.createPolygon(jRing(r.outer), r.holes.map(jRing));
 

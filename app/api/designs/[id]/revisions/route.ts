@@ -1,7 +1,9 @@
-import { listRevisions, saveRevision } from "@/db/queries/designs";
+import { listRevisions } from "@/db/queries/designs";
 import { requireDesignAccess } from "@/lib/server/dal";
+import { saveRevision } from "@/lib/server/designs";
 import { created, idParam, jsonBody, route } from "@/lib/server/route";
-import { newRevisionSchema, SPEC_BODY_LIMIT } from "@/lib/validation/designs";
+import { newRevisionSchema } from "@/lib/validation/designs";
+import { SPEC_BODY_LIMIT } from "@/lib/validation/limits";
 
 export const GET = route<{ id: string }>(async (_request, params) => {
   const access = await requireDesignAccess(idParam(params.id, "design"));

@@ -1,7 +1,9 @@
-import { createDesign, listDesigns } from "@/db/queries/designs";
+import { listDesigns } from "@/db/queries/designs";
+import { createDesign } from "@/lib/server/designs";
 import { requireProjectAccess } from "@/lib/server/dal";
 import { created, idParam, jsonBody, route } from "@/lib/server/route";
-import { newDesignSchema, SPEC_BODY_LIMIT } from "@/lib/validation/designs";
+import { newDesignSchema } from "@/lib/validation/designs";
+import { SPEC_BODY_LIMIT } from "@/lib/validation/limits";
 
 export const GET = route<{ id: string }>(async (_request, params) => {
   const access = await requireProjectAccess(idParam(params.id, "project"));

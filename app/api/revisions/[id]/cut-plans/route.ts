@@ -2,7 +2,8 @@ import { latestCutPlan } from "@/db/queries/cut-plans";
 import { storeCutPlan } from "@/lib/server/cut-plans";
 import { requireCutPlanAccess } from "@/lib/server/dal";
 import { created, idParam, jsonBody, route } from "@/lib/server/route";
-import { CUT_PLAN_BODY_LIMIT, newCutPlanSchema } from "@/lib/validation/cut-plans";
+import { newCutPlanSchema } from "@/lib/validation/cut-plans";
+import { CUT_PLAN_BODY_LIMIT } from "@/lib/validation/limits";
 
 /** The revision's current cut plan (or null): for the shop only. */
 export const GET = route<{ id: string }>(async (_request, params) => {

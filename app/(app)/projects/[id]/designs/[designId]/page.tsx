@@ -2,7 +2,6 @@ import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
 import { DesignStudio } from "@/components/studio/design-studio";
-import { QueryProvider } from "@/components/studio/query-provider";
 import { requireDesignAccess, requirePageUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
 import { libraryMaterials } from "@/lib/server/loads";
@@ -38,15 +37,13 @@ export default async function StudioPage({ params, searchParams }: { params: Pro
         </Link>
         {access.canManage ? (
           <Link href={`/projects/${access.projectId}/designs/${access.design.id}/cut`} className="text-ink-soft hover:underline">
-            Parts and cut files →
+            Cut plan →
           </Link>
         ) : null}
       </div>
       {/* The studio uses the whole width of the screen, not the reading width of other pages. */}
       <div className="relative left-1/2 w-[min(110rem,calc(100vw-2rem))] -translate-x-1/2">
-        <QueryProvider>
-          <DesignStudio designId={access.design.id} projectId={access.projectId} revisionNumber={revisionNumber} library={library} />
-        </QueryProvider>
+        <DesignStudio designId={access.design.id} projectId={access.projectId} revisionNumber={revisionNumber} library={library} />
       </div>
     </>
   );

@@ -73,7 +73,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
       </div>
 
       {decision ? (
-        <div className={`rounded-plate border px-3 py-2 text-sm ${decision.decision === "approve" ? "border-pass/40 bg-white/60 text-pass" : "border-caution bg-caution-soft text-caution"}`} data-testid="decision-record">
+        <div className={`rounded-plate border px-3 py-2 text-sm ${decision.decision === "approve" ? "border-pass/40 bg-white/60 text-pass" : "border-caution bg-caution-soft text-caution-ink"}`} data-testid="decision-record">
           {decision.decision === "approve" ? (
             <>
               <strong>Approved for fabrication</strong> by {decision.typedName}
@@ -98,7 +98,7 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
           <ul className="flex flex-col gap-2 text-sm" data-testid="plain-figures">
             {figures.map((f) => (
               <li key={f.key} className="flex gap-2">
-                <span aria-hidden className={`font-mono ${f.ok ? "text-pass" : "text-caution"}`}>
+                <span aria-hidden className={`font-mono ${f.ok ? "text-pass" : "text-caution-ink"}`}>
                   {f.ok ? "✓" : "!"}
                 </span>
                 <span>

@@ -8,6 +8,7 @@ import { CautionList } from "@/components/review/caution-list";
 import { formatWhen } from "@/components/format";
 import { Table } from "@/components/ui/table";
 import { PAPER_SIZES, type Paper } from "@/lib/assembly/sheet";
+import { cutPlanName } from "@/lib/cut-plan/name";
 import { assemblySheetFor, bumpLimitParam, requireSheetAccess } from "@/lib/server/assembly";
 import { requirePageUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
@@ -96,7 +97,7 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
       </div>
 
       <header className="flex flex-col gap-1 border-b-4 border-ink pb-3">
-        <p className="font-mono text-xs uppercase tracking-wider text-ink-soft">Assembly sheet · cut plan {sheet.cutPlanId}</p>
+        <p className="font-mono text-xs uppercase tracking-wider text-ink-soft">Assembly sheet · {cutPlanName(sheet.cutPlanNumber, sheet.design.revision, { midSentence: true })}</p>
         <h1 className="text-2xl font-semibold tracking-tight">{sheet.project.name}</h1>
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-0.5">
           <dt className="text-ink-soft">Site</dt>
@@ -115,7 +116,7 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
                 {sheet.approval.organisation ? `, ${sheet.approval.organisation}` : ""}
               </>
             ) : (
-              <span className="rounded-plate border-2 border-caution px-2 py-0.5 font-bold text-caution">NOT APPROVED — FOR REVIEW ONLY</span>
+              <span className="rounded-plate border-2 border-caution px-2 py-0.5 font-bold text-caution-ink">NOT APPROVED — FOR REVIEW ONLY</span>
             )}
           </dd>
           <dt className="text-ink-soft">Date</dt>
@@ -236,7 +237,7 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
         </div>
       </Section>
       <p className="print-only text-xs text-ink-soft">
-        {sheet.project.name} · {sheet.design.name} R{sheet.design.revision} · {sheet.approval ? `approved ${sheet.approval.reference}` : "NOT APPROVED"} · cut plan {sheet.cutPlanId}
+        {sheet.project.name} · {sheet.design.name} R{sheet.design.revision} · {sheet.approval ? `approved ${sheet.approval.reference}` : "NOT APPROVED"} · {cutPlanName(sheet.cutPlanNumber, sheet.design.revision, { midSentence: true })}
       </p>
     </article>
   );

@@ -7,27 +7,47 @@ import { Table } from "@/components/ui/table";
 import { revisionByNumber } from "@/db/queries/designs";
 import { requireDesignAccess, requirePageUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
+import { checkFigures } from "@/components/studio/view/check-figures";
 import { solve, type Pt, type SolveResult } from "@/lib/track";
+import { SERVER_SOLVE_DEADLINE_MS } from "@/lib/validation/limits";
 
 export const metadata: Metadata = { title: "Compare revisions" };
 
-const FIGURES: { label: string; get: (r: SolveResult) => number | undefined; unit: "len" | "rad" | "ratio" }[] = [
-  { label: "Period", get: (r) => r.period, unit: "len" },
-  { label: "Depth", get: (r) => r.depth, unit: "len" },
-  { label: "Axle height", get: (r) => r.axleHeight, unit: "len" },
-  { label: "Centre distance", get: (r) => r.centreDistance, unit: "len" },
-  { label: "Wheel r min", get: (r) => r.wheel.rMin, unit: "len" },
-  { label: "Wheel r max", get: (r) => r.wheel.rMax, unit: "len" },
-  { label: "Interference depth", get: (r) => r.check.interference.depth, unit: "len" },
-  { label: "Friction demand (max)", get: (r) => r.check.frictionDemand.max, unit: "ratio" },
-  { label: "Closure error", get: (r) => r.check.closureError, unit: "rad" },
-  { label: "Axle deviation", get: (r) => r.check.axleDeviation, unit: "len" },
+// The design's dimensions in the studio's words; the rolling check's figures come from the studio's own
+// list (checkFigures), so both pages name and format them alike.
+const DIMENSIONS: { label: string; get: (r: SolveResult) => number | undefined }[] = [
+  { label: "Period (one hump to the next)", get: (r) => r.period },
+  { label: "Track depth", get: (r) => r.depth },
+  { label: "Axle height", get: (r) => r.axleHeight },
+  { label: "Centre distance", get: (r) => r.centreDistance },
+  { label: "Wheel radius, smallest", get: (r) => r.wheel.rMin },
+  { label: "Wheel radius, largest", get: (r) => r.wheel.rMax },
 ];
 
 function fmt(v: number | undefined, unit: string): string {
   if (v === undefined) return "—";
   const s = Math.abs(v) !== 0 && (Math.abs(v) < 1e-3 || Math.abs(v) >= 1e6) ? v.toExponential(3) : v.toFixed(3);
-  return unit ? `${s} ${unit}` : s;
+  return `${s} ${unit}`;
+}
+
+/** Rows of figures for both revisions: dimensions first, then the rolling check, matched by key. */
+function figureRows(results: SolveResult[]): { key: string; label: string; values: string[]; differs: boolean }[] {
+  const units = results[0].units;
+  const rows = DIMENSIONS.flatMap((f) => {
+    const v = results.map(f.get);
+    if (v.every((x) => x === undefined)) return [];
+    const [x, y] = v;
+    const differs = x !== undefined && y !== undefined && Math.abs(x - y) > 1e-9 * Math.max(1, Math.abs(x));
+    return [{ key: f.label, label: f.label, values: v.map((x) => fmt(x, units)), differs }];
+  });
+  const checks = results.map(checkFigures);
+  const keys = [...new Set(checks.flatMap((c) => c.map((f) => f.key)))];
+  for (const key of keys) {
+    const pair = checks.map((c) => c.find((f) => f.key === key));
+    const values = pair.map((f) => f?.value ?? "—");
+    rows.push({ key, label: (pair[0] ?? pair[1])!.label, values, differs: values[0] !== values[1] });
+  }
+  return rows;
 }
 
 function d(points: Pt[], dy = 0): string {
@@ -54,8 +74,7 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
       </>
     );
   }
-  const results = rows.map((r) => solve(r!.spec, { deadlineMs: 10_000 }));
-  const units = results[0].units;
+  const results = rows.map((r) => solve(r!.spec, { deadlineMs: SERVER_SOLVE_DEADLINE_MS }));
   const all = results.flatMap((r) => r.wheel.points.map(([x, y]) => [x, y] as Pt));
   const extent = Math.max(...all.map(([x, y]) => Math.hypot(x, y))) * 1.1;
   return (
@@ -67,18 +86,13 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
       <div className="grid gap-4 lg:grid-cols-2">
         <Panel title="Figures">
           <Table head={["", `R${rows[0].number}`, `R${rows[1].number}`]} caption="Figures side by side">
-            {FIGURES.map((f) => {
-              const [x, y] = results.map(f.get);
-              const unit = f.unit === "len" ? units : f.unit === "rad" ? "rad" : "";
-              const differs = x !== undefined && y !== undefined && Math.abs(x - y) > 1e-9 * Math.max(1, Math.abs(x));
-              return x === undefined && y === undefined ? null : (
-                <tr key={f.label} className={differs ? "bg-paper-deep" : ""}>
-                  <td>{f.label}</td>
-                  <td className="font-mono text-xs">{fmt(x, unit)}</td>
-                  <td className="font-mono text-xs">{fmt(y, unit)}</td>
-                </tr>
-              );
-            })}
+            {figureRows(results).map((f) => (
+              <tr key={f.key} className={f.differs ? "bg-paper-deep" : ""}>
+                <td>{f.label}</td>
+                <td className="font-mono text-xs">{f.values[0]}</td>
+                <td className="font-mono text-xs">{f.values[1]}</td>
+              </tr>
+            ))}
             <tr>
               <td>Note</td>
               <td className="text-xs">{rows[0].note || "—"}</td>

@@ -1,7 +1,8 @@
 import type { Metadata } from "next";
 import Link from "next/link";
 import { notFound } from "next/navigation";
-import { CutPlanner, type StoredPlanView } from "@/components/cut/cut-planner";
+import { CutPlanner } from "@/components/cut/cut-planner";
+import type { SavedPlanView } from "@/components/cut/saved-plan";
 import { NoAccess } from "@/components/no-access";
 import { Notice } from "@/components/ui/notice";
 import { latestCutPlan } from "@/db/queries/cut-plans";
@@ -23,7 +24,7 @@ import { jobForPlan, type CutPlanSummary } from "@/lib/server/cut-plans";
 import { requireDesignAccess, requirePageUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
 
-export const metadata: Metadata = { title: "Parts and cut files" };
+export const metadata: Metadata = { title: "Cut plan" };
 
 /** Choices for a revision with no plan yet: the first sheet in the library, its material, the first router. */
 function firstIds(library: Awaited<ReturnType<typeof listShopLibrary>>) {
@@ -54,7 +55,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
     return (
       <>
         {back}
-        <h1 className="text-2xl font-semibold tracking-tight">Parts and cut files: {access.design.name}</h1>
+        <h1 className="text-2xl font-semibold tracking-tight">Cut plan: {access.design.name}</h1>
         <Notice>Save a revision in the studio first: cut plans are made from a frozen revision.</Notice>
       </>
     );
@@ -77,15 +78,16 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
   const reviewedRun: Partial<CutSettings> = reviewed ? { runLength: reviewed.runLengthMm!, endTreatment: reviewed.endTreatment ?? "flat" } : {};
   const storedChoice = plan?.settings as (PlanChoice & { composed?: CutSettings }) | undefined;
   const ids = storedChoice ? { materialId: storedChoice.materialId, stockSheetId: storedChoice.stockSheetId, machineId: storedChoice.machineId } : firstIds(library);
-  let stored: StoredPlanView | null = null;
-  // The load-path cautions as the files will state them: the stored plan's board and spans, else the revision's settings.
+  let saved: SavedPlanView | null = null;
+  // The load-path cautions as the files will state them: the saved plan's board and spans, else the revision's settings.
   let loads = plan ? null : await loadsForRevision(revision, solve(revision.spec));
   if (plan) {
     const job = await jobForPlan(plan, revision, found.designName);
     loads = { report: loadsOf(job), stored: !job.loadsFromDefaults };
     const { files, previews } = jobTextFiles(job);
-    stored = {
+    saved = {
       id: plan.id,
+      number: plan.number,
       createdAt: plan.createdAt,
       createdBy: plan.createdBy,
       summary: plan.summary as unknown as CutPlanSummary,
@@ -97,7 +99,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
     <>
       {back}
       <div className="flex flex-wrap items-baseline gap-3">
-        <h1 className="text-2xl font-semibold tracking-tight">Parts and cut files: {access.design.name}</h1>
+        <h1 className="text-2xl font-semibold tracking-tight">Cut plan: {access.design.name}</h1>
         <span className="font-mono text-sm text-ink-soft" data-testid="cut-revision">
           R{revision.number} · fingerprint {revision.specHash.slice(0, 12)}
         </span>
@@ -116,7 +118,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
           Client approval: {approvalLine(approval)}, signed {new Date(approval.signedAt).toISOString().slice(0, 16).replace("T", " ")} UTC. Every file of this revision carries the reference.
         </p>
       ) : (
-        <div className="flex flex-wrap items-center gap-3 rounded-plate border border-caution bg-caution-soft px-3 py-2 text-sm text-caution" data-testid="approval-reference">
+        <div className="flex flex-wrap items-center gap-3 rounded-plate border border-caution bg-caution-soft px-3 py-2 text-sm text-caution-ink" data-testid="approval-reference">
           <span className="font-semibold">{approvalLine(null)}</span>
           <span>The client has not approved R{revision.number}; its files are marked so.</span>
           <Link href={`/projects/${access.projectId}?review=${revision.id}#send-review`} className="underline">
@@ -145,7 +147,7 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
             machines: library.machines.map((k) => ({ id: k.id, name: k.name, kind: k.kind, kerfMm: k.kerfMm, bedLengthMm: k.bedLengthMm, bedWidthMm: k.bedWidthMm, minInsideRadiusMm: k.minInsideRadiusMm })),
           }}
           initialForm={formFromSettings((storedChoice?.settings ?? reviewedRun) as Partial<CutSettings>, ids)}
-          stored={stored}
+          saved={saved}
           approved={approval !== null}
         />
       </div>

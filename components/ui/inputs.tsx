@@ -1,14 +1,15 @@
 "use client";
-// Small controlled inputs for the spec form: numbers with their unit, selects, formulas. Each shows
-// its own error under it and is tied to it for screen readers.
+// The controlled inputs of the studio, the loads panel and the cut plan: numbers with their unit,
+// free text, selects, check boxes and formulas. Each shows its own error or hint under it, tied to it
+// for screen readers. Forms posted to a server action use ./field.tsx instead; both share one look.
 import { useId, useState, type ReactNode } from "react";
-import { FieldRow as Row } from "@/components/ui/field-row";
-
-const box = "w-full rounded-plate border border-ink-line bg-white/70 px-2 py-1 text-sm text-ink aria-[invalid=true]:border-caution disabled:bg-paper-deep";
+import { controlClass as box } from "./control-class";
+import { FieldRow as Row } from "./field-row";
 
 /** A number with its unit. Keeps the text as typed while it is not yet a number, so typing "1." works. */
 export function NumberInput(props: {
   label: string;
+  id?: string;
   value: number | undefined;
   unit?: string;
   min?: number;
@@ -22,7 +23,8 @@ export function NumberInput(props: {
   optional?: boolean;
   onChange: (value: number | undefined) => void;
 }) {
-  const id = useId();
+  const autoId = useId();
+  const id = props.id ?? autoId;
   const [text, setText] = useState<string | null>(null);
   const shown = text ?? (props.value === undefined ? "" : String(props.value));
   let localError: string | undefined;
@@ -58,18 +60,66 @@ export function NumberInput(props: {
   );
 }
 
+/** Text kept exactly as typed (lists of stations, figures the caller reads itself). */
+export function TextInput(props: {
+  label: string;
+  id?: string;
+  value: string;
+  unit?: string;
+  inputMode?: "text" | "decimal" | "numeric";
+  maxLength?: number;
+  placeholder?: string;
+  disabled?: boolean;
+  error?: string;
+  hint?: ReactNode;
+  onChange: (value: string) => void;
+}) {
+  const autoId = useId();
+  const id = props.id ?? autoId;
+  return (
+    <Row id={id} label={props.unit ? `${props.label} (${props.unit})` : props.label} error={props.error} hint={props.hint}>
+      <input
+        id={id}
+        type="text"
+        inputMode={props.inputMode ?? "text"}
+        className={box}
+        maxLength={props.maxLength}
+        placeholder={props.placeholder}
+        value={props.value}
+        disabled={props.disabled}
+        aria-invalid={props.error ? true : undefined}
+        aria-describedby={props.error ? `${id}-error` : undefined}
+        onChange={(e) => props.onChange(e.target.value)}
+      />
+    </Row>
+  );
+}
+
 export function SelectInput<T extends string>(props: {
   label: string;
+  id?: string;
   value: T;
   options: { value: T; label: string }[];
   disabled?: boolean;
+  error?: string;
+  hint?: ReactNode;
   onChange: (value: T) => void;
   testId?: string;
 }) {
-  const id = useId();
+  const autoId = useId();
+  const id = props.id ?? autoId;
   return (
-    <Row id={id} label={props.label}>
-      <select id={id} className={box} value={props.value} disabled={props.disabled} data-testid={props.testId} onChange={(e) => props.onChange(e.target.value as T)}>
+    <Row id={id} label={props.label} error={props.error} hint={props.hint}>
+      <select
+        id={id}
+        className={box}
+        value={props.value}
+        disabled={props.disabled}
+        data-testid={props.testId}
+        aria-invalid={props.error ? true : undefined}
+        aria-describedby={props.error ? `${id}-error` : undefined}
+        onChange={(e) => props.onChange(e.target.value as T)}
+      >
         {props.options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}
@@ -98,5 +148,17 @@ export function FormulaInput(props: { label: string; value: string; variable: st
         onChange={(e) => props.onChange(e.target.value)}
       />
     </Row>
+  );
+}
+
+/** A yes-or-no choice, its label to the right of the box. */
+export function CheckInput(props: { label: string; id?: string; checked: boolean; disabled?: boolean; onChange: (checked: boolean) => void }) {
+  const autoId = useId();
+  const id = props.id ?? autoId;
+  return (
+    <div className="flex items-center gap-2 text-sm">
+      <input id={id} type="checkbox" checked={props.checked} disabled={props.disabled} onChange={(e) => props.onChange(e.target.checked)} />
+      <label htmlFor={id}>{props.label}</label>
+    </div>
   );
 }

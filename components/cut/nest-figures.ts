@@ -1,0 +1,46 @@
+// The figures the cut plan page shows of a nest, from the parts the worker built: sizes, the share
+// of stock used, and each sheet's parts placed for drawing.
+import { bounds } from "@/lib/geometry/box";
+import { placeRing } from "@/lib/geometry/place";
+import { ringArea } from "@/lib/geometry/ring";
+import type { SheetNestResult } from "@/lib/nest/types";
+import type { PartsPreview } from "./cut-worker";
+import type { SheetViewPart } from "./sheet-view";
+
+export const pct = (v: number) => `${(v * 100).toFixed(1)} %`;
+
+export function bbox(ring: [number, number][]) {
+  const b = bounds(ring);
+  return { length: b.maxX - b.minX, width: b.maxY - b.minY };
+}
+
+/**
+ * Stock used: the parts' own (nominal) area over the sheets' area — the figure the server saves,
+ * so the page and the saved plan never disagree.
+ */
+export function usedShare(preview: PartsPreview, placements: { id: string }[], sheetArea: number): number {
+  const area = new Map(preview.plan.parts.map((p) => [p.id, ringArea(p.region.outer) - p.region.holes.reduce((a, h) => a + ringArea(h), 0)]));
+  return placements.reduce((sum, pl) => sum + (area.get(pl.id) ?? 0), 0) / sheetArea;
+}
+
+export function sheetParts(preview: PartsPreview, placements: SheetNestResult["sheets"][number]["placements"]): SheetViewPart[] {
+  const byId = new Map(preview.plan.parts.map((p) => [p.id, p]));
+  return placements.flatMap((pl) => {
+    const part = byId.get(pl.id);
+    if (!part) return [];
+    return [{ key: `${pl.id}-${pl.copy}`, label: pl.id, kind: part.kind, outer: placeRing(part.region.outer, pl.rotation, pl.x, pl.y), holes: part.region.holes.map((h) => placeRing(h, pl.rotation, pl.x, pl.y)) }];
+  });
+}
+
+/** A finished nest's sheets in use, its sheet area and the stock used overall. */
+export function nestFigures(nest: { nest: SheetNestResult; preview: PartsPreview }) {
+  const sheet = nest.preview.plan.settings.sheet;
+  const sheetArea = sheet.length * sheet.width;
+  const usedSheets = nest.nest.sheets.filter((sh) => sh.placements.length > 0);
+  const overall = usedShare(
+    nest.preview,
+    usedSheets.flatMap((sh) => sh.placements),
+    sheetArea * Math.max(1, usedSheets.length),
+  );
+  return { sheetArea, usedSheets, overall };
+}
