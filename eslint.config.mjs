@@ -5,5 +5,14 @@ import nextTs from "eslint-config-next/typescript";
 export default defineConfig([
   ...nextVitals,
   ...nextTs,
-  globalIgnores([".next/**", ".next-dev/**", ".next-*/**", ".data*/**", "out/**", "build/**", "next-env.d.ts", "drizzle/**"]),
+  globalIgnores([
+    ".next/**",
+    ".next-dev/**",
+    ".next-*/**",
+    ".data*/**",
+    "out/**",
+    "build/**",
+    "next-env.d.ts",
+    "drizzle/**",
+  ]),
 ]);

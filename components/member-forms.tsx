@@ -6,7 +6,13 @@ import { SelectField } from "./ui/field";
 import { MEMBER_ROLE_ORDER, roleOptions } from "@/lib/labels";
 import { FormMessage } from "./ui/notice";
 
-export function AddMemberForm({ projectId, people }: { projectId: number; people: { id: number; name: string; role: string; email: string }[] }) {
+export function AddMemberForm({
+  projectId,
+  people,
+}: {
+  projectId: number;
+  people: { id: number; name: string; role: string; email: string }[];
+}) {
   const [state, action, pending] = useActionState(addMemberAction, {});
   const v = state.values ?? {};
   return (
@@ -17,7 +23,10 @@ export function AddMemberForm({ projectId, people }: { projectId: number; people
         name="userId"
         defaultValue={v.userId}
         errors={state.fields?.userId}
-        options={[{ value: "", label: "Choose…" }, ...people.map((p) => ({ value: String(p.id), label: `${p.name} (${p.role}, ${p.email})` }))]}
+        options={[
+          { value: "", label: "Choose…" },
+          ...people.map((p) => ({ value: String(p.id), label: `${p.name} (${p.role}, ${p.email})` })),
+        ]}
       />
       <SelectField
         label="Role in this project"
@@ -39,7 +48,15 @@ export function AddMemberForm({ projectId, people }: { projectId: number; people
   );
 }
 
-export function RemoveMemberButton({ projectId, memberId, name }: { projectId: number; memberId: number; name: string }) {
+export function RemoveMemberButton({
+  projectId,
+  memberId,
+  name,
+}: {
+  projectId: number;
+  memberId: number;
+  name: string;
+}) {
   const [state, action, pending] = useActionState(removeMemberAction, {});
   return (
     <form

@@ -10,8 +10,21 @@ export function NewProjectForm() {
   const v = state.values ?? {};
   return (
     <form action={action} className="grid gap-3 sm:grid-cols-[2fr_2fr_2fr_auto] sm:items-start" noValidate>
-      <TextField label="Project name" name="name" required maxLength={160} defaultValue={v.name} errors={state.fields?.name} />
-      <TextField label="Client organisation" name="clientOrganisation" maxLength={160} defaultValue={v.clientOrganisation} errors={state.fields?.clientOrganisation} />
+      <TextField
+        label="Project name"
+        name="name"
+        required
+        maxLength={160}
+        defaultValue={v.name}
+        errors={state.fields?.name}
+      />
+      <TextField
+        label="Client organisation"
+        name="clientOrganisation"
+        maxLength={160}
+        defaultValue={v.clientOrganisation}
+        errors={state.fields?.clientOrganisation}
+      />
       <TextField label="Site" name="site" maxLength={200} defaultValue={v.site} errors={state.fields?.site} />
       <div className="sm:pt-6">
         <Button type="submit" disabled={pending}>

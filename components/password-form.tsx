@@ -22,7 +22,14 @@ export function PasswordForm() {
     );
   return (
     <form action={action} className="flex max-w-md flex-col gap-3" noValidate>
-      <TextField label="Current password" name="currentPassword" type="password" autoComplete="current-password" required errors={state.fields?.currentPassword} />
+      <TextField
+        label="Current password"
+        name="currentPassword"
+        type="password"
+        autoComplete="current-password"
+        required
+        errors={state.fields?.currentPassword}
+      />
       <TextField
         label="New password"
         name="newPassword"
@@ -33,7 +40,14 @@ export function PasswordForm() {
         errors={state.fields?.newPassword}
         hint={`At least ${PASSWORD_MIN_LENGTH} characters.`}
       />
-      <TextField label="New password again" name="newPasswordAgain" type="password" autoComplete="new-password" required errors={state.fields?.newPasswordAgain} />
+      <TextField
+        label="New password again"
+        name="newPasswordAgain"
+        type="password"
+        autoComplete="new-password"
+        required
+        errors={state.fields?.newPasswordAgain}
+      />
       <FormMessage state={state} />
       <div>
         <Button type="submit" disabled={pending}>

@@ -4,7 +4,12 @@
 import { useActionState } from "react";
 import type { Machine, Material } from "@/db/schema";
 import type { StockSheetRow } from "@/db/queries/shop";
-import { saveMachineAction, saveMaterialAction, saveStockSheetAction, setShopRowActiveAction } from "@/lib/actions/shop";
+import {
+  saveMachineAction,
+  saveMaterialAction,
+  saveStockSheetAction,
+  setShopRowActiveAction,
+} from "@/lib/actions/shop";
 import { DEFAULT_POISSON } from "@/lib/validation/limits";
 import type { ShopTable } from "@/lib/validation/shop";
 import { Button } from "./ui/button";
@@ -27,11 +32,36 @@ function useShopForm(action: typeof saveMaterialAction) {
 /** Field ids must be unique on a page that holds one form per row. */
 const fieldId = (prefix: string, name: string) => `${prefix}-${name}`;
 
-function SourceFields({ prefix, v, fields, row }: { prefix: string; v: Record<string, string>; fields: Fields; row?: { source: string; sourceKind: string } }) {
+function SourceFields({
+  prefix,
+  v,
+  fields,
+  row,
+}: {
+  prefix: string;
+  v: Record<string, string>;
+  fields: Fields;
+  row?: { source: string; sourceKind: string };
+}) {
   return (
     <>
-      <TextField id={fieldId(prefix, "source")} label="Source of the figures" name="source" maxLength={500} defaultValue={v.source ?? row?.source} errors={fields?.source} hint="A book, standard, datasheet or page — or say it is common practice." />
-      <SelectField id={fieldId(prefix, "sourceKind")} label="Kind of source" name="sourceKind" defaultValue={v.sourceKind ?? row?.sourceKind ?? "published"} errors={fields?.sourceKind} options={SOURCE_KIND_OPTIONS} />
+      <TextField
+        id={fieldId(prefix, "source")}
+        label="Source of the figures"
+        name="source"
+        maxLength={500}
+        defaultValue={v.source ?? row?.source}
+        errors={fields?.source}
+        hint="A book, standard, datasheet or page — or say it is common practice."
+      />
+      <SelectField
+        id={fieldId(prefix, "sourceKind")}
+        label="Kind of source"
+        name="sourceKind"
+        defaultValue={v.sourceKind ?? row?.sourceKind ?? "published"}
+        errors={fields?.sourceKind}
+        options={SOURCE_KIND_OPTIONS}
+      />
     </>
   );
 }
@@ -49,11 +79,19 @@ export function MaterialForm({ row }: { row?: Material }) {
   const v = state.values ?? {};
   const f = state.fields;
   const p = row ? `material-${row.id}` : "material-new";
-  const num = (key: keyof Material) => v[key] ?? (row?.[key] === null || row?.[key] === undefined ? "" : String(row[key]));
+  const num = (key: keyof Material) =>
+    v[key] ?? (row?.[key] === null || row?.[key] === undefined ? "" : String(row[key]));
   return (
     <form action={action} className="grid gap-3 sm:grid-cols-3" noValidate>
       {row ? <input type="hidden" name="id" value={row.id} /> : null}
-      <TextField id={fieldId(p, "name")} label="Name" name="name" maxLength={120} defaultValue={v.name ?? row?.name} errors={f?.name} />
+      <TextField
+        id={fieldId(p, "name")}
+        label="Name"
+        name="name"
+        maxLength={120}
+        defaultValue={v.name ?? row?.name}
+        errors={f?.name}
+      />
       <SelectField
         id={fieldId(p, "kind")}
         label="Used as"
@@ -62,11 +100,46 @@ export function MaterialForm({ row }: { row?: Material }) {
         errors={f?.kind}
         options={Object.entries(MATERIAL_KIND_LABELS).map(([value, label]) => ({ value, label }))}
       />
-      <TextField id={fieldId(p, "thicknessMm")} label="Thickness (mm)" name="thicknessMm" inputMode="decimal" defaultValue={num("thicknessMm")} errors={f?.thicknessMm} />
-      <TextField id={fieldId(p, "densityKgM3")} label="Density (kg/m³)" name="densityKgM3" inputMode="decimal" defaultValue={num("densityKgM3")} errors={f?.densityKgM3} />
-      <TextField id={fieldId(p, "modulusGpa")} label="Modulus (GPa)" name="modulusGpa" inputMode="decimal" defaultValue={num("modulusGpa")} errors={f?.modulusGpa} />
-      <TextField id={fieldId(p, "strengthMpa")} label="Strength (MPa)" name="strengthMpa" inputMode="decimal" defaultValue={num("strengthMpa")} errors={f?.strengthMpa} />
-      <TextField id={fieldId(p, "poisson")} label="Poisson's ratio ν" name="poisson" inputMode="decimal" defaultValue={num("poisson") || String(DEFAULT_POISSON)} errors={f?.poisson} />
+      <TextField
+        id={fieldId(p, "thicknessMm")}
+        label="Thickness (mm)"
+        name="thicknessMm"
+        inputMode="decimal"
+        defaultValue={num("thicknessMm")}
+        errors={f?.thicknessMm}
+      />
+      <TextField
+        id={fieldId(p, "densityKgM3")}
+        label="Density (kg/m³)"
+        name="densityKgM3"
+        inputMode="decimal"
+        defaultValue={num("densityKgM3")}
+        errors={f?.densityKgM3}
+      />
+      <TextField
+        id={fieldId(p, "modulusGpa")}
+        label="Modulus (GPa)"
+        name="modulusGpa"
+        inputMode="decimal"
+        defaultValue={num("modulusGpa")}
+        errors={f?.modulusGpa}
+      />
+      <TextField
+        id={fieldId(p, "strengthMpa")}
+        label="Strength (MPa)"
+        name="strengthMpa"
+        inputMode="decimal"
+        defaultValue={num("strengthMpa")}
+        errors={f?.strengthMpa}
+      />
+      <TextField
+        id={fieldId(p, "poisson")}
+        label="Poisson's ratio ν"
+        name="poisson"
+        inputMode="decimal"
+        defaultValue={num("poisson") || String(DEFAULT_POISSON)}
+        errors={f?.poisson}
+      />
       <TextField
         id={fieldId(p, "allowableMpa")}
         label="Allowable contact stress (MPa)"
@@ -76,9 +149,31 @@ export function MaterialForm({ row }: { row?: Material }) {
         errors={f?.allowableMpa}
         hint="For wood: compression perpendicular to the grain. Leave empty if not known."
       />
-      <TextField id={fieldId(p, "frictionStatic")} label="Static friction μ" name="frictionStatic" inputMode="decimal" defaultValue={num("frictionStatic")} errors={f?.frictionStatic} />
-      <TextField id={fieldId(p, "frictionKinetic")} label="Kinetic friction μ" name="frictionKinetic" inputMode="decimal" defaultValue={num("frictionKinetic")} errors={f?.frictionKinetic} hint="Leave empty if not known." />
-      <TextField id={fieldId(p, "frictionPair")} label="Surfaces the friction is for" name="frictionPair" maxLength={160} defaultValue={v.frictionPair ?? row?.frictionPair} errors={f?.frictionPair} />
+      <TextField
+        id={fieldId(p, "frictionStatic")}
+        label="Static friction μ"
+        name="frictionStatic"
+        inputMode="decimal"
+        defaultValue={num("frictionStatic")}
+        errors={f?.frictionStatic}
+      />
+      <TextField
+        id={fieldId(p, "frictionKinetic")}
+        label="Kinetic friction μ"
+        name="frictionKinetic"
+        inputMode="decimal"
+        defaultValue={num("frictionKinetic")}
+        errors={f?.frictionKinetic}
+        hint="Leave empty if not known."
+      />
+      <TextField
+        id={fieldId(p, "frictionPair")}
+        label="Surfaces the friction is for"
+        name="frictionPair"
+        maxLength={160}
+        defaultValue={v.frictionPair ?? row?.frictionPair}
+        errors={f?.frictionPair}
+      />
       <SourceFields prefix={p} v={v} fields={f} row={row} />
       <div className="flex flex-col gap-2 sm:col-span-3">
         <FormMessage state={state} />
@@ -98,7 +193,14 @@ export function StockSheetForm({ row, materials }: { row?: StockSheetRow; materi
   return (
     <form action={action} className="grid gap-3 sm:grid-cols-3" noValidate>
       {row ? <input type="hidden" name="id" value={row.id} /> : null}
-      <TextField id={fieldId(p, "name")} label="Name" name="name" maxLength={120} defaultValue={v.name ?? row?.name} errors={f?.name} />
+      <TextField
+        id={fieldId(p, "name")}
+        label="Name"
+        name="name"
+        maxLength={120}
+        defaultValue={v.name ?? row?.name}
+        errors={f?.name}
+      />
       <SelectField
         id={fieldId(p, "materialId")}
         label="Material"
@@ -119,8 +221,22 @@ export function StockSheetForm({ row, materials }: { row?: StockSheetRow; materi
           { value: "none", label: "None" },
         ]}
       />
-      <TextField id={fieldId(p, "lengthMm")} label="Length (mm)" name="lengthMm" inputMode="decimal" defaultValue={v.lengthMm ?? (row ? String(row.lengthMm) : "")} errors={f?.lengthMm} />
-      <TextField id={fieldId(p, "widthMm")} label="Width (mm)" name="widthMm" inputMode="decimal" defaultValue={v.widthMm ?? (row ? String(row.widthMm) : "")} errors={f?.widthMm} />
+      <TextField
+        id={fieldId(p, "lengthMm")}
+        label="Length (mm)"
+        name="lengthMm"
+        inputMode="decimal"
+        defaultValue={v.lengthMm ?? (row ? String(row.lengthMm) : "")}
+        errors={f?.lengthMm}
+      />
+      <TextField
+        id={fieldId(p, "widthMm")}
+        label="Width (mm)"
+        name="widthMm"
+        inputMode="decimal"
+        defaultValue={v.widthMm ?? (row ? String(row.widthMm) : "")}
+        errors={f?.widthMm}
+      />
       <SourceFields prefix={p} v={v} fields={f} row={row} />
       <div className="flex flex-col gap-2 sm:col-span-3">
         <FormMessage state={state} />
@@ -141,7 +257,14 @@ export function MachineForm({ row }: { row?: Machine }) {
   return (
     <form action={action} className="grid gap-3 sm:grid-cols-3" noValidate>
       {row ? <input type="hidden" name="id" value={row.id} /> : null}
-      <TextField id={fieldId(p, "name")} label="Name" name="name" maxLength={120} defaultValue={v.name ?? row?.name} errors={f?.name} />
+      <TextField
+        id={fieldId(p, "name")}
+        label="Name"
+        name="name"
+        maxLength={120}
+        defaultValue={v.name ?? row?.name}
+        errors={f?.name}
+      />
       <SelectField
         id={fieldId(p, "kind")}
         label="Kind"
@@ -150,10 +273,38 @@ export function MachineForm({ row }: { row?: Machine }) {
         errors={f?.kind}
         options={Object.entries(MACHINE_KIND_LABELS).map(([value, label]) => ({ value, label }))}
       />
-      <TextField id={fieldId(p, "kerfMm")} label="Kerf or cutter diameter (mm)" name="kerfMm" inputMode="decimal" defaultValue={num("kerfMm")} errors={f?.kerfMm} />
-      <TextField id={fieldId(p, "bedLengthMm")} label="Bed length (mm)" name="bedLengthMm" inputMode="decimal" defaultValue={num("bedLengthMm")} errors={f?.bedLengthMm} />
-      <TextField id={fieldId(p, "bedWidthMm")} label="Bed width (mm)" name="bedWidthMm" inputMode="decimal" defaultValue={num("bedWidthMm")} errors={f?.bedWidthMm} />
-      <TextField id={fieldId(p, "minInsideRadiusMm")} label="Smallest inside radius (mm)" name="minInsideRadiusMm" inputMode="decimal" defaultValue={num("minInsideRadiusMm")} errors={f?.minInsideRadiusMm} />
+      <TextField
+        id={fieldId(p, "kerfMm")}
+        label="Kerf or cutter diameter (mm)"
+        name="kerfMm"
+        inputMode="decimal"
+        defaultValue={num("kerfMm")}
+        errors={f?.kerfMm}
+      />
+      <TextField
+        id={fieldId(p, "bedLengthMm")}
+        label="Bed length (mm)"
+        name="bedLengthMm"
+        inputMode="decimal"
+        defaultValue={num("bedLengthMm")}
+        errors={f?.bedLengthMm}
+      />
+      <TextField
+        id={fieldId(p, "bedWidthMm")}
+        label="Bed width (mm)"
+        name="bedWidthMm"
+        inputMode="decimal"
+        defaultValue={num("bedWidthMm")}
+        errors={f?.bedWidthMm}
+      />
+      <TextField
+        id={fieldId(p, "minInsideRadiusMm")}
+        label="Smallest inside radius (mm)"
+        name="minInsideRadiusMm"
+        inputMode="decimal"
+        defaultValue={num("minInsideRadiusMm")}
+        errors={f?.minInsideRadiusMm}
+      />
       <SourceFields prefix={p} v={v} fields={f} row={row} />
       <div className="flex flex-col gap-2 sm:col-span-3">
         <FormMessage state={state} />
@@ -165,14 +316,29 @@ export function MachineForm({ row }: { row?: Machine }) {
   );
 }
 
-export function RetireToggle({ table, id, active, name }: { table: ShopTable; id: number; active: boolean; name: string }) {
+export function RetireToggle({
+  table,
+  id,
+  active,
+  name,
+}: {
+  table: ShopTable;
+  id: number;
+  active: boolean;
+  name: string;
+}) {
   const [state, action, pending] = useActionState(setShopRowActiveAction, {});
   return (
     <form action={action} className="flex items-center gap-2">
       <input type="hidden" name="table" value={table} />
       <input type="hidden" name="id" value={id} />
       <input type="hidden" name="active" value={active ? "false" : "true"} />
-      <Button type="submit" variant={active ? "caution" : "quiet"} disabled={pending} aria-label={`${active ? "Retire" : "Restore"} ${name}`}>
+      <Button
+        type="submit"
+        variant={active ? "caution" : "quiet"}
+        disabled={pending}
+        aria-label={`${active ? "Retire" : "Restore"} ${name}`}
+      >
         {active ? "Retire" : "Restore"}
       </Button>
       {state.ok === false ? <span className="text-xs text-caution-ink">{state.message}</span> : null}

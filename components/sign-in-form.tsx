@@ -10,8 +10,24 @@ export function SignInForm({ callbackUrl }: { callbackUrl: string }) {
   return (
     <form action={action} className="flex flex-col gap-4" noValidate>
       <input type="hidden" name="callbackUrl" value={callbackUrl} />
-      <TextField label="E-mail" name="email" type="email" autoComplete="username" required defaultValue={state.values?.email} errors={state.fields?.email} autoFocus />
-      <TextField label="Password" name="password" type="password" autoComplete="current-password" required errors={state.fields?.password} />
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        autoComplete="username"
+        required
+        defaultValue={state.values?.email}
+        errors={state.fields?.email}
+        autoFocus
+      />
+      <TextField
+        label="Password"
+        name="password"
+        type="password"
+        autoComplete="current-password"
+        required
+        errors={state.fields?.password}
+      />
       <FormMessage state={state} />
       <Button type="submit" disabled={pending}>
         {pending ? "Signing in…" : "Sign in"}

@@ -14,8 +14,22 @@ export function NewUserForm() {
   return (
     <form action={action} className="grid gap-3 sm:grid-cols-2" noValidate>
       <TextField label="Name" name="name" required maxLength={120} defaultValue={v.name} errors={state.fields?.name} />
-      <TextField label="E-mail" name="email" type="email" required maxLength={254} defaultValue={v.email} errors={state.fields?.email} />
-      <SelectField label="Role" name="role" defaultValue={v.role ?? "fabricator"} errors={state.fields?.role} options={ROLE_OPTIONS} />
+      <TextField
+        label="E-mail"
+        name="email"
+        type="email"
+        required
+        maxLength={254}
+        defaultValue={v.email}
+        errors={state.fields?.email}
+      />
+      <SelectField
+        label="Role"
+        name="role"
+        defaultValue={v.role ?? "fabricator"}
+        errors={state.fields?.role}
+        options={ROLE_OPTIONS}
+      />
       <TextField
         label="First password"
         name="password"
@@ -45,7 +59,12 @@ export function RoleSelect({ userId, role, name }: { userId: number; role: strin
       <label className="sr-only" htmlFor={`role-${userId}`}>
         Role of {name}
       </label>
-      <select id={`role-${userId}`} name="role" defaultValue={role} className="rounded-plate border border-ink-line bg-white/70 px-1.5 py-1 text-sm">
+      <select
+        id={`role-${userId}`}
+        name="role"
+        defaultValue={role}
+        className="rounded-plate border border-ink-line bg-white/70 px-1.5 py-1 text-sm"
+      >
         {ROLE_OPTIONS.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}
@@ -55,7 +74,9 @@ export function RoleSelect({ userId, role, name }: { userId: number; role: strin
       <Button type="submit" variant="quiet" disabled={pending} aria-label={`Save role of ${name}`}>
         Save
       </Button>
-      {state.message ? <span className={`text-xs ${state.ok ? "text-pass" : "text-caution-ink"}`}>{state.message}</span> : null}
+      {state.message ? (
+        <span className={`text-xs ${state.ok ? "text-pass" : "text-caution-ink"}`}>{state.message}</span>
+      ) : null}
     </form>
   );
 }
@@ -66,7 +87,12 @@ export function ActiveToggle({ userId, active, name }: { userId: number; active:
     <form action={action} className="flex items-center gap-2">
       <input type="hidden" name="userId" value={userId} />
       <input type="hidden" name="active" value={active ? "false" : "true"} />
-      <Button type="submit" variant={active ? "caution" : "quiet"} disabled={pending} aria-label={`${active ? "Deactivate" : "Reactivate"} ${name}`}>
+      <Button
+        type="submit"
+        variant={active ? "caution" : "quiet"}
+        disabled={pending}
+        aria-label={`${active ? "Deactivate" : "Reactivate"} ${name}`}
+      >
         {active ? "Deactivate" : "Reactivate"}
       </Button>
       {state.ok === false ? <span className="text-xs text-caution-ink">{state.message}</span> : null}

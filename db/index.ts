@@ -17,7 +17,8 @@ function databaseUrl(): string {
   return "mysql://unset@127.0.0.1:9/unset";
 }
 
-export const pool = globalForDb.axlewrightPool ?? mysql.createPool({ uri: databaseUrl(), connectionLimit: 10, timezone: "Z" });
+export const pool =
+  globalForDb.axlewrightPool ?? mysql.createPool({ uri: databaseUrl(), connectionLimit: 10, timezone: "Z" });
 if (process.env.NODE_ENV !== "production") globalForDb.axlewrightPool = pool;
 
 export const db = drizzle({ client: pool, schema, mode: "default" });

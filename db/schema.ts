@@ -23,7 +23,15 @@ export type UserRole = (typeof USER_ROLES)[number];
 export const MEMBER_ROLES = ["fabricator", "client", "installer"] as const;
 export type MemberRole = (typeof MEMBER_ROLES)[number];
 
-export const PROJECT_STATUSES = ["design", "review", "approved", "cutting", "installing", "installed", "archived"] as const;
+export const PROJECT_STATUSES = [
+  "design",
+  "review",
+  "approved",
+  "cutting",
+  "installing",
+  "installed",
+  "archived",
+] as const;
 export type ProjectStatus = (typeof PROJECT_STATUSES)[number];
 
 export const ORGANISATION_KINDS = ["shop", "client", "installer"] as const;
@@ -64,13 +72,20 @@ export const projectMembers = mysqlTable(
   "project_members",
   {
     id: int("id").autoincrement().primaryKey(),
-    projectId: int("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
-    userId: int("user_id").notNull().references(() => users.id),
+    projectId: int("project_id")
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
+    userId: int("user_id")
+      .notNull()
+      .references(() => users.id),
     role: mysqlEnum("role", MEMBER_ROLES).notNull(),
     addedById: int("added_by_id").references(() => users.id),
     createdAt: timestamp("created_at").notNull().defaultNow(),
   },
-  (t) => [uniqueIndex("project_members_project_user").on(t.projectId, t.userId), index("project_members_user").on(t.userId)],
+  (t) => [
+    uniqueIndex("project_members_project_user").on(t.projectId, t.userId),
+    index("project_members_user").on(t.userId),
+  ],
 );
 
 /** Who did what to which record, when. `entity` names the table, so later tables log here too. */
@@ -99,7 +114,10 @@ export const signInAttempts = mysqlTable(
     succeeded: boolean("succeeded").notNull(),
     createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
   },
-  (t) => [index("sign_in_attempts_email").on(t.email, t.createdAt), index("sign_in_attempts_address").on(t.address, t.createdAt)],
+  (t) => [
+    index("sign_in_attempts_email").on(t.email, t.createdAt),
+    index("sign_in_attempts_address").on(t.address, t.createdAt),
+  ],
 );
 
 export const DESIGN_MODES = ["track-for-wheel", "wheel-for-track", "partner-wheel", "twin-wheels"] as const;
@@ -110,7 +128,9 @@ export const designs = mysqlTable(
   "designs",
   {
     id: int("id").autoincrement().primaryKey(),
-    projectId: int("project_id").notNull().references(() => projects.id, { onDelete: "cascade" }),
+    projectId: int("project_id")
+      .notNull()
+      .references(() => projects.id, { onDelete: "cascade" }),
     name: varchar("name", { length: 160 }).notNull(),
     mode: mysqlEnum("mode", DESIGN_MODES).notNull(),
     /** The working draft: a design spec as JSON (validated by the engine's schema before it is stored). */
@@ -133,7 +153,9 @@ export const revisions = mysqlTable(
   "revisions",
   {
     id: int("id").autoincrement().primaryKey(),
-    designId: int("design_id").notNull().references(() => designs.id, { onDelete: "cascade" }),
+    designId: int("design_id")
+      .notNull()
+      .references(() => designs.id, { onDelete: "cascade" }),
     number: int("number").notNull(),
     spec: json("spec").$type<Record<string, unknown>>().notNull(),
     specHash: char("spec_hash", { length: 64 }).notNull(),
@@ -184,7 +206,9 @@ export const GRAIN_DIRECTIONS = ["length", "width", "none"] as const;
 export const stockSheets = mysqlTable("stock_sheets", {
   id: int("id").autoincrement().primaryKey(),
   name: varchar("name", { length: 120 }).notNull().unique(),
-  materialId: int("material_id").notNull().references(() => materials.id),
+  materialId: int("material_id")
+    .notNull()
+    .references(() => materials.id),
   lengthMm: double("length_mm").notNull(),
   widthMm: double("width_mm").notNull(),
   grain: mysqlEnum("grain", GRAIN_DIRECTIONS).notNull().default("length"),
@@ -224,7 +248,9 @@ export const cutPlans = mysqlTable(
   "cut_plans",
   {
     id: int("id").autoincrement().primaryKey(),
-    revisionId: int("revision_id").notNull().references(() => revisions.id, { onDelete: "cascade" }),
+    revisionId: int("revision_id")
+      .notNull()
+      .references(() => revisions.id, { onDelete: "cascade" }),
     /** 1, 2, … within its revision ("cut plan 2 of R3"); the id stays the plan's address in URLs and JSON. */
     number: int("number").notNull(),
     settings: json("settings").$type<Record<string, unknown>>().notNull(),
@@ -233,7 +259,10 @@ export const cutPlans = mysqlTable(
     createdById: int("created_by_id").references(() => users.id),
     createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
   },
-  (t) => [index("cut_plans_revision").on(t.revisionId), uniqueIndex("cut_plans_revision_number").on(t.revisionId, t.number)],
+  (t) => [
+    index("cut_plans_revision").on(t.revisionId),
+    uniqueIndex("cut_plans_revision_number").on(t.revisionId, t.number),
+  ],
 );
 
 export const END_TREATMENTS = ["flat", "half", "scale"] as const;
@@ -247,8 +276,12 @@ export const reviews = mysqlTable(
   "reviews",
   {
     id: int("id").autoincrement().primaryKey(),
-    revisionId: int("revision_id").notNull().references(() => revisions.id),
-    projectId: int("project_id").notNull().references(() => projects.id),
+    revisionId: int("revision_id")
+      .notNull()
+      .references(() => revisions.id),
+    projectId: int("project_id")
+      .notNull()
+      .references(() => projects.id),
     message: varchar("message", { length: 2000 }).notNull(),
     /** The site run the mock-up lays out, mm (null for the pair modes, which have no track). */
     runLengthMm: double("run_length_mm"),
@@ -264,8 +297,12 @@ export const reviewComments = mysqlTable(
   "review_comments",
   {
     id: int("id").autoincrement().primaryKey(),
-    reviewId: int("review_id").notNull().references(() => reviews.id),
-    authorId: int("author_id").notNull().references(() => users.id),
+    reviewId: int("review_id")
+      .notNull()
+      .references(() => reviews.id),
+    authorId: int("author_id")
+      .notNull()
+      .references(() => users.id),
     text: varchar("text", { length: 4000 }).notNull(),
     at: double("at"),
     createdAt: timestamp("created_at", { fsp: 3 }).notNull().defaultNow(),
@@ -285,13 +322,19 @@ export const signOffs = mysqlTable(
   "sign_offs",
   {
     id: int("id").autoincrement().primaryKey(),
-    reviewId: int("review_id").notNull().references(() => reviews.id),
-    revisionId: int("revision_id").notNull().references(() => revisions.id),
+    reviewId: int("review_id")
+      .notNull()
+      .references(() => reviews.id),
+    revisionId: int("revision_id")
+      .notNull()
+      .references(() => revisions.id),
     specHash: char("spec_hash", { length: 64 }).notNull(),
     engineVersion: varchar("engine_version", { length: 32 }).notNull(),
     decision: mysqlEnum("decision", REVIEW_DECISIONS).notNull(),
     typedName: varchar("typed_name", { length: 160 }).notNull(),
-    userId: int("user_id").notNull().references(() => users.id),
+    userId: int("user_id")
+      .notNull()
+      .references(() => users.id),
     /** The comment that came with the decision (required when changes are requested). */
     commentId: int("comment_id").references(() => reviewComments.id),
     signedAt: timestamp("signed_at", { fsp: 3 }).notNull().defaultNow(),
@@ -309,8 +352,12 @@ export const deposits = mysqlTable(
   "deposits",
   {
     id: int("id").autoincrement().primaryKey(),
-    reviewId: int("review_id").notNull().references(() => reviews.id),
-    projectId: int("project_id").notNull().references(() => projects.id),
+    reviewId: int("review_id")
+      .notNull()
+      .references(() => reviews.id),
+    projectId: int("project_id")
+      .notNull()
+      .references(() => projects.id),
     /** In the currency's minor unit (pence, cents). */
     amountMinor: int("amount_minor").notNull(),
     currency: char("currency", { length: 3 }).notNull(),
@@ -333,9 +380,30 @@ export const paymentEvents = mysqlTable("payment_events", {
 });
 
 /** What a build-log entry is about. People write the first eight; the app writes the last three itself. */
-export const LOG_KINDS = ["note", "cut", "assembled", "shipped", "installed", "inspection", "problem", "fixed", "status", "review", "cut-plan"] as const;
+export const LOG_KINDS = [
+  "note",
+  "cut",
+  "assembled",
+  "shipped",
+  "installed",
+  "inspection",
+  "problem",
+  "fixed",
+  "status",
+  "review",
+  "cut-plan",
+] as const;
 export type LogKind = (typeof LOG_KINDS)[number];
-export const PEOPLE_LOG_KINDS = ["note", "cut", "assembled", "shipped", "installed", "inspection", "problem", "fixed"] as const;
+export const PEOPLE_LOG_KINDS = [
+  "note",
+  "cut",
+  "assembled",
+  "shipped",
+  "installed",
+  "inspection",
+  "problem",
+  "fixed",
+] as const;
 
 /**
  * The project's build log, newest first: notes and milestones from the shop and the crew, and the
@@ -347,7 +415,9 @@ export const buildLogEntries = mysqlTable(
   "build_log_entries",
   {
     id: int("id").autoincrement().primaryKey(),
-    projectId: int("project_id").notNull().references(() => projects.id),
+    projectId: int("project_id")
+      .notNull()
+      .references(() => projects.id),
     kind: mysqlEnum("kind", LOG_KINDS).notNull(),
     text: varchar("text", { length: 4000 }).notNull(),
     parts: json("parts").$type<string[]>().notNull(),
@@ -364,8 +434,12 @@ export const buildLogPhotos = mysqlTable(
   "build_log_photos",
   {
     id: int("id").autoincrement().primaryKey(),
-    entryId: int("entry_id").notNull().references(() => buildLogEntries.id),
-    projectId: int("project_id").notNull().references(() => projects.id),
+    entryId: int("entry_id")
+      .notNull()
+      .references(() => buildLogEntries.id),
+    projectId: int("project_id")
+      .notNull()
+      .references(() => projects.id),
     objectKey: varchar("object_key", { length: 200 }).notNull().unique(),
     thumbKey: varchar("thumb_key", { length: 200 }).notNull().unique(),
     contentType: varchar("content_type", { length: 40 }).notNull(),

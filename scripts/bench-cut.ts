@@ -34,7 +34,14 @@ const kerfMs = performance.now() - t0;
 const items = await nestItemsFor(plan.parts, plan.settings, paths);
 const partArea = plan.parts.reduce((a, p) => a + p.quantity * regionArea(p.region), 0);
 const t1 = performance.now();
-const nest = await nestOnSheets({ items, sheet: { width: 2440, height: 1220 }, margin: settings.margin, spacing: settings.spacing, seconds: SECONDS, seed: 1 });
+const nest = await nestOnSheets({
+  items,
+  sheet: { width: 2440, height: 1220 },
+  margin: settings.margin,
+  spacing: settings.spacing,
+  seconds: SECONDS,
+  seed: 1,
+});
 const nestS = (performance.now() - t1) / 1000;
 const t2 = performance.now();
 const zip = await jobZip({ baseName: "bench", result, plan, toolPaths: paths, nest });
@@ -45,6 +52,10 @@ console.log("\ncut plan — demo job (6.0 m, 400 mm square wheels, 2440 × 1220 
 console.log(`  parts             ${plan.parts.length} kinds, ${plan.parts.reduce((n, p) => n + p.quantity, 0)} to cut`);
 console.log(`  build parts       ${median(buildMs).toFixed(1)} ms (median of 9)`);
 console.log(`  kerf offsets      ${kerfMs.toFixed(1)} ms`);
-console.log(`  nest (budget ${SECONDS} s) ${nestS.toFixed(1)} s: ${sheets} sheet(s), ${((100 * partArea) / (sheets * 2440 * 1220)).toFixed(1)} % of the stock used (nominal part area), ${nest.unplaced.length} unplaced`);
-console.log(`  lower bound       ${Math.ceil(partArea / (2420 * 1200))} sheet(s) by area alone (usable 2420 × 1200 mm)`);
+console.log(
+  `  nest (budget ${SECONDS} s) ${nestS.toFixed(1)} s: ${sheets} sheet(s), ${((100 * partArea) / (sheets * 2440 * 1220)).toFixed(1)} % of the stock used (nominal part area), ${nest.unplaced.length} unplaced`,
+);
+console.log(
+  `  lower bound       ${Math.ceil(partArea / (2420 * 1200))} sheet(s) by area alone (usable 2420 × 1200 mm)`,
+);
 console.log(`  files (ZIP)       ${zipMs.toFixed(0)} ms, ${(zip.length / 1024).toFixed(0)} KiB`);

@@ -50,7 +50,9 @@ export async function runSheetCase(c: SheetBenchCase): Promise<void> {
   const input = await c.input();
   const r = await nestOnSheets(input);
   const placed = r.sheets.reduce((s, sh) => s + sh.placements.length, 0);
-  console.log(`${c.name}: ${r.sheets.length} sheet(s), utilisation ${pct(r.utilisation)}, ${placed} placed, ${r.unplaced.length} left out, ${r.seconds.toFixed(1)} s`);
+  console.log(
+    `${c.name}: ${r.sheets.length} sheet(s), utilisation ${pct(r.utilisation)}, ${placed} placed, ${r.unplaced.length} left out, ${r.seconds.toFixed(1)} s`,
+  );
 }
 
 async function main(argv: string[]): Promise<void> {

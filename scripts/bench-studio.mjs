@@ -7,8 +7,19 @@ import path from "node:path";
 import { chromium } from "playwright-core";
 import { testSettings } from "./lib/env.mjs";
 import {
-  buildApp, createAppDatabase, debian, ensureDebianPackages, ensureNodeModules, log, readJson, root,
-  startApp, startMailSink, startMariaDb, tsx, waitForStopped,
+  buildApp,
+  createAppDatabase,
+  debian,
+  ensureDebianPackages,
+  ensureNodeModules,
+  log,
+  readJson,
+  root,
+  startApp,
+  startMailSink,
+  startMariaDb,
+  tsx,
+  waitForStopped,
 } from "./lib/services.mjs";
 
 // Each preset, the field changed and the value typed (the readout must change in answer).
@@ -64,7 +75,15 @@ async function main() {
   const base = s.env.APP_URL;
   const browser = await chromium.launch({
     executablePath: "/usr/bin/chromium",
-    args: ["--no-sandbox", "--disable-gpu", "--disable-quic", "--no-first-run", "--disable-background-networking", "--disable-component-update", "--disable-sync"],
+    args: [
+      "--no-sandbox",
+      "--disable-gpu",
+      "--disable-quic",
+      "--no-first-run",
+      "--disable-background-networking",
+      "--disable-component-update",
+      "--disable-sync",
+    ],
   });
   const page = await browser.newPage({ viewport: { width: 1440, height: 900 } });
   await page.goto(`${base}/login`);
@@ -73,8 +92,12 @@ async function main() {
   await page.getByRole("button", { name: "Sign in" }).click();
   await page.waitForURL(/\/projects$/);
 
-  console.log(`\nStudio in headless Chromium (${await browser.version()}); parameter change → redrawn readout, and frame rate while playing.`);
-  console.log(`${"preset".padEnd(28)} ${"redraw median".padStart(14)} ${"ratio to 100 ms".padStart(16)} ${"seen median".padStart(14)} ${"fps".padStart(6)} ${"ratio to 50".padStart(12)}`);
+  console.log(
+    `\nStudio in headless Chromium (${await browser.version()}); parameter change → redrawn readout, and frame rate while playing.`,
+  );
+  console.log(
+    `${"preset".padEnd(28)} ${"redraw median".padStart(14)} ${"ratio to 100 ms".padStart(16)} ${"seen median".padStart(14)} ${"fps".padStart(6)} ${"ratio to 50".padStart(12)}`,
+  );
   for (const [preset, field, value] of CASES) {
     await page.goto(`${base}/projects/1/designs/new`);
     await page.getByLabel("Design name").fill(`Bench ${preset}`);
@@ -106,7 +129,9 @@ async function main() {
     await page.getByRole("button", { name: /Pause/ }).click();
     const ms = Math.round(median(inPage));
     const outside = median(seen);
-    console.log(`${preset.padEnd(28)} ${`${ms} ms`.padStart(14)} ${(ms / TARGET_MS).toFixed(2).padStart(16)} ${`${outside} ms`.padStart(14)} ${fps.toFixed(0).padStart(6)} ${(fps / TARGET_FPS).toFixed(2).padStart(12)}`);
+    console.log(
+      `${preset.padEnd(28)} ${`${ms} ms`.padStart(14)} ${(ms / TARGET_MS).toFixed(2).padStart(16)} ${`${outside} ms`.padStart(14)} ${fps.toFixed(0).padStart(6)} ${(fps / TARGET_FPS).toFixed(2).padStart(12)}`,
+    );
   }
   console.log(
     `(medians of ${RUNS} changes. redraw: in the page, from the input event of the changed field to the first frame showing the new readout; ` +

@@ -15,7 +15,6 @@ import { median } from "./bench-median";
 
 const dl = new Deadline();
 
-
 function trapezoid(f: (t: number) => number, a: number, b: number, n: number): number {
   const h = (b - a) / n;
   let s = 0.5 * (f(a) + f(b));
@@ -37,7 +36,14 @@ const line = (name: string, ms: number, target: number, extra: string, fixedMs?:
       `  ${extra}`,
   );
 
-function trackBench(name: string, wheel: Wheel, exactPeriod: number, exactY: (x: number) => number, size: number, tol: number) {
+function trackBench(
+  name: string,
+  wheel: Wheel,
+  exactPeriod: number,
+  exactY: (x: number) => number,
+  size: number,
+  tol: number,
+) {
   let out: ReturnType<typeof sampleCurve> | undefined;
   let period = 0;
   const ms = median(() => {
@@ -49,7 +55,13 @@ function trackBench(name: string, wheel: Wheel, exactPeriod: number, exactY: (x:
   const perErr = Math.abs(period - exactPeriod) / size;
   const fixed = fixedStep(wheel.r, 0, TAU / wheel.symmetry, exactPeriod, 1e-9 * size);
   // The fixed-step figure computes the period only (no profile, no sampling).
-  line(name, ms, 5, `profile err ${profErr.toExponential(1)}, period err ${perErr.toExponential(1)} of size; fixed N = ${fixed.n}`, fixed.ms);
+  line(
+    name,
+    ms,
+    5,
+    `profile err ${profErr.toExponential(1)}, period err ${perErr.toExponential(1)} of size; fixed N = ${fixed.n}`,
+    fixed.ms,
+  );
 }
 
 function rollBench(name: string, wheel: Wheel, size: number) {
@@ -99,22 +111,39 @@ function rollBench(name: string, wheel: Wheel, size: number) {
   let fdev = fixedRoll(n);
   while (fdev > 1e-6 * size && n < 1 << 18) fdev = fixedRoll((n *= 2));
   const fixedMs = median(() => fixedRoll(n), 3);
-  const reached = fdev <= 1e-6 * size ? "reached" : `did NOT reach 1e-6 (got ${(fdev / size).toExponential(1)}), so the ratio is a lower bound`;
+  const reached =
+    fdev <= 1e-6 * size
+      ? "reached"
+      : `did NOT reach 1e-6 (got ${(fdev / size).toExponential(1)}), so the ratio is a lower bound`;
   line(name, ms, 50, `axle deviation ${(dev / size).toExponential(1)} of size; fixed N = ${n}, ${reached}`, fixedMs);
 }
 
 console.log(`Axlewright engine bench (Node ${process.version}); medians of repeated runs.\n`);
 
 const A = 200;
-trackBench("track: square, inradius 200, tol 0.01", buildWheel({ kind: "polygon", sides: 4, inradius: A, cornerRadius: 0 }), 2 * A * Math.asinh(1), (x) => {
-  const P = 2 * A * Math.asinh(1);
-  return -A * Math.cosh((x - (x > P / 2 ? P : 0)) / A);
-}, A * Math.SQRT2, 0.01);
+trackBench(
+  "track: square, inradius 200, tol 0.01",
+  buildWheel({ kind: "polygon", sides: 4, inradius: A, cornerRadius: 0 }),
+  2 * A * Math.asinh(1),
+  (x) => {
+    const P = 2 * A * Math.asinh(1);
+    return -A * Math.cosh((x - (x > P / 2 ? P : 0)) / A);
+  },
+  A * Math.SQRT2,
+  0.01,
+);
 const a = 100;
 const e = 0.5;
 const b = a * Math.sqrt(1 - e * e);
 const ell = buildWheel({ kind: "ellipse", semiMajor: a, semiMinor: b, axle: "focus" });
-trackBench("track: focal ellipse 100 × 86.6, tol 0.01", ell, TAU * b, (x) => -a + a * e * Math.cos(x / b), a * (1 + e), 0.01);
+trackBench(
+  "track: focal ellipse 100 × 86.6, tol 0.01",
+  ell,
+  TAU * b,
+  (x) => -a + a * e * Math.cos(x / b),
+  a * (1 + e),
+  0.01,
+);
 
 {
   const track = buildTrack({ kind: "sine", amplitude: 10, period: 100 });
@@ -142,7 +171,13 @@ trackBench("track: focal ellipse 100 × 86.6, tol 0.01", ell, TAU * b, (x) => -a
   };
   let n = 8;
   while (Math.abs(solveFixed(n) - hExact) > 1e-10 * hExact) n *= 2;
-  line("wheel for sine track, k = 4, with closure", ms, 30, `h err ${(Math.abs(h - hExact) / hExact).toExponential(1)}, closure ${closure.toExponential(1)} rad; fixed N = ${n}`, median(() => solveFixed(n), 5));
+  line(
+    "wheel for sine track, k = 4, with closure",
+    ms,
+    30,
+    `h err ${(Math.abs(h - hExact) / hExact).toExponential(1)}, closure ${closure.toExponential(1)} rad; fixed N = ${n}`,
+    median(() => solveFixed(n), 5),
+  );
   void closureAngle;
 }
 
@@ -157,7 +192,8 @@ trackBench("track: focal ellipse 100 × 86.6, tol 0.01", ell, TAU * b, (x) => -a
     sampleCurve(pt.point, 0, TAU / 4, [Math.PI / 4], 0.0001);
   });
   // Fixed step at the same accuracy on a (1e-9 relative; the engine's a is checked against SciPy in the tests).
-  const g = (am: number, n: number) => 2 * trapezoid((t) => 1 / Math.cos(t) / (am - 1 / Math.cos(t)), 0, Math.PI / 4, n) - TAU / 4;
+  const g = (am: number, n: number) =>
+    2 * trapezoid((t) => 1 / Math.cos(t) / (am - 1 / Math.cos(t)), 0, Math.PI / 4, n) - TAU / 4;
   const solveFixed = (n: number) => {
     let lo = Math.SQRT2 * (1 + 1e-12);
     let hi = 10;
@@ -170,8 +206,18 @@ trackBench("track: focal ellipse 100 × 86.6, tol 0.01", ell, TAU * b, (x) => -a
   };
   let n = 8;
   while (Math.abs(solveFixed(n) - aa) > 1e-9 * aa && n < 1 << 22) n *= 2;
-  line("partner of the square, 4 lobes, with closure", ms, 30, `closure ${closure.toExponential(1)} rad; fixed N = ${n}`, median(() => solveFixed(n), 3));
+  line(
+    "partner of the square, 4 lobes, with closure",
+    ms,
+    30,
+    `closure ${closure.toExponential(1)} rad; fixed N = ${n}`,
+    median(() => solveFixed(n), 3),
+  );
 }
 
-rollBench("rolling check: square (radial interference)", buildWheel({ kind: "polygon", sides: 4, inradius: A, cornerRadius: 0 }), A * Math.SQRT2);
+rollBench(
+  "rolling check: square (radial interference)",
+  buildWheel({ kind: "polygon", sides: 4, inradius: A, cornerRadius: 0 }),
+  A * Math.SQRT2,
+);
 rollBench("rolling check: focal ellipse", ell, a * (1 + e));

@@ -40,7 +40,8 @@ interface Args {
 
 function positive(flag: string, v: string | undefined): number {
   const n = Number(v);
-  if (v === undefined || !Number.isFinite(n) || n <= 0) throw new UsageError(`${flag} needs a positive number of millimetres, not "${v ?? ""}".`);
+  if (v === undefined || !Number.isFinite(n) || n <= 0)
+    throw new UsageError(`${flag} needs a positive number of millimetres, not "${v ?? ""}".`);
   return n;
 }
 
@@ -63,16 +64,22 @@ export function parseArgs(argv: string[]): Args {
   }
   const known = new Set(["--format", "--out", "--length", "--sheet", "--units", "--project", "--seconds"]);
   for (const k of flags.keys()) if (!known.has(k)) throw new UsageError(`Unknown flag ${k}.`);
-  if (rest.length !== 1) throw new UsageError(rest.length ? `One spec file only, not ${rest.length}.` : "Give a spec file.");
+  if (rest.length !== 1)
+    throw new UsageError(rest.length ? `One spec file only, not ${rest.length}.` : "Give a spec file.");
   const format = flags.get("--format");
-  if (format !== "dxf" && format !== "svg" && format !== "zip") throw new UsageError(`--format must be dxf, svg or zip${format ? `, not "${format}"` : ""}.`);
+  if (format !== "dxf" && format !== "svg" && format !== "zip")
+    throw new UsageError(`--format must be dxf, svg or zip${format ? `, not "${format}"` : ""}.`);
   const out = flags.get("--out");
   if (!out) throw new UsageError("Give --out FILE.");
   const args: Args = { spec: rest[0], format, out, seconds: 10 };
   if (flags.has("--length")) args.length = positive("--length", flags.get("--length"));
   if (flags.has("--sheet")) {
-    const m = flags.get("--sheet")!.trim().match(/^(\d+(?:\.\d+)?)\s*[x×X*]\s*(\d+(?:\.\d+)?)$/);
-    if (!m) throw new UsageError(`--sheet must look like 2440x1220 (length × width in mm), not "${flags.get("--sheet")}".`);
+    const m = flags
+      .get("--sheet")!
+      .trim()
+      .match(/^(\d+(?:\.\d+)?)\s*[x×X*]\s*(\d+(?:\.\d+)?)$/);
+    if (!m)
+      throw new UsageError(`--sheet must look like 2440x1220 (length × width in mm), not "${flags.get("--sheet")}".`);
     args.sheet = { length: positive("--sheet", m[1]), width: positive("--sheet", m[2]) };
   }
   if (flags.has("--units")) {
@@ -105,13 +112,30 @@ async function loadNester(): Promise<Nester | null> {
   }
 }
 
-async function nest(plan: ReturnType<typeof buildCutParts>, toolPaths: Awaited<ReturnType<typeof kerfParts>>["paths"], s: CutSettings, seconds: number) {
+async function nest(
+  plan: ReturnType<typeof buildCutParts>,
+  toolPaths: Awaited<ReturnType<typeof kerfParts>>["paths"],
+  s: CutSettings,
+  seconds: number,
+) {
   const items = await nestItemsFor(plan.parts, s, toolPaths);
-  const input = { items, sheet: { width: s.sheet.length, height: s.sheet.width }, margin: s.margin, spacing: s.spacing, seconds, seed: 1 };
+  const input = {
+    items,
+    sheet: { width: s.sheet.length, height: s.sheet.width },
+    margin: s.margin,
+    spacing: s.spacing,
+    seconds,
+    seed: 1,
+  };
   const nester = await loadNester();
   if (nester) return { nest: await nester(input), note: `Nested by lib/nest (nestOnSheets, ${seconds} s budget).` };
-  process.stderr.write("note: the nester (lib/nest) is not available yet; the sheets use a plain shelf layout of bounding boxes.\n");
-  return { nest: shelfLayout(input), note: "Laid out by a plain shelf layout of bounding boxes (the nester was not available): utilisation is low." };
+  process.stderr.write(
+    "note: the nester (lib/nest) is not available yet; the sheets use a plain shelf layout of bounding boxes.\n",
+  );
+  return {
+    nest: shelfLayout(input),
+    note: "Laid out by a plain shelf layout of bounding boxes (the nester was not available): utilisation is low.",
+  };
 }
 
 async function main(argv: string[]): Promise<number> {
@@ -148,10 +172,20 @@ async function main(argv: string[]): Promise<number> {
     mkdirSync(dirname(args.out) || ".", { recursive: true });
     const nested = args.sheet || args.format === "zip" ? await nest(plan, toolPaths, s, args.seconds) : null;
     if (nested?.nest.unplaced.length)
-      process.stderr.write(`warning: ${nested.nest.unplaced.length} part copies did not fit on the sheets: ${nested.nest.unplaced.map((u) => `${u.id} (${u.reason})`).join("; ")}\n`);
+      process.stderr.write(
+        `warning: ${nested.nest.unplaced.length} part copies did not fit on the sheets: ${nested.nest.unplaced.map((u) => `${u.id} (${u.reason})`).join("; ")}\n`,
+      );
     if (args.format === "zip") {
       const baseName = slug(projectFor(args));
-      const zip = await jobZip({ baseName, design: basename(args.spec), result, plan, toolPaths, nest: nested!.nest, nestNote: nested!.note });
+      const zip = await jobZip({
+        baseName,
+        design: basename(args.spec),
+        result,
+        plan,
+        toolPaths,
+        nest: nested!.nest,
+        nestNote: nested!.note,
+      });
       writeFileSync(args.out, zip);
     } else {
       const kerfed = s.kerfInFile ? toolPaths : undefined;
@@ -159,12 +193,26 @@ async function main(argv: string[]): Promise<number> {
       if (nested) {
         const { placed, frames } = stackedSheets(plan.parts, nested.nest, s.sheet, 100);
         drawing = buildDrawing(placed, { units: s.outputUnits, toolPaths: kerfed, frames });
-        if (nested.nest.sheets.length > 1) process.stderr.write(`note: ${nested.nest.sheets.length} sheets are drawn one above the other, 100 mm apart; --format zip gives one file per sheet.\n`);
-      } else drawing = buildDrawing(partsRow(plan.parts, { gap: 20 + s.machine.kerf, toolPaths }), { units: s.outputUnits, toolPaths: kerfed });
-      writeFileSync(args.out, args.format === "dxf" ? drawingToDxf(drawing) : drawingToSvg(drawing, { title: s.project }));
+        if (nested.nest.sheets.length > 1)
+          process.stderr.write(
+            `note: ${nested.nest.sheets.length} sheets are drawn one above the other, 100 mm apart; --format zip gives one file per sheet.\n`,
+          );
+      } else
+        drawing = buildDrawing(partsRow(plan.parts, { gap: 20 + s.machine.kerf, toolPaths }), {
+          units: s.outputUnits,
+          toolPaths: kerfed,
+        });
+      writeFileSync(
+        args.out,
+        args.format === "dxf" ? drawingToDxf(drawing) : drawingToSvg(drawing, { title: s.project }),
+      );
     }
-    const sheets = nested ? `, ${nested.nest.sheets.length} sheet(s) at ${(100 * nested.nest.utilisation).toFixed(1)} %` : "";
-    process.stderr.write(`wrote ${args.out}: ${plan.parts.length} parts (${plan.parts.reduce((a, p) => a + p.quantity, 0)} pieces)${sheets}, in ${s.outputUnits}\n`);
+    const sheets = nested
+      ? `, ${nested.nest.sheets.length} sheet(s) at ${(100 * nested.nest.utilisation).toFixed(1)} %`
+      : "";
+    process.stderr.write(
+      `wrote ${args.out}: ${plan.parts.length} parts (${plan.parts.reduce((a, p) => a + p.quantity, 0)} pieces)${sheets}, in ${s.outputUnits}\n`,
+    );
     return 0;
   } catch (e) {
     if (e instanceof EngineError) {

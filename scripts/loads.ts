@@ -30,7 +30,10 @@ function main(argv: string[]): number {
   try {
     const result = solve(parsed.data.spec);
     const report = checkLoads(parsed.data, result);
-    const suggestions = suggestFixes(parsed.data, report).map(({ after, ...s }) => ({ ...s, after: { cautions: after.cautions.length } }));
+    const suggestions = suggestFixes(parsed.data, report).map(({ after, ...s }) => ({
+      ...s,
+      after: { cautions: after.cautions.length },
+    }));
     process.stdout.write(`${JSON.stringify({ ...report, suggestions }, finite)}\n`);
     return 0;
   } catch (e) {

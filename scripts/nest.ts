@@ -29,7 +29,8 @@ async function main(argv: string[]): Promise<number> {
   const seedArg = option(args, "--seed");
   const seconds = secondsArg === undefined ? 30 : Number(secondsArg);
   const seed = seedArg === undefined ? 1 : Number(seedArg);
-  if (!(seconds > 0 && seconds <= 86_400)) return fail(`--seconds must be a number of seconds between 0 and 86400, not ${JSON.stringify(secondsArg)}`);
+  if (!(seconds > 0 && seconds <= 86_400))
+    return fail(`--seconds must be a number of seconds between 0 and 86400, not ${JSON.stringify(secondsArg)}`);
   if (!Number.isInteger(seed)) return fail(`--seed must be a whole number, not ${JSON.stringify(seedArg)}`);
   if (args.length !== 1 || args[0].startsWith("--")) {
     process.stderr.write(USAGE);
@@ -40,7 +41,8 @@ async function main(argv: string[]): Promise<number> {
   let text: string;
   try {
     const size = statSync(path).size;
-    if (size > MAX_BYTES) return fail(`${path} is ${(size / 1024 / 1024).toFixed(1)} MB; instance files are limited to 5 MB`);
+    if (size > MAX_BYTES)
+      return fail(`${path} is ${(size / 1024 / 1024).toFixed(1)} MB; instance files are limited to 5 MB`);
     text = readFileSync(path, "utf8");
   } catch (e) {
     const code = (e as NodeJS.ErrnoException).code;
@@ -50,11 +52,15 @@ async function main(argv: string[]): Promise<number> {
   try {
     instance = loadInstance(JSON.parse(text));
   } catch (e) {
-    return fail(e instanceof SyntaxError ? `${path} is not valid JSON: ${e.message}` : `${path}: ${(e as Error).message}`);
+    return fail(
+      e instanceof SyntaxError ? `${path} is not valid JSON: ${e.message}` : `${path}: ${(e as Error).message}`,
+    );
   }
 
   const total = instance.items.reduce((s, it) => s + it.quantity, 0);
-  process.stderr.write(`nest: ${instance.name}, ${total} copies of ${instance.items.length} items, strip height ${instance.height}, ${seconds} s\n`);
+  process.stderr.write(
+    `nest: ${instance.name}, ${total} copies of ${instance.items.length} items, strip height ${instance.height}, ${seconds} s\n`,
+  );
   let lastLine = -Infinity;
   const result = await nestStrip({
     items: instance.items,
@@ -65,10 +71,14 @@ async function main(argv: string[]): Promise<number> {
       const now = performance.now();
       if (now - lastLine < 2000) return;
       lastLine = now;
-      process.stderr.write(`  ${(p.fraction * 100).toFixed(0).padStart(3)} %  utilisation ${(p.bestUtilisation * 100).toFixed(2)} %  ${p.message ?? ""}\n`);
+      process.stderr.write(
+        `  ${(p.fraction * 100).toFixed(0).padStart(3)} %  utilisation ${(p.bestUtilisation * 100).toFixed(2)} %  ${p.message ?? ""}\n`,
+      );
     },
   });
-  process.stderr.write(`nest: utilisation ${(result.utilisation * 100).toFixed(2)} %, length ${result.length}, ${result.seconds.toFixed(1)} s\n`);
+  process.stderr.write(
+    `nest: utilisation ${(result.utilisation * 100).toFixed(2)} %, length ${result.length}, ${result.seconds.toFixed(1)} s\n`,
+  );
   process.stdout.write(`${JSON.stringify({ name: instance.name, height: instance.height, ...result })}\n`);
   return 0;
 }

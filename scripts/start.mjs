@@ -2,8 +2,22 @@
 // Ctrl-C stops what this started (MariaDB, the mail sink, the app), by process id.
 import { demoSettings } from "./lib/env.mjs";
 import {
-  buildApp, createAppDatabase, readJson, debian, ensureDebianPackages, ensureNodeModules, fail, log, onInterrupt,
-  startApp, startMailSink, startMariaDb, startObjectStore, startPaymentService, tsx, waitForStopped,
+  buildApp,
+  createAppDatabase,
+  readJson,
+  debian,
+  ensureDebianPackages,
+  ensureNodeModules,
+  fail,
+  log,
+  onInterrupt,
+  startApp,
+  startMailSink,
+  startMariaDb,
+  startObjectStore,
+  startPaymentService,
+  tsx,
+  waitForStopped,
 } from "./lib/services.mjs";
 
 // `npm start -- --dev` serves with `next dev` (rebuilds on change) instead of a production build.

@@ -4,8 +4,22 @@
 import path from "node:path";
 import { testSettings } from "./lib/env.mjs";
 import {
-  buildApp, createAppDatabase, debian, ensureDebianPackages, ensureNodeModules, log, onInterrupt, root, run,
-  startApp, startMailSink, startMariaDb, startObjectStore, startPaymentService, tsx, waitForStopped,
+  buildApp,
+  createAppDatabase,
+  debian,
+  ensureDebianPackages,
+  ensureNodeModules,
+  log,
+  onInterrupt,
+  root,
+  run,
+  startApp,
+  startMailSink,
+  startMariaDb,
+  startObjectStore,
+  startPaymentService,
+  tsx,
+  waitForStopped,
 } from "./lib/services.mjs";
 
 const vitest = path.join(root, "node_modules/.bin/vitest");
@@ -21,7 +35,15 @@ const filterArgs = filters.length ? ["--passWithNoTests", ...filters] : [];
 
 async function main() {
   ensureNodeModules();
-  ensureDebianPackages([debian.mariadb, debian.chromium, debian.mpmath, debian.scipy, debian.ezdxf, debian.unzip, debian.poppler]);
+  ensureDebianPackages([
+    debian.mariadb,
+    debian.chromium,
+    debian.mpmath,
+    debian.scipy,
+    debian.ezdxf,
+    debian.unzip,
+    debian.poppler,
+  ]);
   const s = testSettings();
   const env = { ...s.env, AXLEWRIGHT_TEST_OUTPUT: path.join(root, "test-results") };
   onInterrupt(() => waitForStopped());
@@ -42,7 +64,24 @@ async function main() {
     log("formatting (prettier --check)…");
     run(path.join(root, "node_modules/.bin/prettier"), ["--check", "--log-level", "warn", "."], { env });
     log("import cycles (madge) and dead code (knip)…");
-    run(path.join(root, "node_modules/.bin/madge"), ["--circular", "--extensions", "ts,tsx", "--ts-config", "tsconfig.json", "app", "components", "lib", "db", "scripts", "auth.ts", "proxy.ts"], { env });
+    run(
+      path.join(root, "node_modules/.bin/madge"),
+      [
+        "--circular",
+        "--extensions",
+        "ts,tsx",
+        "--ts-config",
+        "tsconfig.json",
+        "app",
+        "components",
+        "lib",
+        "db",
+        "scripts",
+        "auth.ts",
+        "proxy.ts",
+      ],
+      { env },
+    );
     run(path.join(root, "node_modules/.bin/knip"), ["--no-progress"], { env });
   }
   log("unit and integration tests…");

@@ -25,7 +25,11 @@ export const NOT_REACHED = "The server could not be reached. Check the connectio
 /** The body of a failed answer as an ApiError (its own message, else the status in words). */
 export function failureFrom(status: number, body: unknown): ApiError {
   const b = (body ?? {}) as { message?: unknown; fields?: Record<string, string[]> };
-  return new ApiError(status, typeof b.message === "string" && b.message ? b.message : `The server answered ${status}.`, b.fields);
+  return new ApiError(
+    status,
+    typeof b.message === "string" && b.message ? b.message : `The server answered ${status}.`,
+    b.fields,
+  );
 }
 
 export async function requestJson<T>(url: string, init: { method?: string; body?: unknown } = {}): Promise<T> {
@@ -50,5 +54,8 @@ export const postJson = <T>(url: string, body: unknown) => requestJson<T>(url, {
 export function failureOf(error: unknown): ApiFailure | null {
   if (!error) return null;
   if (error instanceof ApiError) return { status: error.status, message: error.message, fields: error.fields };
-  return { status: 0, message: error instanceof Error && error.message ? error.message : "Something went wrong; nothing was saved." };
+  return {
+    status: 0,
+    message: error instanceof Error && error.message ? error.message : "Something went wrong; nothing was saved.",
+  };
 }

@@ -7,7 +7,8 @@ export function uploadForm<T>(url: string, data: FormData, onProgress: (fraction
     const xhr = new XMLHttpRequest();
     xhr.open("POST", url);
     xhr.upload.onprogress = (ev) => ev.lengthComputable && onProgress(ev.loaded / ev.total);
-    xhr.onerror = () => reject(new ApiError(0, "The upload did not get through. Check the connection and try again; nothing was saved."));
+    xhr.onerror = () =>
+      reject(new ApiError(0, "The upload did not get through. Check the connection and try again; nothing was saved."));
     xhr.onload = () => {
       let body: unknown = null;
       try {
@@ -16,7 +17,8 @@ export function uploadForm<T>(url: string, data: FormData, onProgress: (fraction
         body = null;
       }
       if (xhr.status >= 200 && xhr.status < 300) resolve(body as T);
-      else reject(failureFrom(xhr.status, body ?? { message: `The server answered ${xhr.status}; nothing was saved.` }));
+      else
+        reject(failureFrom(xhr.status, body ?? { message: `The server answered ${xhr.status}; nothing was saved.` }));
     };
     xhr.send(data);
   });

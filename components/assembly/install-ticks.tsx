@@ -27,13 +27,30 @@ interface Ticks {
 
 const TicksContext = createContext<Ticks | null>(null);
 
-export function InstallTicks({ cutPlanId, initial, canTick, children }: { cutPlanId: number; initial: TickState; canTick: boolean; children: ReactNode }) {
+export function InstallTicks({
+  cutPlanId,
+  initial,
+  canTick,
+  children,
+}: {
+  cutPlanId: number;
+  initial: TickState;
+  canTick: boolean;
+  children: ReactNode;
+}) {
   const [state, setState] = useState(initial);
   const tick = useMutation({
-    mutationFn: ({ item, done }: { item: string; done: boolean; before: TickState }) => postJson<TickAnswer>(`/api/cut-plans/${cutPlanId}/ticks`, { item, done }),
+    mutationFn: ({ item, done }: { item: string; done: boolean; before: TickState }) =>
+      postJson<TickAnswer>(`/api/cut-plans/${cutPlanId}/ticks`, { item, done }),
     // The box shows the tick at once; the server's answer then sets the count (or undoes the tick).
-    onMutate: ({ item, done, before }) => setState({ ...before, done: { ...before.done, [item]: done }, installed: before.installed + (done ? 1 : -1) }),
-    onSuccess: (answer) => setState({ done: Object.fromEntries(answer.items.map((i) => [i.item, i.done])), installed: answer.installed, total: answer.total }),
+    onMutate: ({ item, done, before }) =>
+      setState({ ...before, done: { ...before.done, [item]: done }, installed: before.installed + (done ? 1 : -1) }),
+    onSuccess: (answer) =>
+      setState({
+        done: Object.fromEntries(answer.items.map((i) => [i.item, i.done])),
+        installed: answer.installed,
+        total: answer.total,
+      }),
     onError: (_error, { before }) => setState(before),
   });
   const busy = tick.isPending ? (tick.variables?.item ?? null) : null;
@@ -78,7 +95,14 @@ export function InstallProgress() {
   const share = state.total ? state.installed / state.total : 0;
   return (
     <div className="flex flex-col gap-1" data-testid="install-progress">
-      <div role="progressbar" aria-label="Installed" aria-valuemin={0} aria-valuemax={state.total} aria-valuenow={state.installed} className="h-2 w-full overflow-hidden rounded-plate bg-paper-deep">
+      <div
+        role="progressbar"
+        aria-label="Installed"
+        aria-valuemin={0}
+        aria-valuemax={state.total}
+        aria-valuenow={state.installed}
+        className="h-2 w-full overflow-hidden rounded-plate bg-paper-deep"
+      >
         <div className="h-full bg-ink" style={{ width: `${share * 100}%` }} />
       </div>
       <p className="text-sm">

@@ -6,18 +6,28 @@ import type { SheetRun } from "@/lib/assembly/sheet";
 import { planLayout } from "@/lib/assembly/plan-scale";
 import { stripSvg } from "@/lib/assembly/plan-svg";
 
-export const station = (mm: number, inches: boolean) => `${mm.toFixed(1)} mm${inches ? ` (${(mm / 25.4).toFixed(2)} in)` : ""}`;
+export const station = (mm: number, inches: boolean) =>
+  `${mm.toFixed(1)} mm${inches ? ` (${(mm / 25.4).toFixed(2)} in)` : ""}`;
 
 /** Printable width of the plan on the page, mm (A4 less its margins; Letter is a little wider). */
 export const PLAN_WIDTH_MM = 180;
 
-export function LayoutPlan({ run, joints, inches }: { run: SheetRun; joints: { station: number; between: [string, string] }[]; inches: boolean }) {
+export function LayoutPlan({
+  run,
+  joints,
+  inches,
+}: {
+  run: SheetRun;
+  joints: { station: number; between: [string, string] }[];
+  inches: boolean;
+}) {
   const layout = planLayout(run.length, PLAN_WIDTH_MM);
   const k = layout.scale;
   return (
     <div className="flex flex-col gap-3" data-testid="layout-plan">
       <p className="text-xs">
-        Scale 1 : {k} when printed at 100 % · datum: station 0 at the start of the run, heights from the track parts&apos; bottom edge · the wheel travels left to right.
+        Scale 1 : {k} when printed at 100 % · datum: station 0 at the start of the run, heights from the track
+        parts&apos; bottom edge · the wheel travels left to right.
       </p>
       {layout.strips.map((s, i) => (
         <figure key={i} className="flex flex-col gap-1 break-inside-avoid">

@@ -30,7 +30,8 @@ export function LogEntryForm({ projectId, kinds, photos }: { projectId: number; 
   const [files, setFiles] = useState<File[]>([]);
   const [progress, setProgress] = useState<number | null>(null);
   const add = useMutation({
-    mutationFn: (data: FormData) => uploadForm<{ photos?: unknown[] }>(`/api/projects/${projectId}/log`, data, setProgress),
+    mutationFn: (data: FormData) =>
+      uploadForm<{ photos?: unknown[] }>(`/api/projects/${projectId}/log`, data, setProgress),
     onMutate: () => setProgress(0),
     onSettled: () => setProgress(null),
     onSuccess: () => {
@@ -41,7 +42,11 @@ export function LogEntryForm({ projectId, kinds, photos }: { projectId: number; 
   });
   const failure = failureOf(add.error);
   const fields = failure?.fields;
-  const message = failure?.message ?? (add.data ? `Added to the build log${add.data.photos?.length ? ` with ${add.data.photos.length} photo(s)` : ""}.` : null);
+  const message =
+    failure?.message ??
+    (add.data
+      ? `Added to the build log${add.data.photos?.length ? ` with ${add.data.photos.length} photo(s)` : ""}.`
+      : null);
 
   function submit(e: FormEvent<HTMLFormElement>) {
     e.preventDefault();
@@ -53,18 +58,47 @@ export function LogEntryForm({ projectId, kinds, photos }: { projectId: number; 
 
   const total = files.reduce((n, f) => n + f.size, 0);
   return (
-    <form ref={form} onSubmit={submit} className="flex flex-col gap-3" aria-label="Add to the build log" data-testid="log-entry-form">
+    <form
+      ref={form}
+      onSubmit={submit}
+      className="flex flex-col gap-3"
+      aria-label="Add to the build log"
+      data-testid="log-entry-form"
+    >
       <div className="grid gap-3 sm:grid-cols-[12rem_1fr]">
-        <SelectField label="Kind" name="kind" defaultValue={kinds[0]} options={kinds.map((k) => ({ value: k, label: KIND_LABEL[k] ?? k }))} errors={fields?.kind} />
-        <TextField label="Parts (ids as engraved)" name="parts" placeholder="e.g. T01, T02" errors={fields?.parts} hint="Optional: the part ids this entry concerns." />
+        <SelectField
+          label="Kind"
+          name="kind"
+          defaultValue={kinds[0]}
+          options={kinds.map((k) => ({ value: k, label: KIND_LABEL[k] ?? k }))}
+          errors={fields?.kind}
+        />
+        <TextField
+          label="Parts (ids as engraved)"
+          name="parts"
+          placeholder="e.g. T01, T02"
+          errors={fields?.parts}
+          hint="Optional: the part ids this entry concerns."
+        />
       </div>
       <div className="flex flex-col gap-1 text-sm">
         <label htmlFor="log-text" className="font-medium">
           What happened
         </label>
-        <textarea id="log-text" name="text" rows={3} maxLength={4000} className="w-full rounded-plate border border-ink-line bg-white/70 px-2.5 py-1.5 text-sm" aria-describedby="log-text-error" />
+        <textarea
+          id="log-text"
+          name="text"
+          rows={3}
+          maxLength={4000}
+          className="w-full rounded-plate border border-ink-line bg-white/70 px-2.5 py-1.5 text-sm"
+          aria-describedby="log-text-error"
+        />
         <div id="log-text-error" aria-live="polite">
-          {fields?.text?.map((m) => <p key={m} className="text-xs font-medium text-caution-ink">{m}</p>)}
+          {fields?.text?.map((m) => (
+            <p key={m} className="text-xs font-medium text-caution-ink">
+              {m}
+            </p>
+          ))}
         </div>
       </div>
       {photos ? (
@@ -82,7 +116,10 @@ export function LogEntryForm({ projectId, kinds, photos }: { projectId: number; 
             onChange={(e) => setFiles([...(e.target.files ?? [])])}
             className="text-sm"
           />
-          <p className="text-xs text-ink-soft">JPEG, PNG or WebP; up to 6 photos, each at most 15 MB and 40 megapixels. Location and camera data are removed.</p>
+          <p className="text-xs text-ink-soft">
+            JPEG, PNG or WebP; up to 6 photos, each at most 15 MB and 40 megapixels. Location and camera data are
+            removed.
+          </p>
           {files.length ? (
             <ul className="font-mono text-xs">
               {files.map((f) => (
@@ -96,10 +133,21 @@ export function LogEntryForm({ projectId, kinds, photos }: { projectId: number; 
       ) : null}
       {progress !== null ? (
         <div className="flex flex-col gap-1">
-          <div role="progressbar" aria-label="Uploading" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round(progress * 100)} className="h-2 w-full overflow-hidden rounded-plate bg-paper-deep">
+          <div
+            role="progressbar"
+            aria-label="Uploading"
+            aria-valuemin={0}
+            aria-valuemax={100}
+            aria-valuenow={Math.round(progress * 100)}
+            className="h-2 w-full overflow-hidden rounded-plate bg-paper-deep"
+          >
             <div className="h-full bg-ink" style={{ width: `${progress * 100}%` }} />
           </div>
-          <p className="text-xs text-ink-soft">{progress < 1 ? `Uploading ${(total / MB).toFixed(1)} MB… ${Math.round(progress * 100)} %` : "Checking the photos…"}</p>
+          <p className="text-xs text-ink-soft">
+            {progress < 1
+              ? `Uploading ${(total / MB).toFixed(1)} MB… ${Math.round(progress * 100)} %`
+              : "Checking the photos…"}
+          </p>
         </div>
       ) : null}
       <div>

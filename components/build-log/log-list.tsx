@@ -23,9 +23,18 @@ export function LogList({ entries }: { entries: LogEntryRow[] }) {
   return (
     <ol className="flex flex-col gap-2" aria-label="Build log" data-testid="log-list">
       {entries.map((e) => (
-        <li key={e.id} className="rounded-plate border border-ink-line bg-white/50 px-3 py-2 text-sm" data-testid={`log-entry-${e.id}`} data-kind={e.kind}>
+        <li
+          key={e.id}
+          className="rounded-plate border border-ink-line bg-white/50 px-3 py-2 text-sm"
+          data-testid={`log-entry-${e.id}`}
+          data-kind={e.kind}
+        >
           <div className="flex flex-wrap items-baseline gap-x-2 gap-y-1 text-xs text-ink-soft">
-            <Badge tone={e.kind === "problem" ? "caution" : e.kind === "fixed" || e.kind === "installed" ? "pass" : "ink"}>{KIND_WORD[e.kind] ?? e.kind}</Badge>
+            <Badge
+              tone={e.kind === "problem" ? "caution" : e.kind === "fixed" || e.kind === "installed" ? "pass" : "ink"}
+            >
+              {KIND_WORD[e.kind] ?? e.kind}
+            </Badge>
             <span className="font-semibold text-ink">{e.author ?? "Axlewright"}</span>
             {e.authorRole ? <span>({e.authorRole})</span> : null}
             <span className="font-mono">{formatWhen(e.createdAt)}</span>
@@ -39,7 +48,14 @@ export function LogList({ entries }: { entries: LogEntryRow[] }) {
                   <a href={`/api/photos/${p.id}`} target="_blank" rel="noreferrer">
                     {/* A plain img: the thumbnail is already made small on the server, and served through the checked route. */}
                     {/* eslint-disable-next-line @next/next/no-img-element */}
-                    <img src={`/api/photos/${p.id}?size=thumb`} alt={`Photo ${p.name || p.id}`} width={160} height={Math.round((160 * p.height) / p.width)} loading="lazy" className="h-28 w-auto rounded-plate border border-paper-edge" />
+                    <img
+                      src={`/api/photos/${p.id}?size=thumb`}
+                      alt={`Photo ${p.name || p.id}`}
+                      width={160}
+                      height={Math.round((160 * p.height) / p.width)}
+                      loading="lazy"
+                      className="h-28 w-auto rounded-plate border border-paper-edge"
+                    />
                   </a>
                 </li>
               ))}

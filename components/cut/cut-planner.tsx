@@ -40,7 +40,8 @@ export function CutPlanner({ revision, designName, projectName, library, initial
   const save = useSavePlan(revision.id);
 
   const errorField = fieldOfError(parts.error?.field);
-  const errors: Partial<Record<keyof PlanForm, string>> = errorField && parts.error ? { [errorField]: parts.error.message } : {};
+  const errors: Partial<Record<keyof PlanForm, string>> =
+    errorField && parts.error ? { [errorField]: parts.error.message } : {};
   const preview = parts.error ? undefined : parts.preview;
   const run = preview?.plan.run ?? parts.preview?.plan.run ?? null;
   // A nest belongs to the settings it was made with: changed settings need a new nest before saving.
@@ -63,7 +64,13 @@ export function CutPlanner({ revision, designName, projectName, library, initial
     <div className="grid gap-4 lg:grid-cols-[26rem_1fr]">
       <div className="flex flex-col gap-3">
         <Panel title="Settings">
-          <PlanFields form={form} set={set} library={library} errors={errors} hasTrack={run !== null || (parts.busy && !parts.preview)} />
+          <PlanFields
+            form={form}
+            set={set}
+            library={library}
+            errors={errors}
+            hasTrack={run !== null || (parts.busy && !parts.preview)}
+          />
         </Panel>
       </div>
 
@@ -74,7 +81,11 @@ export function CutPlanner({ revision, designName, projectName, library, initial
           </Notice>
         ) : null}
         {run ? <RunPanel run={run} endTreatment={form.endTreatment} choose={(t) => set("endTreatment", t)} /> : null}
-        {preview ? <PartsPanel preview={preview} /> : parts.busy ? <p className="text-sm text-ink-soft">Building the parts…</p> : null}
+        {preview ? (
+          <PartsPanel preview={preview} />
+        ) : parts.busy ? (
+          <p className="text-sm text-ink-soft">Building the parts…</p>
+        ) : null}
         <NestPanel
           state={nester.state}
           seconds={seconds}

@@ -19,16 +19,32 @@ export function bbox(ring: [number, number][]) {
  * so the page and the saved plan never disagree.
  */
 export function usedShare(preview: PartsPreview, placements: { id: string }[], sheetArea: number): number {
-  const area = new Map(preview.plan.parts.map((p) => [p.id, ringArea(p.region.outer) - p.region.holes.reduce((a, h) => a + ringArea(h), 0)]));
+  const area = new Map(
+    preview.plan.parts.map((p) => [
+      p.id,
+      ringArea(p.region.outer) - p.region.holes.reduce((a, h) => a + ringArea(h), 0),
+    ]),
+  );
   return placements.reduce((sum, pl) => sum + (area.get(pl.id) ?? 0), 0) / sheetArea;
 }
 
-export function sheetParts(preview: PartsPreview, placements: SheetNestResult["sheets"][number]["placements"]): SheetViewPart[] {
+export function sheetParts(
+  preview: PartsPreview,
+  placements: SheetNestResult["sheets"][number]["placements"],
+): SheetViewPart[] {
   const byId = new Map(preview.plan.parts.map((p) => [p.id, p]));
   return placements.flatMap((pl) => {
     const part = byId.get(pl.id);
     if (!part) return [];
-    return [{ key: `${pl.id}-${pl.copy}`, label: pl.id, kind: part.kind, outer: placeRing(part.region.outer, pl.rotation, pl.x, pl.y), holes: part.region.holes.map((h) => placeRing(h, pl.rotation, pl.x, pl.y)) }];
+    return [
+      {
+        key: `${pl.id}-${pl.copy}`,
+        label: pl.id,
+        kind: part.kind,
+        outer: placeRing(part.region.outer, pl.rotation, pl.x, pl.y),
+        holes: part.region.holes.map((h) => placeRing(h, pl.rotation, pl.x, pl.y)),
+      },
+    ];
   });
 }
 

@@ -32,13 +32,32 @@ interface Props {
   onSave: (intent: SaveIntent) => void;
 }
 
-export function NestPanel({ state, seconds, setSeconds, canNest, onNest, onCancel, stale, approved, revisionNumber, save, onSave }: Props) {
+export function NestPanel({
+  state,
+  seconds,
+  setSeconds,
+  canNest,
+  onNest,
+  onCancel,
+  stale,
+  approved,
+  revisionNumber,
+  save,
+  onSave,
+}: Props) {
   const running = state.phase === "running" ? state : null;
   return (
     <Panel title="Nest parts on stock sheets">
       <div className="flex flex-wrap items-end gap-3">
         <div className="w-28">
-          <TextInput id="nest-seconds" label="Search time" unit="s" inputMode="numeric" value={seconds} onChange={setSeconds} />
+          <TextInput
+            id="nest-seconds"
+            label="Search time"
+            unit="s"
+            inputMode="numeric"
+            value={seconds}
+            onChange={setSeconds}
+          />
         </div>
         <Button type="button" onClick={onNest} disabled={!canNest || !!running}>
           {state.phase === "done" ? "Nest again" : "Nest parts"}
@@ -51,7 +70,16 @@ export function NestPanel({ state, seconds, setSeconds, canNest, onNest, onCance
       </div>
       {running ? <NestProgressBar running={running} /> : null}
       {state.phase === "failed" ? <Notice tone="problem">{state.message}</Notice> : null}
-      {state.phase === "done" ? <NestResult nest={state} stale={stale} approved={approved} revisionNumber={revisionNumber} save={save} onSave={onSave} /> : null}
+      {state.phase === "done" ? (
+        <NestResult
+          nest={state}
+          stale={stale}
+          approved={approved}
+          revisionNumber={revisionNumber}
+          save={save}
+          onSave={onSave}
+        />
+      ) : null}
     </Panel>
   );
 }
@@ -60,15 +88,40 @@ function NestProgressBar({ running }: { running: Running }) {
   const p = running.progress;
   return (
     <div className="mt-3 flex flex-col gap-1" data-testid="nest-progress">
-      <div role="progressbar" aria-label="Nesting" aria-valuemin={0} aria-valuemax={100} aria-valuenow={Math.round((p?.fraction ?? 0) * 100)} className="h-2 w-full overflow-hidden rounded-plate bg-paper-deep">
+      <div
+        role="progressbar"
+        aria-label="Nesting"
+        aria-valuemin={0}
+        aria-valuemax={100}
+        aria-valuenow={Math.round((p?.fraction ?? 0) * 100)}
+        className="h-2 w-full overflow-hidden rounded-plate bg-paper-deep"
+      >
         <div className="h-full bg-ink transition-[width]" style={{ width: `${(p?.fraction ?? 0) * 100}%` }} />
       </div>
-      <p className="text-xs text-ink-soft">{p ? `${p.placed} of ${p.total} placed; best so far ${pct(p.bestUtilisation)}${p.message ? ` — ${p.message}` : ""}` : "Starting…"}</p>
+      <p className="text-xs text-ink-soft">
+        {p
+          ? `${p.placed} of ${p.total} placed; best so far ${pct(p.bestUtilisation)}${p.message ? ` — ${p.message}` : ""}`
+          : "Starting…"}
+      </p>
     </div>
   );
 }
 
-function NestResult({ nest, stale, approved, revisionNumber, save, onSave }: { nest: Done; stale: boolean; approved: boolean; revisionNumber: number; save: ReturnType<typeof useSavePlan>; onSave: (intent: SaveIntent) => void }) {
+function NestResult({
+  nest,
+  stale,
+  approved,
+  revisionNumber,
+  save,
+  onSave,
+}: {
+  nest: Done;
+  stale: boolean;
+  approved: boolean;
+  revisionNumber: number;
+  save: ReturnType<typeof useSavePlan>;
+  onSave: (intent: SaveIntent) => void;
+}) {
   const { sheetArea, usedSheets, overall } = nestFigures(nest);
   const unplaced = nest.nest.unplaced;
   return (
@@ -77,7 +130,9 @@ function NestResult({ nest, stale, approved, revisionNumber, save, onSave }: { n
         {usedSheets.length} sheet(s), {pct(overall)} of the stock used overall
         {nest.nest.cancelled ? " (stopped early: the best layout found so far)" : ""}; {nest.nest.seconds.toFixed(1)} s.
       </p>
-      {stale ? <Notice tone="problem">The settings have changed since this nest: nest again before saving it.</Notice> : null}
+      {stale ? (
+        <Notice tone="problem">The settings have changed since this nest: nest again before saving it.</Notice>
+      ) : null}
       {unplaced.length ? (
         <Notice tone="problem" testId="unplaced">
           Not placed: {unplaced.map((u) => `${u.id} — ${u.reason}`).join("; ")}
@@ -86,19 +141,41 @@ function NestResult({ nest, stale, approved, revisionNumber, save, onSave }: { n
       {usedSheets.map((sh) => (
         <NestedSheet key={sh.index} preview={nest.preview} sheet={sh} sheetArea={sheetArea} />
       ))}
-      <SaveButtons approved={approved} revisionNumber={revisionNumber} disabled={unplaced.length > 0 || stale || save.isPending} saving={save.isPending} onSave={onSave} />
+      <SaveButtons
+        approved={approved}
+        revisionNumber={revisionNumber}
+        disabled={unplaced.length > 0 || stale || save.isPending}
+        saving={save.isPending}
+        onSave={onSave}
+      />
       <SaveMessage save={save} revisionNumber={revisionNumber} />
     </div>
   );
 }
 
-function NestedSheet({ preview, sheet, sheetArea }: { preview: PartsPreview; sheet: Done["nest"]["sheets"][number]; sheetArea: number }) {
+function NestedSheet({
+  preview,
+  sheet,
+  sheetArea,
+}: {
+  preview: PartsPreview;
+  sheet: Done["nest"]["sheets"][number];
+  sheetArea: number;
+}) {
   const s = preview.plan.settings;
   return (
     <figure className="flex flex-col gap-1">
-      <SheetView width={s.sheet.length} height={s.sheet.width} margin={s.margin} grain={s.sheet.grain} parts={sheetParts(preview, sheet.placements)} title={`Sheet ${sheet.index + 1}`} />
+      <SheetView
+        width={s.sheet.length}
+        height={s.sheet.width}
+        margin={s.margin}
+        grain={s.sheet.grain}
+        parts={sheetParts(preview, sheet.placements)}
+        title={`Sheet ${sheet.index + 1}`}
+      />
       <figcaption className="text-xs text-ink-soft">
-        Sheet {sheet.index + 1}: {sheet.placements.length} parts, {pct(usedShare(preview, sheet.placements, sheetArea))} used
+        Sheet {sheet.index + 1}: {sheet.placements.length} parts, {pct(usedShare(preview, sheet.placements, sheetArea))}{" "}
+        used
       </figcaption>
     </figure>
   );

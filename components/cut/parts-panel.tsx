@@ -26,7 +26,11 @@ export function PartsPanel({ preview }: { preview: PartsPreview }) {
       {warnings.length ? (
         <ul className="mt-3 flex flex-col gap-1" aria-label="Warnings">
           {warnings.map((w, i) => (
-            <li key={i} className="rounded-plate border border-caution bg-caution-soft px-2 py-1 text-sm text-caution-ink" data-testid="cut-warning">
+            <li
+              key={i}
+              className="rounded-plate border border-caution bg-caution-soft px-2 py-1 text-sm text-caution-ink"
+              data-testid="cut-warning"
+            >
               {w.partId ? <span className="font-mono">{w.partId}: </span> : null}
               {w.message}
             </li>

@@ -16,16 +16,73 @@ type Set = <K extends keyof PlanForm>(key: K, value: PlanForm[K]) => void;
 
 // Thin bindings of the shared inputs to one key of the plan form; ids stay "cut-<key>" so an error
 // path from the settings schema finds its field.
-function NumberInput({ name, label, form, set, error, hint, unit = "mm" }: { name: keyof PlanForm; label: string; form: PlanForm; set: Set; error?: string; hint?: ReactNode; unit?: string }) {
-  return <TextInput id={`cut-${name}`} label={label} unit={unit || undefined} inputMode="decimal" value={form[name] as string} error={error} hint={hint} onChange={(v) => set(name, v as never)} />;
+function NumberInput({
+  name,
+  label,
+  form,
+  set,
+  error,
+  hint,
+  unit = "mm",
+}: {
+  name: keyof PlanForm;
+  label: string;
+  form: PlanForm;
+  set: Set;
+  error?: string;
+  hint?: ReactNode;
+  unit?: string;
+}) {
+  return (
+    <TextInput
+      id={`cut-${name}`}
+      label={label}
+      unit={unit || undefined}
+      inputMode="decimal"
+      value={form[name] as string}
+      error={error}
+      hint={hint}
+      onChange={(v) => set(name, v as never)}
+    />
+  );
 }
 
-function Select({ name, label, form, set, options, error }: { name: keyof PlanForm; label: string; form: PlanForm; set: Set; options: { value: string; label: string }[]; error?: string }) {
-  return <SelectInput id={`cut-${name}`} label={label} value={form[name] as string} options={options} error={error} onChange={(v) => set(name, v as never)} />;
+function Select({
+  name,
+  label,
+  form,
+  set,
+  options,
+  error,
+}: {
+  name: keyof PlanForm;
+  label: string;
+  form: PlanForm;
+  set: Set;
+  options: { value: string; label: string }[];
+  error?: string;
+}) {
+  return (
+    <SelectInput
+      id={`cut-${name}`}
+      label={label}
+      value={form[name] as string}
+      options={options}
+      error={error}
+      onChange={(v) => set(name, v as never)}
+    />
+  );
 }
 
 function Check({ name, label, form, set }: { name: keyof PlanForm; label: string; form: PlanForm; set: Set }) {
-  return <CheckInput id={`cut-${name}`} label={label} checked={form[name] as boolean} onChange={(v) => set(name, v as never)} />;
+  return (
+    <CheckInput
+      id={`cut-${name}`}
+      label={label}
+      checked={form[name] as boolean}
+      onChange={(v) => set(name, v as never)}
+    />
+  );
 }
 
 function Group({ title, children }: { title: string; children: ReactNode }) {
@@ -39,11 +96,29 @@ function Group({ title, children }: { title: string; children: ReactNode }) {
 
 /** Which field a schema error belongs to: its path, as the settings name it. */
 const FIELD_OF: Record<string, keyof PlanForm> = {
-  runLength: "runLength", endTreatment: "endTreatment", baseDepth: "baseDepth", trackLines: "trackLines", layers: "layers", cuts: "cuts",
-  "joint.keyWidth": "keyWidth", "joint.keyDepth": "keyDepth", "joint.clearance": "clearance", "joint.dowelDiameter": "dowelDiameter",
-  "joint.dowelInset": "dowelInset", "joint.dowelSpacing": "dowelSpacing", supportSpacing: "supportSpacing", supportHoleDiameter: "supportHoleDiameter",
-  wheelCount: "wheelCount", boreDiameter: "boreDiameter", "lightening.count": "lighteningCount", "lightening.rim": "lighteningRim",
-  labelHeight: "labelHeight", margin: "margin", spacing: "spacing", "machine.kerf": "machineId", sheet: "stockSheetId",
+  runLength: "runLength",
+  endTreatment: "endTreatment",
+  baseDepth: "baseDepth",
+  trackLines: "trackLines",
+  layers: "layers",
+  cuts: "cuts",
+  "joint.keyWidth": "keyWidth",
+  "joint.keyDepth": "keyDepth",
+  "joint.clearance": "clearance",
+  "joint.dowelDiameter": "dowelDiameter",
+  "joint.dowelInset": "dowelInset",
+  "joint.dowelSpacing": "dowelSpacing",
+  supportSpacing: "supportSpacing",
+  supportHoleDiameter: "supportHoleDiameter",
+  wheelCount: "wheelCount",
+  boreDiameter: "boreDiameter",
+  "lightening.count": "lighteningCount",
+  "lightening.rim": "lighteningRim",
+  labelHeight: "labelHeight",
+  margin: "margin",
+  spacing: "spacing",
+  "machine.kerf": "machineId",
+  sheet: "stockSheetId",
 };
 
 export function fieldOfError(path: string | undefined): keyof PlanForm | undefined {
@@ -55,20 +130,46 @@ export function fieldOfError(path: string | undefined): keyof PlanForm | undefin
   return undefined;
 }
 
-export function PlanFields({ form, set, library, errors, hasTrack }: { form: PlanForm; set: Set; library: LibraryOptions; errors: Partial<Record<keyof PlanForm, string>>; hasTrack: boolean }) {
+export function PlanFields({
+  form,
+  set,
+  library,
+  errors,
+  hasTrack,
+}: {
+  form: PlanForm;
+  set: Set;
+  library: LibraryOptions;
+  errors: Partial<Record<keyof PlanForm, string>>;
+  hasTrack: boolean;
+}) {
   const p = { form, set };
   return (
     <div className="flex flex-col gap-3">
       <Group title="Stock and machine">
-        <Select {...p} name="materialId" label="Material" error={errors.materialId} options={library.materials.map((m) => ({ value: String(m.id), label: m.name }))} />
+        <Select
+          {...p}
+          name="materialId"
+          label="Material"
+          error={errors.materialId}
+          options={library.materials.map((m) => ({ value: String(m.id), label: m.name }))}
+        />
         <Select
           {...p}
           name="stockSheetId"
           label="Stock sheet"
           error={errors.stockSheetId}
-          options={library.sheets.filter((s) => String(s.materialId) === form.materialId).map((s) => ({ value: String(s.id), label: s.name }))}
+          options={library.sheets
+            .filter((s) => String(s.materialId) === form.materialId)
+            .map((s) => ({ value: String(s.id), label: s.name }))}
         />
-        <Select {...p} name="machineId" label="Machine" error={errors.machineId} options={library.machines.map((m) => ({ value: String(m.id), label: m.name }))} />
+        <Select
+          {...p}
+          name="machineId"
+          label="Machine"
+          error={errors.machineId}
+          options={library.machines.map((m) => ({ value: String(m.id), label: m.name }))}
+        />
         <Select
           {...p}
           name="rotations"
@@ -76,16 +177,42 @@ export function PlanFields({ form, set, library, errors, hasTrack }: { form: Pla
           options={Object.entries(ROTATION_LABELS).map(([value, label]) => ({ value, label }))}
         />
         <NumberInput {...p} name="margin" label="Sheet margin" error={errors.margin} />
-        <NumberInput {...p} name="spacing" label="Part spacing" error={errors.spacing} hint="Stock left between two cuts." />
+        <NumberInput
+          {...p}
+          name="spacing"
+          label="Part spacing"
+          error={errors.spacing}
+          hint="Stock left between two cuts."
+        />
       </Group>
       {hasTrack ? (
         <Group title="Run and track">
           <NumberInput {...p} name="runLength" label="Run length on site" error={errors.runLength} />
           <NumberInput {...p} name="baseDepth" label="Base below the lowest point" error={errors.baseDepth} />
-          <NumberInput {...p} name="trackLines" label="Track lines" unit="" error={errors.trackLines} hint="Parallel tracks, one per wheel line." />
-          <NumberInput {...p} name="layers" label="Layers per track" unit="" error={errors.layers} hint="Sheets glued face to face." />
+          <NumberInput
+            {...p}
+            name="trackLines"
+            label="Track lines"
+            unit=""
+            error={errors.trackLines}
+            hint="Parallel tracks, one per wheel line."
+          />
+          <NumberInput
+            {...p}
+            name="layers"
+            label="Layers per track"
+            unit=""
+            error={errors.layers}
+            hint="Sheets glued face to face."
+          />
           <div className="col-span-2">
-            <NumberInput {...p} name="cuts" label="Cut stations along the run" error={errors.cuts} hint="Leave empty to cut at crests, as long as the sheet allows; or list your own, e.g. 1410, 2820." />
+            <NumberInput
+              {...p}
+              name="cuts"
+              label="Cut stations along the run"
+              error={errors.cuts}
+              hint="Leave empty to cut at crests, as long as the sheet allows; or list your own, e.g. 1410, 2820."
+            />
           </div>
           <Select
             {...p}
@@ -110,12 +237,23 @@ export function PlanFields({ form, set, library, errors, hasTrack }: { form: Pla
             </>
           )}
           <NumberInput {...p} name="supportSpacing" label="Support hole spacing" error={errors.supportSpacing} />
-          <NumberInput {...p} name="supportHoleDiameter" label="Support hole diameter" error={errors.supportHoleDiameter} />
+          <NumberInput
+            {...p}
+            name="supportHoleDiameter"
+            label="Support hole diameter"
+            error={errors.supportHoleDiameter}
+          />
         </Group>
       ) : null}
       <Group title="Wheels">
         <NumberInput {...p} name="wheelCount" label="Wheels to cut" unit="" error={errors.wheelCount} />
-        <NumberInput {...p} name="boreDiameter" label="Axle bore diameter" error={errors.boreDiameter} hint="0 for no bore." />
+        <NumberInput
+          {...p}
+          name="boreDiameter"
+          label="Axle bore diameter"
+          error={errors.boreDiameter}
+          hint="0 for no bore."
+        />
         <div className="col-span-2">
           <Check {...p} name="lightening" label="Lightening holes" />
         </div>
@@ -138,7 +276,11 @@ export function PlanFields({ form, set, library, errors, hasTrack }: { form: Pla
           ]}
         />
         <div className="col-span-2">
-          <Check {...p} name="kerfInFile" label="Offset the cuts for the kerf in the files (otherwise the shop's CAM does it)" />
+          <Check
+            {...p}
+            name="kerfInFile"
+            label="Offset the cuts for the kerf in the files (otherwise the shop's CAM does it)"
+          />
         </div>
       </Group>
     </div>

@@ -34,19 +34,44 @@ export function SaveButtons({ approved, revisionNumber, disabled, saving, onSave
         <Button type="button" onClick={() => onSave({ purpose: "review" })} disabled={disabled}>
           {saving ? SAVING : SAVE}
         </Button>
-        <Button type="button" variant="caution" onClick={() => setAsking((a) => !a)} disabled={disabled} aria-expanded={asking}>
+        <Button
+          type="button"
+          variant="caution"
+          onClick={() => setAsking((a) => !a)}
+          disabled={disabled}
+          aria-expanded={asking}
+        >
           Save for production without approval…
         </Button>
       </div>
-      <p className="text-xs text-ink-soft">R{revisionNumber} is not approved by the client: a saved cut plan is for review, and its files say NOT APPROVED — FOR REVIEW ONLY.</p>
+      <p className="text-xs text-ink-soft">
+        R{revisionNumber} is not approved by the client: a saved cut plan is for review, and its files say NOT APPROVED
+        — FOR REVIEW ONLY.
+      </p>
       {asking ? (
-        <div className="flex flex-col gap-2 rounded-plate border border-caution bg-caution-soft p-3" role="group" aria-label="Save for production without approval">
+        <div
+          className="flex flex-col gap-2 rounded-plate border border-caution bg-caution-soft p-3"
+          role="group"
+          aria-label="Save for production without approval"
+        >
           <label htmlFor="unapproved-reason" className="text-sm font-medium text-caution-ink">
             Why does this go to production before the client approves it? (logged)
           </label>
-          <textarea id="unapproved-reason" rows={2} maxLength={500} value={reason} onChange={(e) => setReason(e.target.value)} className="w-full rounded-plate border border-ink-line bg-white/80 px-2.5 py-1.5 text-sm" />
+          <textarea
+            id="unapproved-reason"
+            rows={2}
+            maxLength={500}
+            value={reason}
+            onChange={(e) => setReason(e.target.value)}
+            className="w-full rounded-plate border border-ink-line bg-white/80 px-2.5 py-1.5 text-sm"
+          />
           <div>
-            <Button type="button" variant="caution" disabled={disabled || reason.trim() === ""} onClick={() => onSave({ purpose: "production", reason: reason.trim() })}>
+            <Button
+              type="button"
+              variant="caution"
+              disabled={disabled || reason.trim() === ""}
+              onClick={() => onSave({ purpose: "production", reason: reason.trim() })}
+            >
               Confirm: save for production
             </Button>
           </div>

@@ -9,16 +9,36 @@ export interface SavedPlanView {
   number: number;
   createdAt: string;
   createdBy: string | null;
-  summary: { sheets: number; utilisation: number; perSheet: number[]; copies: number; material: string; sheet: string; machine: string; warnings: string[]; purpose?: "review" | "production"; unapprovedReason?: string | null };
+  summary: {
+    sheets: number;
+    utilisation: number;
+    perSheet: number[];
+    copies: number;
+    material: string;
+    sheet: string;
+    machine: string;
+    warnings: string[];
+    purpose?: "review" | "production";
+    unapprovedReason?: string | null;
+  };
   files: string[];
 }
 
-export function SavedPlan({ saved, designName, revisionNumber }: { saved: SavedPlanView | null; designName: string; revisionNumber: number }) {
+export function SavedPlan({
+  saved,
+  designName,
+  revisionNumber,
+}: {
+  saved: SavedPlanView | null;
+  designName: string;
+  revisionNumber: number;
+}) {
   if (!saved) {
     return (
       <Panel title="Cut files">
         <p className="text-sm text-ink-soft">
-          No cut plan is saved for {designName} R{revisionNumber} yet. Nest the parts and save the result to get the files.
+          No cut plan is saved for {designName} R{revisionNumber} yet. Nest the parts and save the result to get the
+          files.
         </p>
       </Panel>
     );
@@ -27,10 +47,22 @@ export function SavedPlan({ saved, designName, revisionNumber }: { saved: SavedP
   return (
     <Panel title="Cut files">
       <p className="mb-2 text-sm" data-testid="stored-plan">
-        {cutPlanName(saved.number, revisionNumber)}, saved {new Date(saved.createdAt).toLocaleString()} by {saved.createdBy ?? "—"}: {s.copies} parts on {s.sheets} × {s.sheet}, {pct(s.utilisation)} used; {s.machine}.
-        {s.purpose ? <> Saved for {s.purpose}{s.unapprovedReason ? ` without the client's approval (reason: ${s.unapprovedReason})` : ""}.</> : null}
+        {cutPlanName(saved.number, revisionNumber)}, saved {new Date(saved.createdAt).toLocaleString()} by{" "}
+        {saved.createdBy ?? "—"}: {s.copies} parts on {s.sheets} × {s.sheet}, {pct(s.utilisation)} used; {s.machine}.
+        {s.purpose ? (
+          <>
+            {" "}
+            Saved for {s.purpose}
+            {s.unapprovedReason ? ` without the client's approval (reason: ${s.unapprovedReason})` : ""}.
+          </>
+        ) : null}
       </p>
-      <a href={`/api/cut-plans/${saved.id}/files/job.zip`} className="inline-block rounded-plate border border-ink bg-ink px-3 py-1.5 text-sm font-medium text-paper" data-testid="download-zip" download>
+      <a
+        href={`/api/cut-plans/${saved.id}/files/job.zip`}
+        className="inline-block rounded-plate border border-ink bg-ink px-3 py-1.5 text-sm font-medium text-paper"
+        data-testid="download-zip"
+        download
+      >
         Download everything (ZIP)
       </a>
       <ul className="mt-3 grid gap-1 text-sm sm:grid-cols-2">

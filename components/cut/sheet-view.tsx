@@ -13,7 +13,8 @@ export interface SheetViewPart {
 const toPoints = (ring: Ring) => ring.map(([x, y]) => `${x.toFixed(2)},${y.toFixed(2)}`).join(" ");
 
 function centroid(ring: Ring): [number, number] {
-  let sx = 0, sy = 0;
+  let sx = 0,
+    sy = 0;
   for (const [x, y] of ring) {
     sx += x;
     sy += y;
@@ -23,7 +24,21 @@ function centroid(ring: Ring): [number, number] {
 
 const FILL: Record<string, string> = { track: "#d9c6a3", wheel: "#c9d6c3", partner: "#c3cfd9", splice: "#e3d3c9" };
 
-export function SheetView({ width, height, margin, parts, grain, title }: { width: number; height: number; margin: number; parts: SheetViewPart[]; grain: "length" | "width" | "none"; title: string }) {
+export function SheetView({
+  width,
+  height,
+  margin,
+  parts,
+  grain,
+  title,
+}: {
+  width: number;
+  height: number;
+  margin: number;
+  parts: SheetViewPart[];
+  grain: "length" | "width" | "none";
+  title: string;
+}) {
   const pad = Math.max(width, height) * 0.02;
   const font = Math.max(width, height) / 60;
   return (
@@ -36,7 +51,16 @@ export function SheetView({ width, height, margin, parts, grain, title }: { widt
     >
       <g transform={`translate(0 ${height}) scale(1 -1)`}>
         <rect x={0} y={0} width={width} height={height} fill="#f4efe4" stroke="#5b5141" strokeWidth={font / 6} />
-        <rect x={margin} y={margin} width={width - 2 * margin} height={height - 2 * margin} fill="none" stroke="#5b5141" strokeDasharray={`${font / 2} ${font / 2}`} strokeWidth={font / 12} />
+        <rect
+          x={margin}
+          y={margin}
+          width={width - 2 * margin}
+          height={height - 2 * margin}
+          fill="none"
+          stroke="#5b5141"
+          strokeDasharray={`${font / 2} ${font / 2}`}
+          strokeWidth={font / 12}
+        />
         {parts.map((p) => (
           <g key={p.key}>
             <path
@@ -52,7 +76,16 @@ export function SheetView({ width, height, margin, parts, grain, title }: { widt
       {parts.map((p) => {
         const [cx, cy] = centroid(p.outer);
         return (
-          <text key={`${p.key}-label`} x={cx} y={height - cy} fontSize={font} textAnchor="middle" dominantBaseline="middle" className="font-mono" fill="#2d2a24">
+          <text
+            key={`${p.key}-label`}
+            x={cx}
+            y={height - cy}
+            fontSize={font}
+            textAnchor="middle"
+            dominantBaseline="middle"
+            className="font-mono"
+            fill="#2d2a24"
+          >
             {p.label}
           </text>
         );

@@ -59,7 +59,8 @@ export function useParts(spec: unknown, settings: unknown, delayMs = 150): Parts
         if (event.type === "failed") return setState((s) => ({ ...s, busy: false, error: { message: event.message } }));
         const reply = event.reply;
         if (reply.type === "parts") setState({ preview: reply.preview, busy: false });
-        else if (reply.type === "error") setState((s) => ({ preview: s.preview, error: { message: reply.message, field: reply.field }, busy: false }));
+        else if (reply.type === "error")
+          setState((s) => ({ preview: s.preview, error: { message: reply.message, field: reply.field }, busy: false }));
       });
     }, delayMs);
     return () => clearTimeout(timer);
@@ -86,7 +87,8 @@ export function useNester() {
       client.request({ type: "nest", spec, settings, seconds }, (event) => {
         if (event.type === "failed") return setState({ phase: "failed", message: event.message });
         const reply = event.reply;
-        if (reply.type === "progress") setState((s) => (s.phase === "running" ? { ...s, progress: reply.progress } : s));
+        if (reply.type === "progress")
+          setState((s) => (s.phase === "running" ? { ...s, progress: reply.progress } : s));
         else if (reply.type === "nested") setState({ phase: "done", nest: reply.nest, preview: reply.preview });
         else if (reply.type === "error") setState({ phase: "failed", message: reply.message, field: reply.field });
       });

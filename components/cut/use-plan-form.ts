@@ -16,8 +16,13 @@ export function usePlanForm(initialForm: PlanForm, library: PlannerLibrary, proj
     setForm((f) => {
       const next = { ...f, [key]: value };
       // A sheet of another material makes no sense: follow the material with its largest sheet.
-      if (key === "materialId" && !library.sheets.some((s) => String(s.id) === f.stockSheetId && String(s.materialId) === value)) {
-        const sheet = library.sheets.filter((s) => String(s.materialId) === value).sort((a, b) => b.lengthMm * b.widthMm - a.lengthMm * a.widthMm)[0];
+      if (
+        key === "materialId" &&
+        !library.sheets.some((s) => String(s.id) === f.stockSheetId && String(s.materialId) === value)
+      ) {
+        const sheet = library.sheets
+          .filter((s) => String(s.materialId) === value)
+          .sort((a, b) => b.lengthMm * b.widthMm - a.lengthMm * a.widthMm)[0];
         if (sheet) next.stockSheetId = String(sheet.id);
       }
       return next;

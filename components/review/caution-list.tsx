@@ -9,12 +9,22 @@ export const SIGNAL_TONE: Record<Signal, string> = {
 };
 
 /** The cautions that apply to a design, each with its signal word, for people deciding about it. */
-export function CautionList({ cautions, disclaimer }: { cautions: { signal: Signal; text: string; detail?: string }[]; disclaimer?: string }) {
+export function CautionList({
+  cautions,
+  disclaimer,
+}: {
+  cautions: { signal: Signal; text: string; detail?: string }[];
+  disclaimer?: string;
+}) {
   const list = (
     <ul className="flex flex-col gap-2" aria-label="Cautions" data-testid="review-cautions">
       {cautions.map((c, i) => (
         <li key={i} className="flex gap-2 text-sm">
-          <span className={`h-fit shrink-0 rounded-plate border px-1.5 py-0.5 font-mono text-[11px] font-semibold tracking-wider ${SIGNAL_TONE[c.signal]}`}>{c.signal}</span>
+          <span
+            className={`h-fit shrink-0 rounded-plate border px-1.5 py-0.5 font-mono text-[11px] font-semibold tracking-wider ${SIGNAL_TONE[c.signal]}`}
+          >
+            {c.signal}
+          </span>
           <span>
             {c.text}
             {c.detail ? <span className="mt-0.5 block text-xs text-ink-soft">{c.detail}</span> : null}

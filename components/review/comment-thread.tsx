@@ -44,11 +44,22 @@ interface Props {
   onSelect: (id: number | null) => void;
 }
 
-export function CommentThread({ reviewId, comments, pair, pinAt, picking, onPickToggle, onClearPin, selectedId, onSelect }: Props) {
+export function CommentThread({
+  reviewId,
+  comments,
+  pair,
+  pinAt,
+  picking,
+  onPickToggle,
+  onClearPin,
+  selectedId,
+  onSelect,
+}: Props) {
   const router = useRouter();
   const [text, setText] = useState("");
   const post = useMutation({
-    mutationFn: (body: { text: string; at?: number }) => postJson<{ comment: ThreadComment }>(`/api/reviews/${reviewId}/comments`, body),
+    mutationFn: (body: { text: string; at?: number }) =>
+      postJson<{ comment: ThreadComment }>(`/api/reviews/${reviewId}/comments`, body),
     onSuccess: () => {
       setText("");
       onClearPin();
@@ -70,13 +81,23 @@ export function CommentThread({ reviewId, comments, pair, pinAt, picking, onPick
         {comments.map((c) => {
           const pin = pins.get(c.id);
           return (
-            <li key={c.id} data-testid={`comment-${c.id}`} className={`rounded-plate border px-3 py-2 text-sm ${selectedId === c.id ? "border-ink bg-white/80" : "border-ink-line bg-white/50"}`}>
+            <li
+              key={c.id}
+              data-testid={`comment-${c.id}`}
+              className={`rounded-plate border px-3 py-2 text-sm ${selectedId === c.id ? "border-ink bg-white/80" : "border-ink-line bg-white/50"}`}
+            >
               <div className="flex flex-wrap items-baseline gap-x-2 text-xs text-ink-soft">
                 <span className="font-semibold text-ink">{c.author}</span>
                 {c.authorRole ? <span>({c.authorRole})</span> : null}
                 <span className="font-mono">{formatWhen(c.createdAt)}</span>
                 {pin !== undefined && c.at !== null ? (
-                  <button type="button" className="font-mono underline" onClick={() => onSelect(selectedId === c.id ? null : c.id)} aria-pressed={selectedId === c.id} data-testid={`pin-link-${pin}`}>
+                  <button
+                    type="button"
+                    className="font-mono underline"
+                    onClick={() => onSelect(selectedId === c.id ? null : c.id)}
+                    aria-pressed={selectedId === c.id}
+                    data-testid={`pin-link-${pin}`}
+                  >
                     pin {pin}: {placeText(c.at, pair)}
                   </button>
                 ) : null}
@@ -90,9 +111,22 @@ export function CommentThread({ reviewId, comments, pair, pinAt, picking, onPick
         <label htmlFor="field-comment" className="text-sm font-medium">
           Add a comment
         </label>
-        <textarea id="field-comment" value={text} onChange={(e) => setText(e.target.value)} rows={3} maxLength={4000} required aria-describedby="field-comment-error" className="w-full rounded-plate border border-ink-line bg-white/70 px-2.5 py-1.5 text-sm" />
+        <textarea
+          id="field-comment"
+          value={text}
+          onChange={(e) => setText(e.target.value)}
+          rows={3}
+          maxLength={4000}
+          required
+          aria-describedby="field-comment-error"
+          className="w-full rounded-plate border border-ink-line bg-white/70 px-2.5 py-1.5 text-sm"
+        />
         <div id="field-comment-error" aria-live="polite">
-          {(failure?.fields?.text ?? []).concat(failure?.fields?.at ?? []).map((m) => <p key={m} className="text-xs font-medium text-caution-ink">{m}</p>)}
+          {(failure?.fields?.text ?? []).concat(failure?.fields?.at ?? []).map((m) => (
+            <p key={m} className="text-xs font-medium text-caution-ink">
+              {m}
+            </p>
+          ))}
         </div>
         <div className="flex flex-wrap items-center gap-2 text-sm">
           <Button type="button" variant="quiet" onClick={onPickToggle} aria-pressed={picking} data-testid="pin-toggle">

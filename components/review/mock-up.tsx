@@ -10,8 +10,22 @@ import { FrameMeter } from "@/components/studio/view/studio-probe";
 import { useRollingClock } from "@/components/studio/view/use-rolling-clock";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
-import { COMPACT_WIDTH, followView, scaleRatio, wholeView, type Screen, type ViewMode } from "@/lib/review/mock-up-view";
-import { placeOfPosition, poseOnRun, positionOfPlace, runScene, type RunChoice, type RunScene } from "@/lib/review/run-scene";
+import {
+  COMPACT_WIDTH,
+  followView,
+  scaleRatio,
+  wholeView,
+  type Screen,
+  type ViewMode,
+} from "@/lib/review/mock-up-view";
+import {
+  placeOfPosition,
+  poseOnRun,
+  positionOfPlace,
+  runScene,
+  type RunChoice,
+  type RunScene,
+} from "@/lib/review/run-scene";
 import type { SolvedGeometry } from "@/lib/track";
 import { MockUpDrawing, type Marker } from "./mock-up-drawing";
 import { publishReviewProbe } from "./mock-up-probe";
@@ -40,7 +54,9 @@ function loopSeconds(scene: RunScene): number {
 /** Words for a roll position: where the wheel is along the run, or how far a pair's driver has turned. */
 function describe(scene: RunScene, p: number, units: "mm" | "in"): string {
   const place = placeOfPosition(scene, p);
-  return scene.kind === "pair" ? `driver turned ${place.toFixed(0)}°` : `wheel at ${lengthIn(place, units)} along the run`;
+  return scene.kind === "pair"
+    ? `driver turned ${place.toFixed(0)}°`
+    : `wheel at ${lengthIn(place, units)} along the run`;
 }
 
 function lengthIn(mm: number, units: "mm" | "in"): string {
@@ -56,17 +72,31 @@ export function MockUp(props: MockUpProps) {
   if (solved.error) return <Notice tone="problem">The mock-up could not be drawn: {solved.error.message}</Notice>;
   if (!solved.result)
     return (
-      <p className="rounded-plate border border-ink-line bg-paper px-3 py-8 text-center text-sm text-ink-soft" data-testid="mockup-waiting">
+      <p
+        className="rounded-plate border border-ink-line bg-paper px-3 py-8 text-center text-sm text-ink-soft"
+        data-testid="mockup-waiting"
+      >
         Drawing the mock-up…
       </p>
     );
   return <MockUpScene {...props} result={solved.result} />;
 }
 
-function MockUpScene({ result, run, markers = [], selected = null, onSelectMarker, picking = false, onPickPlace, focusAt }: MockUpProps & { result: SolvedGeometry }) {
+function MockUpScene({
+  result,
+  run,
+  markers = [],
+  selected = null,
+  onSelectMarker,
+  picking = false,
+  onPickPlace,
+  focusAt,
+}: MockUpProps & { result: SolvedGeometry }) {
   const scene = useMemo(() => runScene(result, run), [result, run]);
   // It plays at once, unless the reader asks for less motion (Media Queries Level 5, prefers-reduced-motion).
-  const [reduced] = useState(() => typeof window !== "undefined" && !!window.matchMedia?.("(prefers-reduced-motion: reduce)").matches);
+  const [reduced] = useState(
+    () => typeof window !== "undefined" && !!window.matchMedia?.("(prefers-reduced-motion: reduce)").matches,
+  );
   const clock = useRollingClock({ cycleSeconds: loopSeconds(scene), initialPlaying: !reduced });
   const { playing, setPlaying, position, setPosition } = clock;
   const [mode, setMode] = useState<ViewMode>("whole");
@@ -146,32 +176,63 @@ function MockUpScene({ result, run, markers = [], selected = null, onSelectMarke
   return (
     <div ref={box} className="flex flex-col gap-2" data-testid="mockup">
       <div className="overflow-hidden rounded-plate border border-paper-edge">
-        <MockUpDrawing scene={scene} pose={pose} view={view} px={px} markers={markers} selected={selected} picking={picking} onPick={onPickPlace} onSelectMarker={onSelectMarker} svgRef={svg} label={label} compact={screen.width < COMPACT_WIDTH} />
+        <MockUpDrawing
+          scene={scene}
+          pose={pose}
+          view={view}
+          px={px}
+          markers={markers}
+          selected={selected}
+          picking={picking}
+          onPick={onPickPlace}
+          onSelectMarker={onSelectMarker}
+          svgRef={svg}
+          label={label}
+          compact={screen.width < COMPACT_WIDTH}
+        />
       </div>
       <PlayControls {...clock.controls} describePosition={(p) => describe(scene, p, units)} />
       <div className="no-print flex flex-wrap items-center gap-2 text-sm">
         <div role="group" aria-label="View" className="flex overflow-hidden rounded-plate border border-ink-line">
           {(["whole", "follow"] as const).map((m) => (
-            <button key={m} type="button" aria-pressed={mode === m} onClick={() => setMode(m)} className={`px-2 py-1 text-xs ${mode === m ? "bg-ink text-paper" : "bg-transparent text-ink"}`}>
+            <button
+              key={m}
+              type="button"
+              aria-pressed={mode === m}
+              onClick={() => setMode(m)}
+              className={`px-2 py-1 text-xs ${mode === m ? "bg-ink text-paper" : "bg-transparent text-ink"}`}
+            >
               {m === "whole" ? "Whole run" : "Follow the wheel"}
             </button>
           ))}
         </div>
         <div role="group" aria-label="Units" className="flex overflow-hidden rounded-plate border border-ink-line">
           {(["mm", "in"] as const).map((u) => (
-            <button key={u} type="button" aria-pressed={units === u} onClick={() => setUnits(u)} className={`px-2 py-1 font-mono text-xs ${units === u ? "bg-ink text-paper" : "bg-transparent text-ink"}`}>
+            <button
+              key={u}
+              type="button"
+              aria-pressed={units === u}
+              onClick={() => setUnits(u)}
+              className={`px-2 py-1 font-mono text-xs ${units === u ? "bg-ink text-paper" : "bg-transparent text-ink"}`}
+            >
               {u}
             </button>
           ))}
         </div>
         {picking && onPickPlace ? (
-          <Button type="button" variant="quiet" onClick={() => onPickPlace(Number(place.toFixed(scene.kind === "pair" ? 1 : 0)))} data-testid="pin-at-wheel">
+          <Button
+            type="button"
+            variant="quiet"
+            onClick={() => onPickPlace(Number(place.toFixed(scene.kind === "pair" ? 1 : 0)))}
+            data-testid="pin-at-wheel"
+          >
             Pin where the wheel is
           </Button>
         ) : null}
       </div>
       <p className="font-mono text-xs text-ink-soft" aria-live="off">
-        scale {scaleRatio(px)} on this screen{picking ? " · tap the drawing to choose the place, or pin where the wheel is" : ""}
+        scale {scaleRatio(px)} on this screen
+        {picking ? " · tap the drawing to choose the place, or pin where the wheel is" : ""}
       </p>
       <Dimensions scene={scene} units={units} />
     </div>
@@ -182,11 +243,20 @@ function Dimensions({ scene, units }: { scene: RunScene; units: "mm" | "in" }) {
   const rows: [string, string][] = [];
   const dm = scene.dims;
   if (scene.kind === "run") {
-    rows.push(["Run length", `${lengthIn(scene.runLength, units)} (${scene.periods} periods of ${lengthIn(scene.period, units)}${scene.eachEnd > 1 ? `, ${lengthIn(scene.eachEnd, units)} flat at each end` : ""})`]);
+    rows.push([
+      "Run length",
+      `${lengthIn(scene.runLength, units)} (${scene.periods} periods of ${lengthIn(scene.period, units)}${scene.eachEnd > 1 ? `, ${lengthIn(scene.eachEnd, units)} flat at each end` : ""})`,
+    ]);
     rows.push(["Hump height", lengthIn(dm.humpHeight!, units)]);
-    rows.push([scene.mode === "twin-wheels" ? "Upper axle above the lowest point" : "Axle above the floor", lengthIn(dm.axleHeight!, units)]);
+    rows.push([
+      scene.mode === "twin-wheels" ? "Upper axle above the lowest point" : "Axle above the floor",
+      lengthIn(dm.axleHeight!, units),
+    ]);
   } else rows.push(["Centre distance", lengthIn(scene.centreDistance, units)]);
-  rows.push([scene.kind === "pair" ? "Driver, across" : scene.mode === "twin-wheels" ? "Each wheel, across" : "Wheel, across", lengthIn(dm.wheelAcross, units)]);
+  rows.push([
+    scene.kind === "pair" ? "Driver, across" : scene.mode === "twin-wheels" ? "Each wheel, across" : "Wheel, across",
+    lengthIn(dm.wheelAcross, units),
+  ]);
   if (scene.kind === "pair" && dm.partnerAcross) rows.push(["Partner, across", lengthIn(dm.partnerAcross, units)]);
   return (
     <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-0.5 text-sm" data-testid="mockup-dimensions">
@@ -196,7 +266,11 @@ function Dimensions({ scene, units }: { scene: RunScene; units: "mm" | "in" }) {
           <dd className="font-mono">{v}</dd>
         </div>
       ))}
-      {scene.kind === "pair" ? <p className="col-span-2 text-xs text-ink-soft">The design does not set how high the pair is mounted: the person stands level with its lowest point.</p> : null}
+      {scene.kind === "pair" ? (
+        <p className="col-span-2 text-xs text-ink-soft">
+          The design does not set how high the pair is mounted: the person stands level with its lowest point.
+        </p>
+      ) : null}
     </dl>
   );
 }

@@ -32,12 +32,19 @@ export function ReviewList({ reviews }: { reviews: ReviewListRow[] }) {
             {r.requestedBy ? <span className="font-sans"> by {r.requestedBy}</span> : null}
           </td>
           <td>
-            <Badge tone={r.status === "approved" ? "pass" : r.status === "changes-requested" ? "caution" : "ink"}>{REVIEW_STATUS_LABEL[r.status]}</Badge>
-            {r.status === "approved" && r.decision ? <div className="mt-1 font-mono text-xs">{approvalReference(r.decision)}</div> : null}
+            <Badge tone={r.status === "approved" ? "pass" : r.status === "changes-requested" ? "caution" : "ink"}>
+              {REVIEW_STATUS_LABEL[r.status]}
+            </Badge>
+            {r.status === "approved" && r.decision ? (
+              <div className="mt-1 font-mono text-xs">{approvalReference(r.decision)}</div>
+            ) : null}
           </td>
           <td className="text-xs">{depositText(r.deposit)}</td>
           <td className="text-right">
-            <Link href={`/projects/${r.projectId}/reviews/${r.id}`} className="text-sm font-medium underline decoration-ink-line underline-offset-2">
+            <Link
+              href={`/projects/${r.projectId}/reviews/${r.id}`}
+              className="text-sm font-medium underline decoration-ink-line underline-offset-2"
+            >
               Open the review
             </Link>
           </td>

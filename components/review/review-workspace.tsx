@@ -27,17 +27,17 @@ export function ReviewWorkspace({ reviewId, spec, run, pair, comments }: Props) 
       {/* The mock-up takes the screen's width, as the studio's canvas does; the thread keeps the page's. */}
       <div className="relative left-1/2 w-[min(96rem,calc(100vw-2rem))] -translate-x-1/2">
         <MockUp
-        spec={spec}
-        run={run}
-        markers={markers}
-        selected={selected}
-        onSelectMarker={(id) => setSelected((s) => (s === id ? null : id))}
-        picking={picking}
-        onPickPlace={(at) => {
-          setPinAt(at);
-          setPicking(false);
-        }}
-        focusAt={focusAt}
+          spec={spec}
+          run={run}
+          markers={markers}
+          selected={selected}
+          onSelectMarker={(id) => setSelected((s) => (s === id ? null : id))}
+          picking={picking}
+          onPickPlace={(at) => {
+            setPinAt(at);
+            setPicking(false);
+          }}
+          focusAt={focusAt}
         />
       </div>
       <section aria-labelledby="thread-heading" className="flex flex-col gap-2">

@@ -19,7 +19,17 @@ import { useSolver } from "./use-solver";
 import { useStudioSpec } from "./use-studio-spec";
 import { StudioView } from "./view";
 
-export function DesignStudio({ designId, projectId, revisionNumber, library = [] }: { designId: number; projectId: number; revisionNumber?: number; library?: LibraryMaterial[] }) {
+export function DesignStudio({
+  designId,
+  projectId,
+  revisionNumber,
+  library = [],
+}: {
+  designId: number;
+  projectId: number;
+  revisionNumber?: number;
+  library?: LibraryMaterial[];
+}) {
   const router = useRouter();
   const base = `/projects/${projectId}/designs/${designId}`;
   const studio = useStudioSpec(designId, revisionNumber, library);
@@ -66,7 +76,13 @@ export function DesignStudio({ designId, projectId, revisionNumber, library = []
             <Notice>{canEdit ? "Loading…" : "No revision has been saved yet."}</Notice>
           )}
           {canEdit && revisionNumber === undefined && studio.working ? (
-            <SaveRevisionPanel designId={designId} spec={studio.working} loads={studio.loads} blocked={!!solver.error} onSaved={studio.forgetEdits} />
+            <SaveRevisionPanel
+              designId={designId}
+              spec={studio.working}
+              loads={studio.loads}
+              blocked={!!solver.error}
+              onSaved={studio.forgetEdits}
+            />
           ) : null}
         </div>
         <div className="flex min-w-0 flex-col gap-4">
@@ -78,8 +94,15 @@ export function DesignStudio({ designId, projectId, revisionNumber, library = []
               checkError={solver.checkError?.message}
               spec={designSpecSchema.safeParse(spec).data}
               error={solver.error ? studioMessage(solver.error) : undefined}
-              onPick={readOnly ? undefined : (n: number) => change(spec.mode === "partner-wheel" ? { ...spec, lobes: n } : { ...spec, periodsPerTurn: n })}
-              onAxleChange={readOnly || !outlineWheel ? undefined : (axle) => change({ ...spec, wheel: { ...outlineWheel, axle } })}
+              onPick={
+                readOnly
+                  ? undefined
+                  : (n: number) =>
+                      change(spec.mode === "partner-wheel" ? { ...spec, lobes: n } : { ...spec, periodsPerTurn: n })
+              }
+              onAxleChange={
+                readOnly || !outlineWheel ? undefined : (axle) => change({ ...spec, wheel: { ...outlineWheel, axle } })
+              }
               belowCheck={(showAt) => (
                 <LoadsPanel
                   settings={studio.loads}
@@ -98,7 +121,12 @@ export function DesignStudio({ designId, projectId, revisionNumber, library = []
       </div>
 
       <Panel title="Revisions">
-        <RevisionList revisions={design.data.revisions} base={base} openNumber={revisionNumber} reviewBase={canEdit ? `/projects/${design.data.design.projectId}` : undefined} />
+        <RevisionList
+          revisions={design.data.revisions}
+          base={base}
+          openNumber={revisionNumber}
+          reviewBase={canEdit ? `/projects/${design.data.design.projectId}` : undefined}
+        />
       </Panel>
     </div>
   );

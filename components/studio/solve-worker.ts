@@ -6,7 +6,14 @@
 // A fourth stage runs the load-path check (lib/loads) on the checked design, with the helper's
 // suggestions, when the studio sends load settings.
 import { checkLoads, suggestFixes, type LoadsReport, type Suggestion } from "@/lib/loads";
-import { isEngineError, solveInStages, type CheckResult, type SolvedGeometry, type SolveOption, type SolveStages } from "@/lib/track";
+import {
+  isEngineError,
+  solveInStages,
+  type CheckResult,
+  type SolvedGeometry,
+  type SolveOption,
+  type SolveStages,
+} from "@/lib/track";
 import { loadsInputSchema, type LoadsSettings, type TreadOption } from "@/lib/validation/loads";
 
 /** The studio's load settings and the library's treads for the helper. */
@@ -34,7 +41,13 @@ export type SolveReply =
   | { id: number; stage: "geometry"; ok: true; geometry: SolvedGeometry; ms: number }
   | { id: number; stage: "options"; ok: true; options: SolveOption[] | undefined; ms: number }
   | { id: number; stage: "check"; ok: true; check: CheckResult; ms: number }
-  | { id: number; stage: "loads"; ok: true; loads: { report: LoadsReport; suggestions: Suggestion[] } | null; ms: number }
+  | {
+      id: number;
+      stage: "loads";
+      ok: true;
+      loads: { report: LoadsReport; suggestions: Suggestion[] } | null;
+      ms: number;
+    }
   | { id: number; stage: SolveStage; ok: false; error: SolveFailure };
 
 /** Each stage's own time limit. */
@@ -85,7 +98,12 @@ function step(j: Job): void {
       const parsed = loadsInputSchema.safeParse({ ...j.loads.settings, spec: j.spec, treads: j.loads.treads });
       if (!parsed.success) {
         const issue = parsed.error.issues[0];
-        return post({ id: j.id, stage, ok: false, error: { message: issue.message, code: "invalid-loads", where: issue.path.join(".") } });
+        return post({
+          id: j.id,
+          stage,
+          ok: false,
+          error: { message: issue.message, code: "invalid-loads", where: issue.path.join(".") },
+        });
       }
       const report = checkLoads(parsed.data, { ...j.stages!.geometry, ...j.checked! });
       post({ id: j.id, stage, ok: true, loads: { report, suggestions: suggestFixes(parsed.data, report) }, ms: ms() });

@@ -50,13 +50,18 @@ export function useSolver(spec: unknown, loads: LoadsRequest | null = null): Sol
     const [specNow, loadsNow] = JSON.parse(key) as [unknown, LoadsRequest | null];
     client.request({ spec: specNow, loads: loadsNow }, (event) => {
       // A worker that could not start (or stopped answering) reads as a failed geometry stage.
-      const reply: SolveReply = event.type === "reply" ? event.reply : { id: 0, stage: "geometry", ok: false, error: { message: event.message, code: "internal" } };
+      const reply: SolveReply =
+        event.type === "reply"
+          ? event.reply
+          : { id: 0, stage: "geometry", ok: false, error: { message: event.message, code: "internal" } };
       if (!reply.ok) {
         const error = reply.error;
-        if (reply.stage === "geometry") setSolved((s) => ({ key, result: s.result, error, checking: false, ms: performance.now() - posted }));
+        if (reply.stage === "geometry")
+          setSolved((s) => ({ key, result: s.result, error, checking: false, ms: performance.now() - posted }));
         else if (reply.stage === "loads") setSolved((s) => ({ ...s, loads: undefined, loadsError: error }));
         else setSolved((s) => ({ ...s, checkError: error, checking: false }));
-      } else if (reply.stage === "geometry") setSolved({ key, result: reply.geometry, checking: true, ms: performance.now() - posted });
+      } else if (reply.stage === "geometry")
+        setSolved({ key, result: reply.geometry, checking: true, ms: performance.now() - posted });
       else if (reply.stage === "options") setSolved((s) => ({ ...s, options: reply.options }));
       else if (reply.stage === "check") setSolved((s) => ({ ...s, check: reply.check, checking: false }));
       else setSolved((s) => ({ ...s, loads: reply.loads, loadsError: undefined }));

@@ -18,13 +18,20 @@ function canonical(spec: unknown): unknown {
 export function useStudioSpec(designId: number, revisionNumber: number | undefined, library: LibraryMaterial[]) {
   const design = useQuery({ queryKey: ["design", designId], queryFn: () => api.design(designId) });
   const openRevision = design.data?.revisions.find((r) => r.number === revisionNumber);
-  const revision = useQuery({ queryKey: ["revision", openRevision?.id], queryFn: () => api.revision(openRevision!.id), enabled: !!openRevision });
+  const revision = useQuery({
+    queryKey: ["revision", openRevision?.id],
+    queryFn: () => api.revision(openRevision!.id),
+    enabled: !!openRevision,
+  });
   const canEdit = design.data?.you.canEdit ?? false;
   const readOnly = revisionNumber !== undefined || !canEdit;
 
   const [edited, setEdited] = useState<DesignSpecInput | null>(null);
   const savedDraft = design.data?.design.draft;
-  const working = useMemo(() => edited ?? (savedDraft ? (loadLocalDraft(designId) ?? savedDraft) : null), [edited, savedDraft, designId]);
+  const working = useMemo(
+    () => edited ?? (savedDraft ? (loadLocalDraft(designId) ?? savedDraft) : null),
+    [edited, savedDraft, designId],
+  );
 
   const latest = design.data?.revisions[0];
   const latestRevision = useQuery({
@@ -33,7 +40,11 @@ export function useStudioSpec(designId: number, revisionNumber: number | undefin
     enabled: !canEdit && revisionNumber === undefined && !!latest,
   });
   const spec: DesignSpecInput | null =
-    revisionNumber !== undefined ? (revision.data?.revision.spec ?? null) : canEdit ? working : (latestRevision.data?.revision.spec ?? null);
+    revisionNumber !== undefined
+      ? (revision.data?.revision.spec ?? null)
+      : canEdit
+        ? working
+        : (latestRevision.data?.revision.spec ?? null);
 
   // The load settings beside the spec: edited here, else kept in this browser, else the saved ones,
   // else the library's defaults; a revision shows its own.
@@ -51,7 +62,8 @@ export function useStudioSpec(designId: number, revisionNumber: number | undefin
     revisionNumber === undefined &&
     !!working &&
     !!savedDraft &&
-    (!sameSpec(canonical(working), canonical(savedDraft)) || !sameSpec(loads, settingsOrDefault(savedLoads, library).settings));
+    (!sameSpec(canonical(working), canonical(savedDraft)) ||
+      !sameSpec(loads, settingsOrDefault(savedLoads, library).settings));
 
   const change = (next: DesignSpecInput) => {
     setEdited(next);
@@ -67,5 +79,18 @@ export function useStudioSpec(designId: number, revisionNumber: number | undefin
     setEditedLoads(null);
   };
 
-  return { design, revision, canEdit, readOnly, working, spec, loads, loadsRequest, unsaved, change, changeLoads, forgetEdits };
+  return {
+    design,
+    revision,
+    canEdit,
+    readOnly,
+    working,
+    spec,
+    loads,
+    loadsRequest,
+    unsaved,
+    change,
+    changeLoads,
+    forgetEdits,
+  };
 }

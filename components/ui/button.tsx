@@ -8,7 +8,11 @@ const STYLES: Record<Variant, string> = {
   caution: "bg-transparent text-caution-ink hover:bg-caution-soft border-caution",
 };
 
-export function Button({ variant = "primary", className = "", ...props }: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
+export function Button({
+  variant = "primary",
+  className = "",
+  ...props
+}: ButtonHTMLAttributes<HTMLButtonElement> & { variant?: Variant }) {
   return (
     <button
       className={`inline-flex items-center gap-2 rounded-plate border px-3 py-1.5 text-sm font-medium transition-colors disabled:cursor-not-allowed disabled:opacity-50 ${STYLES[variant]} ${className}`}

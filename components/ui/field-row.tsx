@@ -2,7 +2,19 @@ import type { ReactNode } from "react";
 
 // A label, its control, and under it either the control's error or its hint (never both), tied
 // together by ids so a screen reader and a test find the error from the field.
-export function FieldRow({ id, label, error, children, hint }: { id: string; label: string; error?: string; children: ReactNode; hint?: ReactNode }) {
+export function FieldRow({
+  id,
+  label,
+  error,
+  children,
+  hint,
+}: {
+  id: string;
+  label: string;
+  error?: string;
+  children: ReactNode;
+  hint?: ReactNode;
+}) {
   return (
     <div className="flex flex-col gap-0.5 text-sm">
       <label htmlFor={id} className="font-medium">

@@ -23,10 +23,16 @@ function Messages({ id, errors, hint }: { id: string; errors?: string[]; hint?: 
   );
 }
 
-
 // The label holds only its words; hints and errors sit beside the control and are tied to it by
 // aria-describedby, so a screen reader (and a test) finds the field by its label alone.
-export function TextField({ label, name, errors, hint, id, ...input }: FieldProps & InputHTMLAttributes<HTMLInputElement>) {
+export function TextField({
+  label,
+  name,
+  errors,
+  hint,
+  id,
+  ...input
+}: FieldProps & InputHTMLAttributes<HTMLInputElement>) {
   const fieldId = id ?? `field-${name}`;
   const errorId = `${fieldId}-error`;
   return (
@@ -34,7 +40,14 @@ export function TextField({ label, name, errors, hint, id, ...input }: FieldProp
       <label htmlFor={fieldId} className="font-medium">
         {label}
       </label>
-      <input id={fieldId} name={name} className={inputClass} aria-invalid={errors?.length ? true : undefined} aria-describedby={errorId} {...input} />
+      <input
+        id={fieldId}
+        name={name}
+        className={inputClass}
+        aria-invalid={errors?.length ? true : undefined}
+        aria-describedby={errorId}
+        {...input}
+      />
       <Messages id={errorId} errors={errors} hint={hint} />
     </div>
   );
@@ -57,7 +70,15 @@ export function SelectField({
         {label}
       </label>
       {/* Keyed by its default so a failed submit, which resets the form, shows the value typed. */}
-      <select key={String(select.defaultValue ?? "")} id={fieldId} name={name} className={inputClass} aria-invalid={errors?.length ? true : undefined} aria-describedby={errorId} {...select}>
+      <select
+        key={String(select.defaultValue ?? "")}
+        id={fieldId}
+        name={name}
+        className={inputClass}
+        aria-invalid={errors?.length ? true : undefined}
+        aria-describedby={errorId}
+        {...select}
+      >
         {options.map((o) => (
           <option key={o.value} value={o.value}>
             {o.label}

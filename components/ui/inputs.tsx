@@ -51,7 +51,12 @@ export function NumberInput(props: {
           setText(e.target.value);
           if (props.optional && e.target.value.trim() === "") return props.onChange(undefined);
           const v = Number(e.target.value);
-          const ok = e.target.value.trim() !== "" && Number.isFinite(v) && (!props.integer || Number.isInteger(v)) && (props.min === undefined || v >= props.min) && (props.max === undefined || v <= props.max);
+          const ok =
+            e.target.value.trim() !== "" &&
+            Number.isFinite(v) &&
+            (!props.integer || Number.isInteger(v)) &&
+            (props.min === undefined || v >= props.min) &&
+            (props.max === undefined || v <= props.max);
           if (ok) props.onChange(v);
         }}
         onBlur={() => setText(null)}
@@ -77,7 +82,12 @@ export function TextInput(props: {
   const autoId = useId();
   const id = props.id ?? autoId;
   return (
-    <Row id={id} label={props.unit ? `${props.label} (${props.unit})` : props.label} error={props.error} hint={props.hint}>
+    <Row
+      id={id}
+      label={props.unit ? `${props.label} (${props.unit})` : props.label}
+      error={props.error}
+      hint={props.hint}
+    >
       <input
         id={id}
         type="text"
@@ -131,7 +141,15 @@ export function SelectInput<T extends string>(props: {
 }
 
 /** A formula, checked as it is typed by the engine's own formula reader. */
-export function FormulaInput(props: { label: string; value: string; variable: string; disabled?: boolean; check: (source: string) => string | undefined; onChange: (value: string) => void; hint?: ReactNode }) {
+export function FormulaInput(props: {
+  label: string;
+  value: string;
+  variable: string;
+  disabled?: boolean;
+  check: (source: string) => string | undefined;
+  onChange: (value: string) => void;
+  hint?: ReactNode;
+}) {
   const id = useId();
   const error = props.check(props.value);
   return (
@@ -152,12 +170,24 @@ export function FormulaInput(props: { label: string; value: string; variable: st
 }
 
 /** A yes-or-no choice, its label to the right of the box. */
-export function CheckInput(props: { label: string; id?: string; checked: boolean; disabled?: boolean; onChange: (checked: boolean) => void }) {
+export function CheckInput(props: {
+  label: string;
+  id?: string;
+  checked: boolean;
+  disabled?: boolean;
+  onChange: (checked: boolean) => void;
+}) {
   const autoId = useId();
   const id = props.id ?? autoId;
   return (
     <div className="flex items-center gap-2 text-sm">
-      <input id={id} type="checkbox" checked={props.checked} disabled={props.disabled} onChange={(e) => props.onChange(e.target.checked)} />
+      <input
+        id={id}
+        type="checkbox"
+        checked={props.checked}
+        disabled={props.disabled}
+        onChange={(e) => props.onChange(e.target.checked)}
+      />
       <label htmlFor={id}>{props.label}</label>
     </div>
   );

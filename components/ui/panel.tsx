@@ -13,6 +13,12 @@ export function Panel({ title, children, actions }: { title: string; children: R
 }
 
 export function Badge({ children, tone = "ink" }: { children: ReactNode; tone?: "ink" | "caution" | "pass" }) {
-  const styles = { ink: "border-ink-line text-ink-soft", caution: "border-caution text-caution-ink", pass: "border-pass/50 text-pass" }[tone];
-  return <span className={`inline-block rounded-plate border px-1.5 py-0.5 font-mono text-xs ${styles}`}>{children}</span>;
+  const styles = {
+    ink: "border-ink-line text-ink-soft",
+    caution: "border-caution text-caution-ink",
+    pass: "border-pass/50 text-pass",
+  }[tone];
+  return (
+    <span className={`inline-block rounded-plate border px-1.5 py-0.5 font-mono text-xs ${styles}`}>{children}</span>
+  );
 }

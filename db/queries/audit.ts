@@ -7,7 +7,14 @@ type Executor = Pick<typeof db, "insert">;
 /** Records who did what to which record. Pass the transaction so the entry lands with the change. */
 export async function audit(
   tx: Executor,
-  entry: { actorId: number | null; action: string; entity: string; entityId: number | string; projectId?: number | null; detail?: Record<string, unknown> },
+  entry: {
+    actorId: number | null;
+    action: string;
+    entity: string;
+    entityId: number | string;
+    projectId?: number | null;
+    detail?: Record<string, unknown>;
+  },
 ): Promise<void> {
   await tx.insert(auditLog).values({
     actorId: entry.actorId,

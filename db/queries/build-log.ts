@@ -40,7 +40,12 @@ export interface NewLogEntry {
 }
 
 /** An entry the app writes itself, inside the transaction of the change it records. */
-export async function writeLogEntry(tx: Executor, actorId: number | null, projectId: number, e: NewLogEntry): Promise<number> {
+export async function writeLogEntry(
+  tx: Executor,
+  actorId: number | null,
+  projectId: number,
+  e: NewLogEntry,
+): Promise<number> {
   const [res] = await tx.insert(buildLogEntries).values({
     projectId,
     kind: e.kind,
@@ -61,7 +66,12 @@ export interface StoredPhoto {
 }
 
 /** A person's entry and the rows of its stored photos, in one transaction. */
-export async function insertLogEntry(actor: CurrentUser, projectId: number, e: NewLogEntry, stored: StoredPhoto[]): Promise<{ id: number; photos: { id: number }[] }> {
+export async function insertLogEntry(
+  actor: CurrentUser,
+  projectId: number,
+  e: NewLogEntry,
+  stored: StoredPhoto[],
+): Promise<{ id: number; photos: { id: number }[] }> {
   return db.transaction(async (tx) => {
     const id = await writeLogEntry(tx, actor.id, projectId, e);
     const photoIds: { id: number }[] = [];
@@ -81,13 +91,23 @@ export async function insertLogEntry(actor: CurrentUser, projectId: number, e: N
       });
       photoIds.push({ id: res.insertId });
     }
-    await audit(tx, { actorId: actor.id, action: "log", entity: "build_log_entries", entityId: id, projectId, detail: { kind: e.kind, parts: e.parts ?? [], photos: photoIds.map((p) => p.id) } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "log",
+      entity: "build_log_entries",
+      entityId: id,
+      projectId,
+      detail: { kind: e.kind, parts: e.parts ?? [], photos: photoIds.map((p) => p.id) },
+    });
     return { id, photos: photoIds };
   });
 }
 
 /** The project's log, newest first, with each entry's photos; `before` pages back by entry id. */
-export async function listLog(projectId: number, opts: { limit?: number; before?: number; cutPlanId?: number } = {}): Promise<LogEntryRow[]> {
+export async function listLog(
+  projectId: number,
+  opts: { limit?: number; before?: number; cutPlanId?: number } = {},
+): Promise<LogEntryRow[]> {
   const conditions = [eq(buildLogEntries.projectId, projectId)];
   if (opts.before) conditions.push(lt(buildLogEntries.id, opts.before));
   if (opts.cutPlanId) conditions.push(eq(buildLogEntries.cutPlanId, opts.cutPlanId));
@@ -113,7 +133,14 @@ export async function listLog(projectId: number, opts: { limit?: number; before?
   const ids = rows.map((r) => r.id);
   const photos = ids.length
     ? await db
-        .select({ id: buildLogPhotos.id, entryId: buildLogPhotos.entryId, width: buildLogPhotos.width, height: buildLogPhotos.height, contentType: buildLogPhotos.contentType, name: buildLogPhotos.originalName })
+        .select({
+          id: buildLogPhotos.id,
+          entryId: buildLogPhotos.entryId,
+          width: buildLogPhotos.width,
+          height: buildLogPhotos.height,
+          contentType: buildLogPhotos.contentType,
+          name: buildLogPhotos.originalName,
+        })
         .from(buildLogPhotos)
         .where(inArray(buildLogPhotos.entryId, ids))
         .orderBy(buildLogPhotos.id)
@@ -128,7 +155,9 @@ export async function listLog(projectId: number, opts: { limit?: number; before?
     author: r.author,
     authorRole: r.memberRole ?? (r.userRole === "admin" ? "admin" : null),
     createdAt: r.createdAt.toISOString(),
-    photos: photos.filter((p) => p.entryId === r.id).map((p) => ({ id: p.id, width: p.width, height: p.height, contentType: p.contentType, name: p.name })),
+    photos: photos
+      .filter((p) => p.entryId === r.id)
+      .map((p) => ({ id: p.id, width: p.width, height: p.height, contentType: p.contentType, name: p.name })),
   }));
 }
 
@@ -158,7 +187,12 @@ export async function installState(projectId: number, cutPlanId: number): Promis
 }
 
 /** An installation tick (or untick) from the assembly sheet, as a log entry naming the part. */
-export async function insertTick(actor: CurrentUser, projectId: number, cutPlanId: number, tick: { item: string; done: boolean; what: string }): Promise<number> {
+export async function insertTick(
+  actor: CurrentUser,
+  projectId: number,
+  cutPlanId: number,
+  tick: { item: string; done: boolean; what: string },
+): Promise<number> {
   return db.transaction(async (tx) => {
     const id = await writeLogEntry(tx, actor.id, projectId, {
       kind: "installed",
@@ -167,7 +201,14 @@ export async function insertTick(actor: CurrentUser, projectId: number, cutPlanI
       cutPlanId,
       detail: { item: tick.item, done: tick.done },
     });
-    await audit(tx, { actorId: actor.id, action: tick.done ? "tick" : "untick", entity: "build_log_entries", entityId: id, projectId, detail: { cutPlanId, item: tick.item } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: tick.done ? "tick" : "untick",
+      entity: "build_log_entries",
+      entityId: id,
+      projectId,
+      detail: { cutPlanId, item: tick.item },
+    });
     return id;
   });
 }

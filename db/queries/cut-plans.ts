@@ -34,16 +34,30 @@ const columns = {
   createdAt: cutPlans.createdAt,
 };
 
-const toRow = (r: Omit<CutPlanRow, "createdAt"> & { createdAt: Date }): CutPlanRow => ({ ...r, createdAt: r.createdAt.toISOString() });
+const toRow = (r: Omit<CutPlanRow, "createdAt"> & { createdAt: Date }): CutPlanRow => ({
+  ...r,
+  createdAt: r.createdAt.toISOString(),
+});
 
 /** The revision's current plan: its newest. */
 export async function latestCutPlan(revisionId: number): Promise<CutPlanRow | null> {
-  const [row] = await db.select(columns).from(cutPlans).leftJoin(users, eq(users.id, cutPlans.createdById)).where(eq(cutPlans.revisionId, revisionId)).orderBy(desc(cutPlans.id)).limit(1);
+  const [row] = await db
+    .select(columns)
+    .from(cutPlans)
+    .leftJoin(users, eq(users.id, cutPlans.createdById))
+    .where(eq(cutPlans.revisionId, revisionId))
+    .orderBy(desc(cutPlans.id))
+    .limit(1);
   return row ? toRow(row) : null;
 }
 
 export async function findCutPlan(id: number): Promise<CutPlanRow | null> {
-  const [row] = await db.select(columns).from(cutPlans).leftJoin(users, eq(users.id, cutPlans.createdById)).where(eq(cutPlans.id, id)).limit(1);
+  const [row] = await db
+    .select(columns)
+    .from(cutPlans)
+    .leftJoin(users, eq(users.id, cutPlans.createdById))
+    .where(eq(cutPlans.id, id))
+    .limit(1);
   return row ? toRow(row) : null;
 }
 
@@ -59,32 +73,70 @@ export async function insertCutPlan(
 ): Promise<{ id: number; number: number }> {
   return db.transaction(async (tx) => {
     await tx.execute(sql`select id from ${revisions} where ${revisions.id} = ${target.revisionId} for update`);
-    const [{ last }] = await tx.select({ last: max(cutPlans.number) }).from(cutPlans).where(eq(cutPlans.revisionId, target.revisionId));
+    const [{ last }] = await tx
+      .select({ last: max(cutPlans.number) })
+      .from(cutPlans)
+      .where(eq(cutPlans.revisionId, target.revisionId));
     const number = (last ?? 0) + 1;
-    const [res] = await tx.insert(cutPlans).values({ revisionId: target.revisionId, number, ...plan, createdById: actor.id });
-    const sum = plan.summary as { copies?: number; sheets?: number; sheet?: string; purpose?: string; unapprovedReason?: string | null };
+    const [res] = await tx
+      .insert(cutPlans)
+      .values({ revisionId: target.revisionId, number, ...plan, createdById: actor.id });
+    const sum = plan.summary as {
+      copies?: number;
+      sheets?: number;
+      sheet?: string;
+      purpose?: string;
+      unapprovedReason?: string | null;
+    };
     await writeLogEntry(tx, actor.id, target.projectId, {
       kind: "cut-plan",
       text: `${cutPlanName(number, target.revisionNumber)} saved for ${sum.purpose ?? "review"}: ${sum.copies ?? "?"} parts on ${sum.sheets ?? "?"} × ${sum.sheet ?? "sheet"}.${sum.unapprovedReason ? ` Without the client's approval: ${sum.unapprovedReason}` : ""}`,
       cutPlanId: res.insertId,
       detail: { revisionId: target.revisionId, number },
     });
-    await audit(tx, { actorId: actor.id, action: "create", entity: "cut_plans", entityId: res.insertId, projectId: target.projectId, detail: { revisionId: target.revisionId, number, summary: plan.summary } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "create",
+      entity: "cut_plans",
+      entityId: res.insertId,
+      projectId: target.projectId,
+      detail: { revisionId: target.revisionId, number, summary: plan.summary },
+    });
     return { id: res.insertId, number };
   });
 }
 
 /** The current cut plan (the newest) of every revision in a project that has one, newest first. */
-export async function listProjectCutPlans(
-  projectId: number,
-): Promise<{ id: number; number: number; revisionId: number; revisionNumber: number; designId: number; designName: string; createdAt: string; summary: Record<string, unknown> }[]> {
+export async function listProjectCutPlans(projectId: number): Promise<
+  {
+    id: number;
+    number: number;
+    revisionId: number;
+    revisionNumber: number;
+    designId: number;
+    designName: string;
+    createdAt: string;
+    summary: Record<string, unknown>;
+  }[]
+> {
   const rows = await db
-    .select({ id: cutPlans.id, number: cutPlans.number, revisionId: cutPlans.revisionId, revisionNumber: revisions.number, designId: designs.id, designName: designs.name, createdAt: cutPlans.createdAt, summary: cutPlans.summary })
+    .select({
+      id: cutPlans.id,
+      number: cutPlans.number,
+      revisionId: cutPlans.revisionId,
+      revisionNumber: revisions.number,
+      designId: designs.id,
+      designName: designs.name,
+      createdAt: cutPlans.createdAt,
+      summary: cutPlans.summary,
+    })
     .from(cutPlans)
     .innerJoin(revisions, eq(revisions.id, cutPlans.revisionId))
     .innerJoin(designs, eq(designs.id, revisions.designId))
     .where(eq(designs.projectId, projectId))
     .orderBy(desc(cutPlans.id));
   const seen = new Set<number>();
-  return rows.filter((r) => !seen.has(r.revisionId) && seen.add(r.revisionId)).map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
+  return rows
+    .filter((r) => !seen.has(r.revisionId) && seen.add(r.revisionId))
+    .map((r) => ({ ...r, createdAt: r.createdAt.toISOString() }));
 }

@@ -84,21 +84,47 @@ export async function listRevisions(designId: number): Promise<RevisionRow[]> {
     .leftJoin(users, eq(users.id, revisions.createdById))
     .where(eq(revisions.designId, designId))
     .orderBy(desc(revisions.number));
-  return rows.map((r) => ({ ...r, createdAt: r.createdAt.toISOString(), summary: r.summary as unknown as RevisionSummary }));
+  return rows.map((r) => ({
+    ...r,
+    createdAt: r.createdAt.toISOString(),
+    summary: r.summary as unknown as RevisionSummary,
+  }));
 }
 
-export async function insertDesign(actor: CurrentUser, projectId: number, input: { name: string; spec: DesignSpec }): Promise<number> {
+export async function insertDesign(
+  actor: CurrentUser,
+  projectId: number,
+  input: { name: string; spec: DesignSpec },
+): Promise<number> {
   const { name, spec } = input;
   return db.transaction(async (tx) => {
-    const [res] = await tx.insert(designs).values({ projectId, name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, createdById: actor.id });
+    const [res] = await tx.insert(designs).values({
+      projectId,
+      name,
+      mode: spec.mode,
+      draft: spec as unknown as Record<string, unknown>,
+      createdById: actor.id,
+    });
     await tx.update(projects).set({ updatedAt: new Date() }).where(eq(projects.id, projectId));
-    await audit(tx, { actorId: actor.id, action: "create", entity: "designs", entityId: res.insertId, projectId, detail: { name, mode: spec.mode } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "create",
+      entity: "designs",
+      entityId: res.insertId,
+      projectId,
+      detail: { name, mode: spec.mode },
+    });
     return res.insertId;
   });
 }
 
 /** Changes a design's name, working draft (already checked by the engine) or load settings. */
-export async function updateDesignRow(actor: CurrentUser, designId: number, projectId: number, input: { name?: string; draft?: DesignSpec; loads?: LoadsSettings }): Promise<void> {
+export async function updateDesignRow(
+  actor: CurrentUser,
+  designId: number,
+  projectId: number,
+  input: { name?: string; draft?: DesignSpec; loads?: LoadsSettings },
+): Promise<void> {
   const changes: Partial<typeof designs.$inferInsert> = {};
   if (input.name !== undefined) changes.name = input.name;
   if (input.loads !== undefined) changes.loads = input.loads as unknown as Record<string, unknown>;
@@ -108,7 +134,14 @@ export async function updateDesignRow(actor: CurrentUser, designId: number, proj
   }
   await db.transaction(async (tx) => {
     await tx.update(designs).set(changes).where(eq(designs.id, designId));
-    await audit(tx, { actorId: actor.id, action: "update", entity: "designs", entityId: designId, projectId, detail: { name: input.name, draft: input.draft !== undefined, loads: input.loads !== undefined } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "update",
+      entity: "designs",
+      entityId: designId,
+      projectId,
+      detail: { name: input.name, draft: input.draft !== undefined, loads: input.loads !== undefined },
+    });
   });
 }
 
@@ -126,12 +159,23 @@ interface NewRevisionRow {
  * Stores a solved spec as the design's next revision. The number is taken under a row lock on the
  * design, so two saves at once get consecutive numbers.
  */
-export async function insertRevision(actor: CurrentUser, designId: number, projectId: number, input: NewRevisionRow): Promise<{ id: number; number: number; specHash: string }> {
+export async function insertRevision(
+  actor: CurrentUser,
+  designId: number,
+  projectId: number,
+  input: NewRevisionRow,
+): Promise<{ id: number; number: number; specHash: string }> {
   return db.transaction(async (tx) => {
     await tx.execute(sql`select id from ${designs} where ${designs.id} = ${designId} for update`);
     // The load settings go with the revision as they are now, so its cautions never change after it is saved.
-    const loads = input.loads ?? (await tx.select({ loads: designs.loads }).from(designs).where(eq(designs.id, designId)))[0]?.loads ?? null;
-    const [{ last }] = await tx.select({ last: max(revisions.number) }).from(revisions).where(eq(revisions.designId, designId));
+    const loads =
+      input.loads ??
+      (await tx.select({ loads: designs.loads }).from(designs).where(eq(designs.id, designId)))[0]?.loads ??
+      null;
+    const [{ last }] = await tx
+      .select({ last: max(revisions.number) })
+      .from(revisions)
+      .where(eq(revisions.designId, designId));
     const number = (last ?? 0) + 1;
     const [res] = await tx.insert(revisions).values({
       designId,
@@ -146,20 +190,42 @@ export async function insertRevision(actor: CurrentUser, designId: number, proje
     });
     await tx.update(designs).set({ updatedAt: new Date() }).where(eq(designs.id, designId));
     await tx.update(projects).set({ updatedAt: new Date() }).where(eq(projects.id, projectId));
-    await audit(tx, { actorId: actor.id, action: "create", entity: "revisions", entityId: res.insertId, projectId, detail: { designId, number, specHash: input.specHash } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "create",
+      entity: "revisions",
+      entityId: res.insertId,
+      projectId,
+      detail: { designId, number, specHash: input.specHash },
+    });
     return { id: res.insertId, number, specHash: input.specHash };
   });
 }
 
 export async function revisionByNumber(designId: number, number: number) {
-  const [row] = await db.select().from(revisions).where(and(eq(revisions.designId, designId), eq(revisions.number, number))).limit(1);
+  const [row] = await db
+    .select()
+    .from(revisions)
+    .where(and(eq(revisions.designId, designId), eq(revisions.number, number)))
+    .limit(1);
   return row ?? null;
 }
 
 /** Every saved revision in a project, newest design change first, newest revision first within a design. */
-export async function listProjectRevisions(projectId: number): Promise<{ id: number; number: number; designId: number; designName: string; mode: DesignMode; createdAt: string }[]> {
+export async function listProjectRevisions(
+  projectId: number,
+): Promise<
+  { id: number; number: number; designId: number; designName: string; mode: DesignMode; createdAt: string }[]
+> {
   const rows = await db
-    .select({ id: revisions.id, number: revisions.number, designId: designs.id, designName: designs.name, mode: designs.mode, createdAt: revisions.createdAt })
+    .select({
+      id: revisions.id,
+      number: revisions.number,
+      designId: designs.id,
+      designName: designs.name,
+      mode: designs.mode,
+      createdAt: revisions.createdAt,
+    })
     .from(revisions)
     .innerJoin(designs, eq(designs.id, revisions.designId))
     .where(eq(designs.projectId, projectId))

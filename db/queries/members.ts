@@ -17,7 +17,14 @@ export interface MemberRow {
 
 export async function listMembers(projectId: number): Promise<MemberRow[]> {
   return db
-    .select({ id: projectMembers.id, userId: users.id, name: users.name, email: users.email, role: projectMembers.role, active: users.active })
+    .select({
+      id: projectMembers.id,
+      userId: users.id,
+      name: users.name,
+      email: users.email,
+      role: projectMembers.role,
+      active: users.active,
+    })
     .from(projectMembers)
     .innerJoin(users, eq(users.id, projectMembers.userId))
     .where(eq(projectMembers.projectId, projectId))
@@ -36,18 +43,30 @@ async function memberOfProject(projectId: number, memberId: number) {
 }
 
 function checkRoleFits(userRole: string, memberRole: MemberRole) {
-  if (userRole === "admin") throw new Refusal("bad_request", "Admins see every project already; they are not added as members.", { userId: ["Admins are not added as members."] });
-  if (userRole !== memberRole) {
-    throw new Refusal("bad_request", `This person's role is ${userRole}; they can join a project only as ${userRole}.`, {
-      role: [`Must match the person's role (${userRole}).`],
+  if (userRole === "admin")
+    throw new Refusal("bad_request", "Admins see every project already; they are not added as members.", {
+      userId: ["Admins are not added as members."],
     });
+  if (userRole !== memberRole) {
+    throw new Refusal(
+      "bad_request",
+      `This person's role is ${userRole}; they can join a project only as ${userRole}.`,
+      {
+        role: [`Must match the person's role (${userRole}).`],
+      },
+    );
   }
 }
 
-export async function addMember(actor: CurrentUser, projectId: number, input: { userId: number; role: MemberRole }): Promise<number> {
+export async function addMember(
+  actor: CurrentUser,
+  projectId: number,
+  input: { userId: number; role: MemberRole },
+): Promise<number> {
   const [user] = await db.select().from(users).where(eq(users.id, input.userId)).limit(1);
   if (!user) throw new Refusal("bad_request", "No such person.", { userId: ["No such person."] });
-  if (!user.active) throw new Refusal("bad_request", "That account is deactivated.", { userId: ["That account is deactivated."] });
+  if (!user.active)
+    throw new Refusal("bad_request", "That account is deactivated.", { userId: ["That account is deactivated."] });
   checkRoleFits(user.role, input.role);
   return db.transaction(async (tx) => {
     const [existing] = await tx
@@ -55,21 +74,45 @@ export async function addMember(actor: CurrentUser, projectId: number, input: { 
       .from(projectMembers)
       .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.userId, input.userId)))
       .limit(1);
-    if (existing) throw new Refusal("conflict", `${user.name} is already a member of this project.`, { userId: ["Already a member."] });
-    const [res] = await tx.insert(projectMembers).values({ projectId, userId: input.userId, role: input.role, addedById: actor.id });
+    if (existing)
+      throw new Refusal("conflict", `${user.name} is already a member of this project.`, {
+        userId: ["Already a member."],
+      });
+    const [res] = await tx
+      .insert(projectMembers)
+      .values({ projectId, userId: input.userId, role: input.role, addedById: actor.id });
     await tx.update(projects).set({ updatedAt: new Date() }).where(eq(projects.id, projectId));
-    await audit(tx, { actorId: actor.id, action: "add", entity: "project_members", entityId: res.insertId, projectId, detail: { userId: input.userId, role: input.role } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "add",
+      entity: "project_members",
+      entityId: res.insertId,
+      projectId,
+      detail: { userId: input.userId, role: input.role },
+    });
     return res.insertId;
   });
 }
 
-export async function updateMemberRole(actor: CurrentUser, projectId: number, memberId: number, role: MemberRole): Promise<void> {
+export async function updateMemberRole(
+  actor: CurrentUser,
+  projectId: number,
+  memberId: number,
+  role: MemberRole,
+): Promise<void> {
   const member = await memberOfProject(projectId, memberId);
   const [user] = await db.select({ role: users.role }).from(users).where(eq(users.id, member.userId)).limit(1);
   checkRoleFits(user?.role ?? "", role);
   await db.transaction(async (tx) => {
     await tx.update(projectMembers).set({ role }).where(eq(projectMembers.id, memberId));
-    await audit(tx, { actorId: actor.id, action: "update", entity: "project_members", entityId: memberId, projectId, detail: { role } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "update",
+      entity: "project_members",
+      entityId: memberId,
+      projectId,
+      detail: { role },
+    });
   });
 }
 
@@ -80,6 +123,13 @@ export async function removeMember(actor: CurrentUser, projectId: number, member
   }
   await db.transaction(async (tx) => {
     await tx.delete(projectMembers).where(eq(projectMembers.id, memberId));
-    await audit(tx, { actorId: actor.id, action: "remove", entity: "project_members", entityId: memberId, projectId, detail: { userId: member.userId } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "remove",
+      entity: "project_members",
+      entityId: memberId,
+      projectId,
+      detail: { userId: member.userId },
+    });
   });
 }

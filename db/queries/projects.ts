@@ -34,13 +34,22 @@ function summaryQuery() {
     .leftJoin(clientOrg, eq(clientOrg.id, projects.clientOrganisationId));
 }
 
-const toSummary = (row: Awaited<ReturnType<typeof summaryQuery>>[number]): ProjectSummary => ({ ...row, updatedAt: row.updatedAt.toISOString() });
+const toSummary = (row: Awaited<ReturnType<typeof summaryQuery>>[number]): ProjectSummary => ({
+  ...row,
+  updatedAt: row.updatedAt.toISOString(),
+});
 
 /** Projects the user belongs to; every project for an admin. Newest change first. */
 export async function listVisibleProjects(user: CurrentUser): Promise<ProjectSummary[]> {
-  if (user.role === "admin") return (await summaryQuery().orderBy(desc(projects.updatedAt), desc(projects.id))).map(toSummary);
-  const memberOf = db.select({ id: projectMembers.projectId }).from(projectMembers).where(eq(projectMembers.userId, user.id));
-  return (await summaryQuery().where(inArray(projects.id, memberOf)).orderBy(desc(projects.updatedAt), desc(projects.id))).map(toSummary);
+  if (user.role === "admin")
+    return (await summaryQuery().orderBy(desc(projects.updatedAt), desc(projects.id))).map(toSummary);
+  const memberOf = db
+    .select({ id: projectMembers.projectId })
+    .from(projectMembers)
+    .where(eq(projectMembers.userId, user.id));
+  return (
+    await summaryQuery().where(inArray(projects.id, memberOf)).orderBy(desc(projects.updatedAt), desc(projects.id))
+  ).map(toSummary);
 }
 
 export async function getProjectSummary(projectId: number): Promise<ProjectSummary | null> {
@@ -49,13 +58,26 @@ export async function getProjectSummary(projectId: number): Promise<ProjectSumma
 }
 
 /** A new project; a fabricator who creates it becomes its fabricator member. */
-export async function createProject(actor: CurrentUser, input: { name: string; site: string; clientOrganisation: string }): Promise<number> {
+export async function createProject(
+  actor: CurrentUser,
+  input: { name: string; site: string; clientOrganisation: string },
+): Promise<number> {
   return db.transaction(async (tx) => {
     const orgId = await clientOrganisationId(tx, input.clientOrganisation);
-    const [res] = await tx.insert(projects).values({ name: input.name, site: input.site, clientOrganisationId: orgId, createdById: actor.id });
+    const [res] = await tx
+      .insert(projects)
+      .values({ name: input.name, site: input.site, clientOrganisationId: orgId, createdById: actor.id });
     const projectId = res.insertId;
-    if (actor.role === "fabricator") await tx.insert(projectMembers).values({ projectId, userId: actor.id, role: "fabricator", addedById: actor.id });
-    await audit(tx, { actorId: actor.id, action: "create", entity: "projects", entityId: projectId, projectId, detail: { name: input.name } });
+    if (actor.role === "fabricator")
+      await tx.insert(projectMembers).values({ projectId, userId: actor.id, role: "fabricator", addedById: actor.id });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "create",
+      entity: "projects",
+      entityId: projectId,
+      projectId,
+      detail: { name: input.name },
+    });
     return projectId;
   });
 }
@@ -68,13 +90,29 @@ export async function updateProject(
   await db.transaction(async (tx) => {
     const { clientOrganisation, ...rest } = input;
     const changes: Partial<typeof projects.$inferInsert> = { ...rest };
-    if (clientOrganisation !== undefined) changes.clientOrganisationId = await clientOrganisationId(tx, clientOrganisation);
-    const [before] = await tx.select({ status: projects.status }).from(projects).where(eq(projects.id, projectId)).limit(1);
+    if (clientOrganisation !== undefined)
+      changes.clientOrganisationId = await clientOrganisationId(tx, clientOrganisation);
+    const [before] = await tx
+      .select({ status: projects.status })
+      .from(projects)
+      .where(eq(projects.id, projectId))
+      .limit(1);
     await tx.update(projects).set(changes).where(eq(projects.id, projectId));
-    await audit(tx, { actorId: actor.id, action: "update", entity: "projects", entityId: projectId, projectId, detail: input });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "update",
+      entity: "projects",
+      entityId: projectId,
+      projectId,
+      detail: input,
+    });
     // A change of stage goes into the build log too.
     if (input.status && before && input.status !== before.status)
-      await writeLogEntry(tx, actor.id, projectId, { kind: "status", text: `Status changed from ${STATUS_LABEL[before.status]} to ${STATUS_LABEL[input.status]}.`, detail: { from: before.status, to: input.status } });
+      await writeLogEntry(tx, actor.id, projectId, {
+        kind: "status",
+        text: `Status changed from ${STATUS_LABEL[before.status]} to ${STATUS_LABEL[input.status]}.`,
+        detail: { from: before.status, to: input.status },
+      });
   });
 }
 

@@ -112,7 +112,10 @@ function reviewQuery() {
     .leftJoin(requester, eq(requester.id, reviews.requestedById));
 }
 
-const toReview = (r: Omit<ReviewRow, "createdAt"> & { createdAt: Date }): ReviewRow => ({ ...r, createdAt: iso(r.createdAt) });
+const toReview = (r: Omit<ReviewRow, "createdAt"> & { createdAt: Date }): ReviewRow => ({
+  ...r,
+  createdAt: iso(r.createdAt),
+});
 
 export async function findReview(id: number): Promise<ReviewRow | null> {
   const [row] = await reviewQuery().where(eq(reviews.id, id)).limit(1);
@@ -120,7 +123,9 @@ export async function findReview(id: number): Promise<ReviewRow | null> {
 }
 
 /** Every review of a project with its decision and deposit, newest first (the project page's list). */
-export async function listProjectReviews(projectId: number): Promise<(ReviewRow & { decision: SignOffRow | null; deposit: DepositRow | null })[]> {
+export async function listProjectReviews(
+  projectId: number,
+): Promise<(ReviewRow & { decision: SignOffRow | null; deposit: DepositRow | null })[]> {
   const rows = (await reviewQuery().where(eq(reviews.projectId, projectId)).orderBy(desc(reviews.id))).map(toReview);
   return attachOutcomes(rows);
 }
@@ -133,7 +138,10 @@ export async function listRevisionReviews(revisionId: number) {
 async function attachOutcomes(rows: ReviewRow[]) {
   if (rows.length === 0) return [];
   const ids = rows.map((r) => r.id);
-  const [decided, owed] = await Promise.all([signOffQuery().where(inArray(signOffs.reviewId, ids)), db.select().from(deposits).where(inArray(deposits.reviewId, ids))]);
+  const [decided, owed] = await Promise.all([
+    signOffQuery().where(inArray(signOffs.reviewId, ids)),
+    db.select().from(deposits).where(inArray(deposits.reviewId, ids)),
+  ]);
   const byReview = new Map(decided.map((s) => [s.reviewId, toSignOff(s)]));
   const depositBy = new Map(owed.map((d) => [d.reviewId, toDeposit(d)]));
   return rows.map((r) => ({ ...r, decision: byReview.get(r.id) ?? null, deposit: depositBy.get(r.id) ?? null }));
@@ -162,7 +170,10 @@ function signOffQuery() {
     .leftJoin(organisations, eq(organisations.id, users.organisationId));
 }
 
-const toSignOff = (s: Omit<SignOffRow, "signedAt"> & { signedAt: Date }): SignOffRow => ({ ...s, signedAt: iso(s.signedAt) });
+const toSignOff = (s: Omit<SignOffRow, "signedAt"> & { signedAt: Date }): SignOffRow => ({
+  ...s,
+  signedAt: iso(s.signedAt),
+});
 const toDeposit = (d: typeof deposits.$inferSelect): DepositRow => ({
   id: d.id,
   reviewId: d.reviewId,
@@ -181,23 +192,46 @@ export async function reviewDetail(id: number): Promise<ReviewDetail | null> {
     signOffQuery().where(eq(signOffs.reviewId, id)).limit(1),
     db.select().from(deposits).where(eq(deposits.reviewId, id)).limit(1),
   ]);
-  return { ...review, comments, decision: decision ? toSignOff(decision) : null, deposit: deposit ? toDeposit(deposit) : null };
+  return {
+    ...review,
+    comments,
+    decision: decision ? toSignOff(decision) : null,
+    deposit: deposit ? toDeposit(deposit) : null,
+  };
 }
 
 async function listComments(reviewId: number, projectId: number): Promise<CommentRow[]> {
   const rows = await db
-    .select({ id: reviewComments.id, text: reviewComments.text, at: reviewComments.at, author: users.name, userRole: users.role, memberRole: projectMembers.role, createdAt: reviewComments.createdAt })
+    .select({
+      id: reviewComments.id,
+      text: reviewComments.text,
+      at: reviewComments.at,
+      author: users.name,
+      userRole: users.role,
+      memberRole: projectMembers.role,
+      createdAt: reviewComments.createdAt,
+    })
     .from(reviewComments)
     .innerJoin(users, eq(users.id, reviewComments.authorId))
     .leftJoin(projectMembers, and(eq(projectMembers.userId, users.id), eq(projectMembers.projectId, projectId)))
     .where(eq(reviewComments.reviewId, reviewId))
     .orderBy(asc(reviewComments.createdAt), asc(reviewComments.id));
-  return rows.map((r) => ({ id: r.id, text: r.text, at: r.at, author: r.author, authorRole: r.memberRole ?? (r.userRole === "admin" ? "admin" : null), createdAt: iso(r.createdAt) }));
+  return rows.map((r) => ({
+    id: r.id,
+    text: r.text,
+    at: r.at,
+    author: r.author,
+    authorRole: r.memberRole ?? (r.userRole === "admin" ? "admin" : null),
+    createdAt: iso(r.createdAt),
+  }));
 }
 
 /** The revision's approval, if its client approved it (a revision is approved at most once: one open review at a time). */
 export async function approvalOf(revisionId: number): Promise<SignOffRow | null> {
-  const [row] = await signOffQuery().where(and(eq(signOffs.revisionId, revisionId), eq(signOffs.decision, "approve"))).orderBy(desc(signOffs.id)).limit(1);
+  const [row] = await signOffQuery()
+    .where(and(eq(signOffs.revisionId, revisionId), eq(signOffs.decision, "approve")))
+    .orderBy(desc(signOffs.id))
+    .limit(1);
   return row ? toSignOff(row) : null;
 }
 
@@ -222,14 +256,21 @@ export async function clientMembers(projectId: number): Promise<{ id: number; na
 }
 
 /** Active fabricator members of a project, and the person who asked for the review: who hears of the decision. */
-export async function shopContacts(projectId: number, alsoUserId: number | null): Promise<{ id: number; name: string; email: string }[]> {
+export async function shopContacts(
+  projectId: number,
+  alsoUserId: number | null,
+): Promise<{ id: number; name: string; email: string }[]> {
   const members = await db
     .select({ id: users.id, name: users.name, email: users.email })
     .from(projectMembers)
     .innerJoin(users, eq(users.id, projectMembers.userId))
     .where(and(eq(projectMembers.projectId, projectId), eq(projectMembers.role, "fabricator"), eq(users.active, true)));
   if (alsoUserId !== null && !members.some((m) => m.id === alsoUserId)) {
-    const [extra] = await db.select({ id: users.id, name: users.name, email: users.email }).from(users).where(and(eq(users.id, alsoUserId), eq(users.active, true))).limit(1);
+    const [extra] = await db
+      .select({ id: users.id, name: users.name, email: users.email })
+      .from(users)
+      .where(and(eq(users.id, alsoUserId), eq(users.active, true)))
+      .limit(1);
     if (extra) members.push(extra);
   }
   return members;
@@ -249,10 +290,22 @@ export async function insertReview(actor: CurrentUser, input: NewReviewRow): Pro
   return db.transaction(async (tx) => {
     // The revision's row is locked so two requests at once cannot both open a review of it.
     await tx.select({ id: revisions.id }).from(revisions).where(eq(revisions.id, input.revisionId)).for("update");
-    const [approved] = await tx.select({ id: signOffs.id }).from(signOffs).where(and(eq(signOffs.revisionId, input.revisionId), eq(signOffs.decision, "approve"))).limit(1);
-    if (approved) throw new Refusal("conflict", `R${input.revisionNumber} is approved already: a later change needs a new revision, sent for review again.`);
+    const [approved] = await tx
+      .select({ id: signOffs.id })
+      .from(signOffs)
+      .where(and(eq(signOffs.revisionId, input.revisionId), eq(signOffs.decision, "approve")))
+      .limit(1);
+    if (approved)
+      throw new Refusal(
+        "conflict",
+        `R${input.revisionNumber} is approved already: a later change needs a new revision, sent for review again.`,
+      );
     const open = await openReviewsOf(input.revisionId, tx);
-    if (open.length) throw new Refusal("conflict", `R${input.revisionNumber} is already with the client for review (review ${open[0]}); wait for their decision.`);
+    if (open.length)
+      throw new Refusal(
+        "conflict",
+        `R${input.revisionNumber} is already with the client for review (review ${open[0]}); wait for their decision.`,
+      );
     const [res] = await tx.insert(reviews).values({
       revisionId: input.revisionId,
       projectId: input.projectId,
@@ -262,7 +315,13 @@ export async function insertReview(actor: CurrentUser, input: NewReviewRow): Pro
       requestedById: actor.id,
     });
     const id = res.insertId;
-    if (input.deposit) await tx.insert(deposits).values({ reviewId: id, projectId: input.projectId, amountMinor: input.deposit.amountMinor, currency: input.deposit.currency });
+    if (input.deposit)
+      await tx.insert(deposits).values({
+        reviewId: id,
+        projectId: input.projectId,
+        amountMinor: input.deposit.amountMinor,
+        currency: input.deposit.currency,
+      });
     await tx.update(projects).set({ status: "review" }).where(eq(projects.id, input.projectId));
     await writeLogEntry(tx, actor.id, input.projectId, {
       kind: "review",
@@ -275,16 +334,36 @@ export async function insertReview(actor: CurrentUser, input: NewReviewRow): Pro
       entity: "reviews",
       entityId: id,
       projectId: input.projectId,
-      detail: { revisionId: input.revisionId, revision: input.revisionNumber, runLengthMm: input.runLengthMm, endTreatment: input.endTreatment, deposit: input.deposit, status: "review" },
+      detail: {
+        revisionId: input.revisionId,
+        revision: input.revisionNumber,
+        runLengthMm: input.runLengthMm,
+        endTreatment: input.endTreatment,
+        deposit: input.deposit,
+        status: "review",
+      },
     });
     return id;
   });
 }
 
-export async function insertComment(actor: CurrentUser, review: Pick<ReviewRow, "id" | "projectId">, input: { text: string; at: number | null }): Promise<number> {
+export async function insertComment(
+  actor: CurrentUser,
+  review: Pick<ReviewRow, "id" | "projectId">,
+  input: { text: string; at: number | null },
+): Promise<number> {
   return db.transaction(async (tx) => {
-    const [res] = await tx.insert(reviewComments).values({ reviewId: review.id, authorId: actor.id, text: input.text, at: input.at });
-    await audit(tx, { actorId: actor.id, action: "comment", entity: "review_comments", entityId: res.insertId, projectId: review.projectId, detail: { reviewId: review.id, at: input.at } });
+    const [res] = await tx
+      .insert(reviewComments)
+      .values({ reviewId: review.id, authorId: actor.id, text: input.text, at: input.at });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "comment",
+      entity: "review_comments",
+      entityId: res.insertId,
+      projectId: review.projectId,
+      detail: { reviewId: review.id, at: input.at },
+    });
     return res.insertId;
   });
 }
@@ -307,7 +386,9 @@ export async function insertSignOff(actor: CurrentUser, review: ReviewRow, input
       const signedAt = new Date();
       let commentId: number | null = null;
       if (input.comment) {
-        const [c] = await tx.insert(reviewComments).values({ reviewId: review.id, authorId: actor.id, text: input.comment, at: null });
+        const [c] = await tx
+          .insert(reviewComments)
+          .values({ reviewId: review.id, authorId: actor.id, text: input.comment, at: null });
         commentId = c.insertId;
       }
       const [res] = await tx.insert(signOffs).values({
@@ -333,20 +414,32 @@ export async function insertSignOff(actor: CurrentUser, review: ReviewRow, input
             : `${input.typedName} asked for changes to ${review.designName} R${review.revisionNumber}: ${input.comment ?? ""} Status: In design.`,
         detail: { reviewId: review.id, revisionId: review.revisionId, decision: input.decision },
       });
-      if (input.decision === "approve") await tx.update(deposits).set({ status: "due" }).where(and(eq(deposits.reviewId, review.id), eq(deposits.status, "on-approval")));
+      if (input.decision === "approve")
+        await tx
+          .update(deposits)
+          .set({ status: "due" })
+          .where(and(eq(deposits.reviewId, review.id), eq(deposits.status, "on-approval")));
       await audit(tx, {
         actorId: actor.id,
         action: input.decision === "approve" ? "approve" : "request-changes",
         entity: "sign_offs",
         entityId: res.insertId,
         projectId: review.projectId,
-        detail: { reviewId: review.id, revisionId: review.revisionId, revision: review.revisionNumber, specHash: input.specHash, status, commentId },
+        detail: {
+          reviewId: review.id,
+          revisionId: review.revisionId,
+          revision: review.revisionNumber,
+          specHash: input.specHash,
+          status,
+          commentId,
+        },
       });
       return res.insertId;
     });
   } catch (error) {
     // Another decision on this review got there first.
-    if (isDuplicateKey(error)) throw new Refusal("conflict", "This review has been decided already; a decision cannot be changed.");
+    if (isDuplicateKey(error))
+      throw new Refusal("conflict", "This review has been decided already; a decision cannot be changed.");
     throw error;
   }
   const [row] = await signOffQuery().where(eq(signOffs.id, id)).limit(1);
@@ -355,7 +448,12 @@ export async function insertSignOff(actor: CurrentUser, review: ReviewRow, input
 
 /** The project's deposit as its page shows it: the newest review's that asked for one. */
 export async function projectDeposit(projectId: number): Promise<DepositRow | null> {
-  const [row] = await db.select().from(deposits).where(eq(deposits.projectId, projectId)).orderBy(desc(deposits.id)).limit(1);
+  const [row] = await db
+    .select()
+    .from(deposits)
+    .where(eq(deposits.projectId, projectId))
+    .orderBy(desc(deposits.id))
+    .limit(1);
   return row ? toDeposit(row) : null;
 }
 
@@ -363,5 +461,11 @@ export async function projectDeposit(projectId: number): Promise<DepositRow | nu
 export async function approvalStamp(revision: { id: number; number: number }): Promise<ApprovalStamp | null> {
   const s = await approvalOf(revision.id);
   if (!s) return null;
-  return { reference: approvalReference(s), revision: revision.number, typedName: s.typedName, organisation: s.organisation, signedAt: s.signedAt };
+  return {
+    reference: approvalReference(s),
+    revision: revision.number,
+    typedName: s.typedName,
+    organisation: s.organisation,
+    signedAt: s.signedAt,
+  };
 }

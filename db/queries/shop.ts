@@ -22,7 +22,11 @@ export interface ShopLibrary {
 }
 
 const tables = { materials, stockSheets, machines } as const;
-const entityNames: Record<ShopTable, string> = { materials: "materials", stockSheets: "stock_sheets", machines: "machines" };
+const entityNames: Record<ShopTable, string> = {
+  materials: "materials",
+  stockSheets: "stock_sheets",
+  machines: "machines",
+};
 
 export async function listShopLibrary({ activeOnly = false } = {}): Promise<ShopLibrary> {
   const [m, s, k] = await Promise.all([
@@ -45,12 +49,14 @@ export async function listShopLibrary({ activeOnly = false } = {}): Promise<Shop
 async function nameIsFree<T extends ShopTable>(table: T, name: string, exceptId?: number) {
   const t = tables[table];
   const [row] = await db.select({ id: t.id }).from(t).where(eq(t.name, name)).limit(1);
-  if (row && row.id !== exceptId) throw new Refusal("conflict", "That name is already in the library.", { name: ["Already in use."] });
+  if (row && row.id !== exceptId)
+    throw new Refusal("conflict", "That name is already in the library.", { name: ["Already in use."] });
 }
 
 async function assertMaterial(id: number) {
   const [row] = await db.select({ id: materials.id }).from(materials).where(eq(materials.id, id)).limit(1);
-  if (!row) throw new Refusal("bad_request", "Choose a material from the library.", { materialId: ["No such material."] });
+  if (!row)
+    throw new Refusal("bad_request", "Choose a material from the library.", { materialId: ["No such material."] });
 }
 
 type Values = {
@@ -60,7 +66,12 @@ type Values = {
 };
 
 /** Adds a row (id undefined) or changes one; either way the change is logged with its values. */
-export async function saveShopRow<T extends ShopTable>(actor: CurrentUser, table: T, values: Values[T], id?: number): Promise<number> {
+export async function saveShopRow<T extends ShopTable>(
+  actor: CurrentUser,
+  table: T,
+  values: Values[T],
+  id?: number,
+): Promise<number> {
   await nameIsFree(table, values.name, id);
   if (table === "stockSheets") await assertMaterial((values as Values["stockSheets"]).materialId);
   const t = tables[table];
@@ -71,24 +82,44 @@ export async function saveShopRow<T extends ShopTable>(actor: CurrentUser, table
         const [res] = await tx.insert(t).values(values as never);
         rowId = res.insertId;
       } else {
-        const [res] = await tx.update(t).set(values as never).where(eq(t.id, rowId));
+        const [res] = await tx
+          .update(t)
+          .set(values as never)
+          .where(eq(t.id, rowId));
         if (res.affectedRows === 0) throw new Refusal("not_found", "No such row in the library.");
       }
-      await audit(tx, { actorId: actor.id, action: id === undefined ? "create" : "update", entity: entityNames[table], entityId: rowId, detail: values as Record<string, unknown> });
+      await audit(tx, {
+        actorId: actor.id,
+        action: id === undefined ? "create" : "update",
+        entity: entityNames[table],
+        entityId: rowId,
+        detail: values as Record<string, unknown>,
+      });
       return rowId;
     });
   } catch (error) {
-    if (isDuplicateKey(error)) throw new Refusal("conflict", "That name is already in the library.", { name: ["Already in use."] });
+    if (isDuplicateKey(error))
+      throw new Refusal("conflict", "That name is already in the library.", { name: ["Already in use."] });
     throw error;
   }
 }
 
-export async function setShopRowActive(actor: CurrentUser, table: ShopTable, id: number, active: boolean): Promise<void> {
+export async function setShopRowActive(
+  actor: CurrentUser,
+  table: ShopTable,
+  id: number,
+  active: boolean,
+): Promise<void> {
   const t = tables[table];
   await db.transaction(async (tx) => {
     const [res] = await tx.update(t).set({ active }).where(eq(t.id, id));
     if (res.affectedRows === 0) throw new Refusal("not_found", "No such row in the library.");
-    await audit(tx, { actorId: actor.id, action: active ? "restore" : "retire", entity: entityNames[table], entityId: id });
+    await audit(tx, {
+      actorId: actor.id,
+      action: active ? "restore" : "retire",
+      entity: entityNames[table],
+      entityId: id,
+    });
   });
 }
 
@@ -98,8 +129,13 @@ export async function getShopRows(ids: { materialId: number; stockSheetId: numbe
     db.select().from(stockSheets).where(eq(stockSheets.id, ids.stockSheetId)).limit(1),
     db.select().from(machines).where(eq(machines.id, ids.machineId)).limit(1),
   ]);
-  if (!material) throw new Refusal("bad_request", "Choose a material from the library.", { materialId: ["No such material."] });
-  if (!sheet) throw new Refusal("bad_request", "Choose a stock sheet from the library.", { stockSheetId: ["No such stock sheet."] });
-  if (!machine) throw new Refusal("bad_request", "Choose a machine from the library.", { machineId: ["No such machine."] });
+  if (!material)
+    throw new Refusal("bad_request", "Choose a material from the library.", { materialId: ["No such material."] });
+  if (!sheet)
+    throw new Refusal("bad_request", "Choose a stock sheet from the library.", {
+      stockSheetId: ["No such stock sheet."],
+    });
+  if (!machine)
+    throw new Refusal("bad_request", "Choose a machine from the library.", { machineId: ["No such machine."] });
   return { material, sheet, machine };
 }

@@ -17,7 +17,14 @@ export interface UserRow {
 
 export async function listUsers(): Promise<UserRow[]> {
   return db
-    .select({ id: users.id, email: users.email, name: users.name, role: users.role, active: users.active, organisation: organisations.name })
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      role: users.role,
+      active: users.active,
+      organisation: organisations.name,
+    })
     .from(users)
     .leftJoin(organisations, eq(organisations.id, users.organisationId))
     .orderBy(asc(users.role), asc(users.name));
@@ -29,13 +36,26 @@ export async function listAssignableUsers(): Promise<UserRow[]> {
 }
 
 /** Adds an account; `hashPassword` (Argon2id, lib/server/passwords.ts) runs only once the e-mail is known to be free. */
-export async function createUser(actor: CurrentUser, input: { email: string; name: string; role: UserRole; password: string }, hashPassword: (password: string) => Promise<string>): Promise<number> {
+export async function createUser(
+  actor: CurrentUser,
+  input: { email: string; name: string; role: UserRole; password: string },
+  hashPassword: (password: string) => Promise<string>,
+): Promise<number> {
   const [taken] = await db.select({ id: users.id }).from(users).where(eq(users.email, input.email)).limit(1);
-  if (taken) throw new Refusal("conflict", "An account with that e-mail already exists.", { email: ["Already in use."] });
+  if (taken)
+    throw new Refusal("conflict", "An account with that e-mail already exists.", { email: ["Already in use."] });
   const passwordHash = await hashPassword(input.password);
   return db.transaction(async (tx) => {
-    const [res] = await tx.insert(users).values({ email: input.email, name: input.name, role: input.role, passwordHash });
-    await audit(tx, { actorId: actor.id, action: "create", entity: "users", entityId: res.insertId, detail: { email: input.email, role: input.role } });
+    const [res] = await tx
+      .insert(users)
+      .values({ email: input.email, name: input.name, role: input.role, passwordHash });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "create",
+      entity: "users",
+      entityId: res.insertId,
+      detail: { email: input.email, role: input.role },
+    });
     return res.insertId;
   });
 }
@@ -49,9 +69,9 @@ async function existingUser(userId: number) {
 /** The last active admin keeps the role and the account, so the shop is never locked out. */
 async function assertNotLastAdmin(userId: number) {
   const admins = await db.select({ id: users.id }).from(users).where(eq(users.role, "admin"));
-  const activeOthers = (await db.select({ id: users.id, role: users.role, active: users.active }).from(users).where(ne(users.id, userId))).filter(
-    (u) => u.role === "admin" && u.active,
-  );
+  const activeOthers = (
+    await db.select({ id: users.id, role: users.role, active: users.active }).from(users).where(ne(users.id, userId))
+  ).filter((u) => u.role === "admin" && u.active);
   if (admins.some((a) => a.id === userId) && activeOthers.length === 0) {
     throw new Refusal("conflict", "This is the last active admin; make someone else admin first.");
   }
@@ -63,7 +83,13 @@ export async function changeUserRole(actor: CurrentUser, userId: number, role: U
   if (user.role === "admin") await assertNotLastAdmin(userId);
   await db.transaction(async (tx) => {
     await tx.update(users).set({ role }).where(eq(users.id, userId));
-    await audit(tx, { actorId: actor.id, action: "change_role", entity: "users", entityId: userId, detail: { from: user.role, to: role } });
+    await audit(tx, {
+      actorId: actor.id,
+      action: "change_role",
+      entity: "users",
+      entityId: userId,
+      detail: { from: user.role, to: role },
+    });
   });
 }
 
@@ -76,6 +102,11 @@ export async function setUserActive(actor: CurrentUser, userId: number, active: 
   }
   await db.transaction(async (tx) => {
     await tx.update(users).set({ active }).where(eq(users.id, userId));
-    await audit(tx, { actorId: actor.id, action: active ? "activate" : "deactivate", entity: "users", entityId: userId });
+    await audit(tx, {
+      actorId: actor.id,
+      action: active ? "activate" : "deactivate",
+      entity: "users",
+      entityId: userId,
+    });
   });
 }

@@ -21,17 +21,33 @@ export async function authenticate(_previous: ActionState, formData: FormData): 
   const values = { email };
   const parsed = signInSchema.safeParse({ email: formData.get("email"), password: formData.get("password") });
   if (!parsed.success) {
-    return { ok: false, status: 400, message: "Check the highlighted fields.", fields: z.flattenError(parsed.error).fieldErrors, values };
+    return {
+      ok: false,
+      status: 400,
+      message: "Check the highlighted fields.",
+      fields: z.flattenError(parsed.error).fieldErrors,
+      values,
+    };
   }
   try {
-    await signIn("credentials", { email: parsed.data.email, password: parsed.data.password, redirectTo: safeCallback(formData.get("callbackUrl")) });
+    await signIn("credentials", {
+      email: parsed.data.email,
+      password: parsed.data.password,
+      redirectTo: safeCallback(formData.get("callbackUrl")),
+    });
     return { ok: true };
   } catch (error) {
     if (error instanceof AuthError) {
       if (error.type === "CredentialsSignin" && (error as AuthError & { code?: string }).code === "too_many_attempts") {
-        return { ok: false, status: 429, message: `Too many failed sign-ins. Wait ${SIGN_IN_WINDOW_MINUTES} minutes and try again.`, values };
+        return {
+          ok: false,
+          status: 429,
+          message: `Too many failed sign-ins. Wait ${SIGN_IN_WINDOW_MINUTES} minutes and try again.`,
+          values,
+        };
       }
-      if (error.type === "CredentialsSignin") return { ok: false, status: 401, message: "That e-mail and password do not match an active account.", values };
+      if (error.type === "CredentialsSignin")
+        return { ok: false, status: 401, message: "That e-mail and password do not match an active account.", values };
       return { ok: false, status: 500, message: "Sign-in failed on our side. Please try again.", values };
     }
     throw error; // the redirect that signals success
@@ -42,10 +58,14 @@ export async function signOutAction(): Promise<void> {
   await signOut({ redirectTo: "/login" });
 }
 
-const changePasswordForm = formAction(passwordChangeSchema, () => requireUser(), async (input, user) => {
-  await changePassword(user, input.currentPassword, input.newPassword, await clientAddressFromHeaders());
-  return "Password changed. Every session of yours has ended: sign in again with the new password.";
-});
+const changePasswordForm = formAction(
+  passwordChangeSchema,
+  () => requireUser(),
+  async (input, user) => {
+    await changePassword(user, input.currentPassword, input.newPassword, await clientAddressFromHeaders());
+    return "Password changed. Every session of yours has ended: sign in again with the new password.";
+  },
+);
 export async function changePasswordAction(...args: Parameters<typeof changePasswordForm>) {
   return changePasswordForm(...args);
 }

@@ -14,11 +14,15 @@ import { z } from "zod";
 const projectOf = (raw: Record<string, FormDataEntryValue>, need: "view" | "manage") =>
   requireProjectAccess(idParam(typeof raw.projectId === "string" ? raw.projectId : undefined, "project"), need);
 
-const createProjectForm = formAction(newProjectSchema, () => requireRole("admin", "fabricator"), async (input, user) => {
-  const id = await createProject(user, input);
-  revalidatePath("/projects");
-  redirect(`/projects/${id}`);
-});
+const createProjectForm = formAction(
+  newProjectSchema,
+  () => requireRole("admin", "fabricator"),
+  async (input, user) => {
+    const id = await createProject(user, input);
+    revalidatePath("/projects");
+    redirect(`/projects/${id}`);
+  },
+);
 export async function createProjectAction(...args: Parameters<typeof createProjectForm>) {
   return createProjectForm(...args);
 }
@@ -36,11 +40,15 @@ export async function updateProjectAction(...args: Parameters<typeof updateProje
   return updateProjectForm(...args);
 }
 
-const addMemberForm = formAction(newMemberSchema, (raw) => projectOf(raw, "manage"), async (input, access) => {
-  await addMember(access.user, access.projectId, input);
-  revalidatePath(`/projects/${access.projectId}`);
-  return "Member added.";
-});
+const addMemberForm = formAction(
+  newMemberSchema,
+  (raw) => projectOf(raw, "manage"),
+  async (input, access) => {
+    await addMember(access.user, access.projectId, input);
+    revalidatePath(`/projects/${access.projectId}`);
+    return "Member added.";
+  },
+);
 export async function addMemberAction(...args: Parameters<typeof addMemberForm>) {
   return addMemberForm(...args);
 }

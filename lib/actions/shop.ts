@@ -6,7 +6,13 @@ import { z } from "zod";
 import { saveShopRow, setShopRowActive } from "@/db/queries/shop";
 import { formAction } from "@/lib/server/action";
 import { requireRole } from "@/lib/server/dal";
-import { machineSchema, materialSchema, rowIdField, setShopRowActiveSchema, stockSheetSchema } from "@/lib/validation/shop";
+import {
+  machineSchema,
+  materialSchema,
+  rowIdField,
+  setShopRowActiveSchema,
+  stockSheetSchema,
+} from "@/lib/validation/shop";
 
 const shopStaff = () => requireRole("admin", "fabricator");
 // Forms for a new row send no id (or an empty one); forms for an existing row send its id.
@@ -17,10 +23,14 @@ function done(id: number | undefined, what: string) {
   return id === undefined ? `Added ${what}.` : `Saved ${what}.`;
 }
 
-const materialForm = formAction(z.intersection(materialSchema, optionalId), shopStaff, async ({ id, ...values }, actor) => {
-  await saveShopRow(actor, "materials", values, id);
-  return done(id, values.name);
-});
+const materialForm = formAction(
+  z.intersection(materialSchema, optionalId),
+  shopStaff,
+  async ({ id, ...values }, actor) => {
+    await saveShopRow(actor, "materials", values, id);
+    return done(id, values.name);
+  },
+);
 export async function saveMaterialAction(...args: Parameters<typeof materialForm>) {
   return materialForm(...args);
 }

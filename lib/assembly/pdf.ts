@@ -33,7 +33,12 @@ export async function assemblySheetPdf(sheet: AssemblySheet, opts: AssemblySheet
   const doc = new PDFDocument({
     size: [widthPt, heightPt],
     // pdfkit's own margins sit outside our frame, so its automatic page breaks never fire first.
-    margins: { top: frame.top, left: frame.left, right: frame.width - frame.right, bottom: frame.height - frame.bottom - 1 },
+    margins: {
+      top: frame.top,
+      left: frame.left,
+      right: frame.width - frame.right,
+      bottom: frame.height - frame.bottom - 1,
+    },
     bufferPages: true,
     // No starting face: pdfkit would otherwise load (and embed) its built-in Helvetica.
     font: "",
@@ -43,7 +48,12 @@ export async function assemblySheetPdf(sheet: AssemblySheet, opts: AssemblySheet
       Title: `${sheet.title}: ${sheet.project.name}, ${sheet.design.name} R${sheet.design.revision}`,
       Author: sheet.shop.name,
       Subject: `Assembly sheet for the installer. Site: ${sheet.project.site}. Sign-off: ${sheet.approval ? sheet.approval.reference : NOT_APPROVED}.`,
-      Keywords: ["assembly sheet", sheet.project.name, `R${sheet.design.revision}`, sheet.approval?.reference ?? "not approved"].join(", "),
+      Keywords: [
+        "assembly sheet",
+        sheet.project.name,
+        `R${sheet.design.revision}`,
+        sheet.approval?.reference ?? "not approved",
+      ].join(", "),
       Creator: "Axlewright",
       CreationDate: when,
       ModDate: when,

@@ -36,7 +36,8 @@ export interface PlanMarks {
   idHeight: number;
 }
 
-const line = (a: Pt, b: Pt, layer: string): makerjs.IPath => Object.assign(new makerjs.paths.Line([...a], [...b]), { layer });
+const line = (a: Pt, b: Pt, layer: string): makerjs.IPath =>
+  Object.assign(new makerjs.paths.Line([...a], [...b]), { layer });
 const EPS = 1e-6;
 
 /** The part ids the stretch shows, each with the part of its length in the stretch. */
@@ -53,7 +54,10 @@ export function planModel(run: SheetRun, r: PlanRange, marks: PlanMarks): makerj
   const bandTop = Math.min(...run.profile.map(([, y]) => y));
   const bandRoom = bandTop - run.baseY >= marks.idHeight;
   for (const p of partsIn(run, r)) {
-    const part: makerjs.IModel = new makerjs.models.ConnectTheDots(true, partOutline(run, p.a, p.b).map(([x, y]) => [x, y]));
+    const part: makerjs.IModel = new makerjs.models.ConnectTheDots(
+      true,
+      partOutline(run, p.a, p.b).map(([x, y]) => [x, y]),
+    );
     part.layer = PLAN_LAYER.part;
     const cx = (p.a + p.b) / 2;
     const y = bandRoom ? (run.baseY + bandTop) / 2 : topAt(run.profile, cx) + marks.idHeight;
@@ -68,19 +72,28 @@ export function planModel(run: SheetRun, r: PlanRange, marks: PlanMarks): makerj
   });
   if (bandTop - run.baseY > EPS) paths.bandTop = line([r.x0, bandTop], [r.x1, bandTop], PLAN_LAYER.bandTop);
   if (r.x0 > EPS) paths.goesOnLeft = line([r.x0, run.baseY], [r.x0, topAt(run.profile, r.x0)], PLAN_LAYER.runGoesOn);
-  if (r.x1 < run.length - EPS) paths.goesOnRight = line([r.x1, run.baseY], [r.x1, topAt(run.profile, r.x1)], PLAN_LAYER.runGoesOn);
+  if (r.x1 < run.length - EPS)
+    paths.goesOnRight = line([r.x1, run.baseY], [r.x1, topAt(run.profile, r.x1)], PLAN_LAYER.runGoesOn);
   paths.datum = line([r.x0 - marks.datumOver, run.datumY], [r.x1 + marks.datumOver, run.datumY], PLAN_LAYER.datum);
 
   const supports: makerjs.IModelMap = {};
   run.supports.forEach((x, i) => {
     if (!within(x)) return;
     const h = marks.supportHeight;
-    const mark: makerjs.IModel = new makerjs.models.ConnectTheDots(true, [[x, run.datumY], [x + marks.supportHalf, run.datumY - h], [x - marks.supportHalf, run.datumY - h]]);
+    const mark: makerjs.IModel = new makerjs.models.ConnectTheDots(true, [
+      [x, run.datumY],
+      [x + marks.supportHalf, run.datumY - h],
+      [x - marks.supportHalf, run.datumY - h],
+    ]);
     mark.layer = PLAN_LAYER.support;
     supports[`S${i + 1}`] = mark;
   });
 
-  return { units: makerjs.unitType.Millimeter, models: { parts: { models: parts }, supports: { models: supports } }, paths };
+  return {
+    units: makerjs.unitType.Millimeter,
+    models: { parts: { models: parts }, supports: { models: supports } },
+    paths,
+  };
 }
 
 /** The part models of a plan model, by id. */

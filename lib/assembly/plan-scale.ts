@@ -17,7 +17,9 @@ export interface PlanLayout {
 
 /** The largest standard scale (the biggest drawing) that fits `length` mm into at most `maxStrips` strips of `widthMm` printed mm. */
 export function planLayout(length: number, widthMm: number, maxStrips = 3): PlanLayout {
-  const scale = STANDARD_SCALES.find((s) => length / s <= widthMm * maxStrips + 1e-9) ?? STANDARD_SCALES[STANDARD_SCALES.length - 1];
+  const scale =
+    STANDARD_SCALES.find((s) => length / s <= widthMm * maxStrips + 1e-9) ??
+    STANDARD_SCALES[STANDARD_SCALES.length - 1];
   const perStrip = widthMm * scale;
   const count = Math.max(1, Math.ceil(length / perStrip - 1e-9));
   // Strips of equal length, so each is as wide on paper as the next.

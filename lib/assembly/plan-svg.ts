@@ -14,7 +14,17 @@ const SOFT = "#3d5a80";
 const FILL = "#ece3cc";
 
 /** The screen's own layers, beside the plan model's. */
-const LAYER = { leader: "leader", travel: "travel", frame: "frame", station: "station", between: "between", supportName: "support-name", supportAt: "support-at", travelWord: "travel-word", partId: "part-id" } as const;
+const LAYER = {
+  leader: "leader",
+  travel: "travel",
+  frame: "frame",
+  station: "station",
+  between: "between",
+  supportName: "support-name",
+  supportAt: "support-at",
+  travelWord: "travel-word",
+  partId: "part-id",
+} as const;
 
 // Sizes on paper, mm.
 const FONT = 2.6;
@@ -24,8 +34,12 @@ const BELOW = 14;
 const SIDE = 2;
 
 /** Pens by layer, in paper mm (strokes scale with the drawing, as on paper). */
-const text = (fill: string, size: number, weight = 400) => ({ cssStyle: `fill:${fill};stroke:none;font-size:${size}px;font-weight:${weight}` });
-const pen = (stroke: string, width: number, more = "") => ({ cssStyle: `stroke:${stroke};stroke-width:${width};fill:none${more}` });
+const text = (fill: string, size: number, weight = 400) => ({
+  cssStyle: `fill:${fill};stroke:none;font-size:${size}px;font-weight:${weight}`,
+});
+const pen = (stroke: string, width: number, more = "") => ({
+  cssStyle: `stroke:${stroke};stroke-width:${width};fill:none${more}`,
+});
 const LAYER_OPTIONS: Record<string, makerjs.exporter.ISVGElementRenderOptions> = {
   [PLAN_LAYER.part]: { cssStyle: `stroke:${INK};stroke-width:0.25;fill:${FILL};stroke-linejoin:round` },
   [PLAN_LAYER.joint]: pen(INK, 0.3),
@@ -71,12 +85,18 @@ function caption(text: string, at: Pt, layer: string, k: number, lo = -Infinity,
   return m;
 }
 
-const lineOn = (a: Pt, b: Pt, layer: string): makerjs.IPath => Object.assign(new makerjs.paths.Line([...a], [...b]), { layer });
+const lineOn = (a: Pt, b: Pt, layer: string): makerjs.IPath =>
+  Object.assign(new makerjs.paths.Line([...a], [...b]), { layer });
 
 /** The strip as an SVG document whose width is its printed width at 1 : scale. */
 export function stripSvg({ run, joints, range, scale: k, first, station, label }: StripSvgInput): string {
   const top = Math.max(...run.profile.map(([, y]) => y));
-  const model = planModel(run, range, { supportHalf: 1.5 * k, supportHeight: 3 * k, datumOver: SIDE * k, idHeight: 3.2 * k });
+  const model = planModel(run, range, {
+    supportHalf: 1.5 * k,
+    supportHeight: 3 * k,
+    datumOver: SIDE * k,
+    idHeight: 3.2 * k,
+  });
   for (const part of Object.values(model.models!.parts.models!)) part.caption!.anchor.layer = LAYER.partId;
 
   const notes: makerjs.IModelMap = {};
@@ -84,12 +104,14 @@ export function stripSvg({ run, joints, range, scale: k, first, station, label }
   const inRange = (x: number) => x >= range.x0 - 1e-6 && x <= range.x1 + 1e-6;
   // Labels stay on the strip's paper, however near its ends their stations are.
   const [lo, hi] = [range.x0 - SIDE * k, range.x1 + SIDE * k];
-  joints.filter((j) => inRange(j.station)).forEach((j, i) => {
-    const x = j.station;
-    paths[`leader-${i}`] = lineOn([x, topAt(run.profile, x)], [x, top + 6 * k], LAYER.leader);
-    notes[`station-${i}`] = caption(station(x), [x, top + 9 * k], LAYER.station, k, lo, hi);
-    notes[`between-${i}`] = caption(j.between.join(" | "), [x, top + 13.5 * k], LAYER.between, k, lo, hi);
-  });
+  joints
+    .filter((j) => inRange(j.station))
+    .forEach((j, i) => {
+      const x = j.station;
+      paths[`leader-${i}`] = lineOn([x, topAt(run.profile, x)], [x, top + 6 * k], LAYER.leader);
+      notes[`station-${i}`] = caption(station(x), [x, top + 9 * k], LAYER.station, k, lo, hi);
+      notes[`between-${i}`] = caption(j.between.join(" | "), [x, top + 13.5 * k], LAYER.between, k, lo, hi);
+    });
   run.supports.forEach((x, n) => {
     if (!inRange(x)) return;
     notes[`support-${n}`] = caption(`S${n + 1}`, [x, run.datumY - 5.6 * k], LAYER.supportName, k, lo, hi);
@@ -105,19 +127,29 @@ export function stripSvg({ run, joints, range, scale: k, first, station, label }
     notes.travel = caption("travel", [range.x0 + 20 * k, y], LAYER.travelWord, k, range.x0 + 20 * k);
   }
   // The paper the strip takes: room above for the station labels and below for the supports'.
-  notes.frame = Object.assign(new makerjs.models.Rectangle(range.x1 - range.x0 + 2 * SIDE * k, top - run.datumY + (ABOVE + BELOW) * k), {
-    origin: [range.x0 - SIDE * k, run.datumY - BELOW * k] as Pt,
-    layer: LAYER.frame,
-  });
+  notes.frame = Object.assign(
+    new makerjs.models.Rectangle(range.x1 - range.x0 + 2 * SIDE * k, top - run.datumY + (ABOVE + BELOW) * k),
+    {
+      origin: [range.x0 - SIDE * k, run.datumY - BELOW * k] as Pt,
+      layer: LAYER.frame,
+    },
+  );
 
-  const whole: makerjs.IModel = { units: makerjs.unitType.Millimeter, models: { plan: model, notes: { models: notes, paths } } };
+  const whole: makerjs.IModel = {
+    units: makerjs.unitType.Millimeter,
+    models: { plan: model, notes: { models: notes, paths } },
+  };
   const onPaper = makerjs.model.scale(whole, 1 / k);
   const svg = makerjs.exporter.toSVG(onPaper, {
     units: makerjs.unitType.Millimeter,
     scalingStroke: true,
     fontSize: `${FONT}px`,
     layerOptions: LAYER_OPTIONS,
-    svgAttrs: { role: "img", "aria-label": label, style: "max-width:100%;height:auto;font-family:var(--font-plex-mono),monospace" },
+    svgAttrs: {
+      role: "img",
+      "aria-label": label,
+      style: "max-width:100%;height:auto;font-family:var(--font-plex-mono),monospace",
+    },
   });
   // makerjs names each layer's group by an id; a page shows several strips, and ids must be unique
   // in a page (HTML, "The id attribute"), so the layer names become data attributes.

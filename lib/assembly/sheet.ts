@@ -98,5 +98,8 @@ export interface AssemblySheet {
   tolerance: { bumpLimit: number; method: string };
 }
 
-export const PAPER_SIZES = { a4: { name: "A4", widthPt: 595.28, heightPt: 841.89 }, letter: { name: "US Letter", widthPt: 612, heightPt: 792 } } as const;
+export const PAPER_SIZES = {
+  a4: { name: "A4", widthPt: 595.28, heightPt: 841.89 },
+  letter: { name: "US Letter", widthPt: 612, heightPt: 792 },
+} as const;
 export type Paper = keyof typeof PAPER_SIZES;

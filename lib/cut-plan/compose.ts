@@ -8,7 +8,15 @@ import type { CutSettingsInput } from "@/lib/cut/settings";
 export interface LibraryChoice {
   material: { id: number; name: string; thicknessMm: number };
   sheet: { id: number; name: string; lengthMm: number; widthMm: number; grain: "length" | "width" | "none" };
-  machine: { id: number; name: string; kind: "router" | "laser" | "waterjet" | "plasma"; kerfMm: number; bedLengthMm: number; bedWidthMm: number; minInsideRadiusMm: number };
+  machine: {
+    id: number;
+    name: string;
+    kind: "router" | "laser" | "waterjet" | "plasma";
+    kerfMm: number;
+    bedLengthMm: number;
+    bedWidthMm: number;
+    minInsideRadiusMm: number;
+  };
 }
 
 /** The body of a cut-plan request: the chosen library rows by id, and the rest of the settings. */
@@ -24,8 +32,14 @@ export type PlanChoice = z.infer<typeof planChoiceSchema>;
 /** Settings the library decides; a request may not set them itself. */
 const FROM_LIBRARY = ["machine", "sheet", "material", "project"] as const;
 
-export function composeSettings(choice: Pick<PlanChoice, "settings">, library: LibraryChoice, project: string): CutSettingsInput {
-  const own = Object.fromEntries(Object.entries(choice.settings).filter(([k]) => !(FROM_LIBRARY as readonly string[]).includes(k)));
+export function composeSettings(
+  choice: Pick<PlanChoice, "settings">,
+  library: LibraryChoice,
+  project: string,
+): CutSettingsInput {
+  const own = Object.fromEntries(
+    Object.entries(choice.settings).filter(([k]) => !(FROM_LIBRARY as readonly string[]).includes(k)),
+  );
   const { sheet, machine, material } = library;
   // The nester lays the sheet's length along x and keeps grain-bound parts along x; a sheet whose
   // grain runs across its width is the same sheet turned a quarter, so it is described that way.

@@ -40,7 +40,10 @@ export interface PlanForm {
 const str = (v: number) => String(Number(v.toPrecision(10)));
 
 /** The form for stored settings (or the defaults) and the chosen library rows. */
-export function formFromSettings(own: Partial<CutSettings>, ids: { materialId: number; stockSheetId: number; machineId: number }): PlanForm {
+export function formFromSettings(
+  own: Partial<CutSettings>,
+  ids: { materialId: number; stockSheetId: number; machineId: number },
+): PlanForm {
   const s = { ...DEFAULT_CUT_SETTINGS, ...own, joint: { ...DEFAULT_CUT_SETTINGS.joint, ...own.joint } };
   return {
     materialId: String(ids.materialId),
@@ -117,5 +120,10 @@ export function formToChoice(f: PlanForm): PlanChoice {
   };
   const cuts = parseStations(f.cuts);
   if (cuts) settings.cuts = cuts;
-  return { materialId: Number(f.materialId), stockSheetId: Number(f.stockSheetId), machineId: Number(f.machineId), settings };
+  return {
+    materialId: Number(f.materialId),
+    stockSheetId: Number(f.stockSheetId),
+    machineId: Number(f.machineId),
+    settings,
+  };
 }

@@ -34,7 +34,9 @@ export function summariseCutPlan(
   const sheets = nest.sheets.filter((sh) => sh.placements.length > 0);
   const sheetArea = s.sheet.length * s.sheet.width;
   const partArea = new Map(plan.parts.map((p) => [p.id, regionArea(p.region)]));
-  const perSheet = sheets.map((sh) => sh.placements.reduce((sum, pl) => sum + (partArea.get(pl.id) ?? 0), 0) / sheetArea);
+  const perSheet = sheets.map(
+    (sh) => sh.placements.reduce((sum, pl) => sum + (partArea.get(pl.id) ?? 0), 0) / sheetArea,
+  );
   const summary: CutPlanSummary = {
     sheets: sheets.length,
     // The parts' own area over the stock's: the same figure the page shows.
@@ -49,6 +51,15 @@ export function summariseCutPlan(
     warnings: plan.warnings.filter((w) => w.code !== "no-font").map((w) => w.message),
     ...gate,
   };
-  const stored = { sheets: sheets.map((sh, index) => ({ index, utilisation: perSheet[index], placements: sh.placements.map((p) => ({ ...p, sheet: index })) })), unplaced: [], seconds: nest.seconds, cancelled: nest.cancelled };
+  const stored = {
+    sheets: sheets.map((sh, index) => ({
+      index,
+      utilisation: perSheet[index],
+      placements: sh.placements.map((p) => ({ ...p, sheet: index })),
+    })),
+    unplaced: [],
+    seconds: nest.seconds,
+    cancelled: nest.cancelled,
+  };
   return { summary, nest: stored };
 }

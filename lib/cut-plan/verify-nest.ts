@@ -32,11 +32,13 @@ function overlapArea(lib: ClipperLib, a: Ring, b: Ring, grow: number): number {
     grow > 0
       ? // Round joins: the grown ring is every point within `grow` of the part (a Minkowski sum with a
         // disc), so two grown parts meet exactly when the parts are closer than twice `grow`.
-        lib.offsetToPaths({
+        (lib.offsetToPaths({
           delta: grow * SCALE,
           arcTolerance: 0.001 * SCALE,
-          offsetInputs: [{ data: toPath(ring, SCALE), joinType: clipper.JoinType.Round, endType: clipper.EndType.ClosedPolygon }],
-        }) ?? []
+          offsetInputs: [
+            { data: toPath(ring, SCALE), joinType: clipper.JoinType.Round, endType: clipper.EndType.ClosedPolygon },
+          ],
+        }) ?? [])
       : [toPath(ring, SCALE)];
   const out = lib.clipToPaths({
     clipType: clipper.ClipType.Intersection,
@@ -67,17 +69,24 @@ export async function checkNest(input: NestCheckInput): Promise<string[]> {
         continue;
       }
       const key = `${p.id}#${p.copy}`;
-      if (!Number.isInteger(p.copy) || p.copy < 0 || p.copy >= item.quantity) problems.push(`${label} is more copies than the plan needs (${item.quantity}).`);
+      if (!Number.isInteger(p.copy) || p.copy < 0 || p.copy >= item.quantity)
+        problems.push(`${label} is more copies than the plan needs (${item.quantity}).`);
       else if (seen.has(key)) problems.push(`${label} is placed twice.`);
       seen.add(key);
-      if (!item.rotations.some((r) => sameAngle(r, p.rotation))) problems.push(`${label} is turned ${p.rotation}°, which its grain or the settings do not allow.`);
+      if (!item.rotations.some((r) => sameAngle(r, p.rotation)))
+        problems.push(`${label} is turned ${p.rotation}°, which its grain or the settings do not allow.`);
       if (![p.x, p.y, p.rotation].every(Number.isFinite)) {
         problems.push(`${label} has no proper position.`);
         continue;
       }
       const ring = placeRing(item.polygon, p.rotation, p.x, p.y);
       const box = bounds(ring);
-      if (box.minX < m - TOLERANCE || box.minY < m - TOLERANCE || box.maxX > width - m + TOLERANCE || box.maxY > height - m + TOLERANCE) {
+      if (
+        box.minX < m - TOLERANCE ||
+        box.minY < m - TOLERANCE ||
+        box.maxX > width - m + TOLERANCE ||
+        box.maxY > height - m + TOLERANCE
+      ) {
         problems.push(`${label} on sheet ${sheet.index + 1} is not inside the sheet's ${m} margin.`);
       }
       placed.push({ label, ring, box });
@@ -85,11 +94,20 @@ export async function checkNest(input: NestCheckInput): Promise<string[]> {
     const grow = Math.max(0, input.spacing / 2 - TOLERANCE);
     for (let i = 0; i < placed.length; i++) {
       for (let j = i + 1; j < placed.length; j++) {
-        const a = placed[i], b = placed[j];
+        const a = placed[i],
+          b = placed[j];
         const reach = input.spacing;
-        if (a.box.maxX + reach < b.box.minX || b.box.maxX + reach < a.box.minX || a.box.maxY + reach < b.box.minY || b.box.maxY + reach < a.box.minY) continue;
+        if (
+          a.box.maxX + reach < b.box.minX ||
+          b.box.maxX + reach < a.box.minX ||
+          a.box.maxY + reach < b.box.minY ||
+          b.box.maxY + reach < a.box.minY
+        )
+          continue;
         if (overlapArea(lib, a.ring, b.ring, grow) > TOLERANCE * TOLERANCE) {
-          problems.push(`${a.label} and ${b.label} on sheet ${sheet.index + 1} are closer than the ${input.spacing} part spacing.`);
+          problems.push(
+            `${a.label} and ${b.label} on sheet ${sheet.index + 1} are closer than the ${input.spacing} part spacing.`,
+          );
         }
       }
     }

@@ -17,7 +17,8 @@ export function turn(a: Pt, b: Pt, c: Pt): number {
 export function reflexVertices(ring: Ring, from = 0, to = ring.length - 1): number[] {
   const n = ring.length;
   const out: number[] = [];
-  for (let i = Math.max(0, from); i <= Math.min(to, n - 1); i++) if (turn(ring[(i + n - 1) % n], ring[i], ring[(i + 1) % n]) < 0) out.push(i);
+  for (let i = Math.max(0, from); i <= Math.min(to, n - 1); i++)
+    if (turn(ring[(i + n - 1) % n], ring[i], ring[(i + 1) % n]) < 0) out.push(i);
   return out;
 }
 

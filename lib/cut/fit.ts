@@ -22,11 +22,14 @@ export function checkPartsFit(parts: Part[], s: CutSettings): void {
     const sizes = allowedRotations(p, s).map((r) => ({ r, ...cutSize(p, r, s.machine.kerf) }));
     if (sizes.some((z) => z.length <= U.length + 1e-9 && z.width <= U.width + 1e-9)) continue;
     // Report the rotation that comes closest.
-    const over = (z: { length: number; width: number }) => Math.max(z.length - U.length, 0) + Math.max(z.width - U.width, 0);
+    const over = (z: { length: number; width: number }) =>
+      Math.max(z.length - U.length, 0) + Math.max(z.width - U.width, 0);
     const z = sizes.sort((a, b) => over(a) - over(b))[0];
     const long = z.length - U.length;
     const wide = z.width - U.width;
-    const what = [long > 0 ? `${fmtLen(long)} too long` : "", wide > 0 ? `${fmtLen(wide)} too wide` : ""].filter(Boolean).join(" and ");
+    const what = [long > 0 ? `${fmtLen(long)} too long` : "", wide > 0 ? `${fmtLen(wide)} too wide` : ""]
+      .filter(Boolean)
+      .join(" and ");
     const bed = (long > 0 && U.lengthBy === "bed") || (wide > 0 && U.widthBy === "bed");
     const room = bed
       ? `the machine bed takes ${fmtLen(s.machine.bed.length)} × ${fmtLen(s.machine.bed.width)}`

@@ -42,7 +42,10 @@ function signedTurn(a: Pt, b: Pt, c: Pt): number {
  * the solid is: "left" for a counter-clockwise outer ring, "right" for a top surface read left to
  * right with the solid below it.
  */
-export function concaveCorners(points: readonly Pt[], opts: { closed: boolean; material: "left" | "right"; limit: number }): ConcaveCorner[] {
+export function concaveCorners(
+  points: readonly Pt[],
+  opts: { closed: boolean; material: "left" | "right"; limit: number },
+): ConcaveCorner[] {
   const n = points.length;
   const sign = opts.material === "left" ? -1 : 1;
   const first = opts.closed ? 0 : 1;
@@ -85,7 +88,8 @@ export function concaveCorners(points: readonly Pt[], opts: { closed: boolean; m
       if (j > 0) arc += len(run[j - 1], run[j]);
     }
     let radius: number;
-    if (run.length === 1) radius = phi[best] > SHARP_TURN ? 0 : (len(at(best - 1), best) + len(best, at(best + 1))) / 2 / phi[best];
+    if (run.length === 1)
+      radius = phi[best] > SHARP_TURN ? 0 : (len(at(best - 1), best) + len(best, at(best + 1))) / 2 / phi[best];
     else {
       const inner = total - (phi[run[0]] + phi[run[run.length - 1]]) / 2;
       radius = run.some((j) => phi[j] > SHARP_TURN) || inner <= 0 ? 0 : arc / inner;
@@ -112,13 +116,18 @@ const list = (xs: number[]) => {
 };
 
 /** The run's rolling surface: one warning for all its concave corners the cutter rounds. */
-export function trackSurfaceWarnings(profile: readonly Pt[], settings: CutSettings, result?: Pick<SolveResult, "check">): CutWarning[] {
+export function trackSurfaceWarnings(
+  profile: readonly Pt[],
+  settings: CutSettings,
+  result?: Pick<SolveResult, "check">,
+): CutWarning[] {
   const r = insideRadius(settings);
   const corners = concaveCorners(profile, { closed: false, material: "right", limit: r });
   if (!corners.length) return [];
   const xs = corners.map((c) => c.at[0]);
   const sharp = corners.every((c) => c.radius === 0);
-  const tool = settings.machine.kind === "router" ? `the ${fmtLen(settings.machine.kerf)} cutter` : `the ${settings.machine.kind}`;
+  const tool =
+    settings.machine.kind === "router" ? `the ${fmtLen(settings.machine.kerf)} cutter` : `the ${settings.machine.kind}`;
   const now = result?.check.minCurvatureRadius.track;
   return [
     {

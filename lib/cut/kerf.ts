@@ -19,7 +19,13 @@ function offsetRing(lib: ClipperLib, ring: Ring, delta: number): Ring[] {
   const paths = lib.offsetToPaths({
     delta: delta * SCALE_PER_MM,
     arcTolerance: ARC_TOLERANCE * SCALE_PER_MM,
-    offsetInputs: [{ data: toPath(orient(ring, true), SCALE_PER_MM), joinType: clipper.JoinType.Round, endType: clipper.EndType.ClosedPolygon }],
+    offsetInputs: [
+      {
+        data: toPath(orient(ring, true), SCALE_PER_MM),
+        joinType: clipper.JoinType.Round,
+        endType: clipper.EndType.ClosedPolygon,
+      },
+    ],
   });
   return (paths ?? []).map((p) => cleanRing(fromPath(p, SCALE_PER_MM), 0.0015)).filter((r) => r.length >= 3);
 }
@@ -48,7 +54,10 @@ export function kerfRegion(lib: ClipperLib, region: Region, kerf: number): ToolP
 }
 
 /** Tool paths for every part, by id. */
-export async function kerfParts(parts: Part[], settings: Pick<CutSettings, "machine">): Promise<{ paths: Map<string, ToolPath>; warnings: CutWarning[] }> {
+export async function kerfParts(
+  parts: Part[],
+  settings: Pick<CutSettings, "machine">,
+): Promise<{ paths: Map<string, ToolPath>; warnings: CutWarning[] }> {
   const lib = await loadClipper();
   const paths = new Map<string, ToolPath>();
   const warnings: CutWarning[] = [];

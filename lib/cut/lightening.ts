@@ -22,11 +22,17 @@ export function lighteningHoles(outline: Ring, s: CutSettings, minDiameter: numb
   const bore = s.boreDiameter / 2;
   const inner = bore + l.rim;
   const outer = rin - l.rim;
-  if (outer - inner < minDiameter) return { reason: `the ring between bore and outline (${(outer - inner).toFixed(1)} mm after the rim) is narrower than ${minDiameter.toFixed(1)} mm` };
+  if (outer - inner < minDiameter)
+    return {
+      reason: `the ring between bore and outline (${(outer - inner).toFixed(1)} mm after the rim) is narrower than ${minDiameter.toFixed(1)} mm`,
+    };
   const c = (inner + outer) / 2;
   const sinStep = Math.sin(Math.PI / l.count);
   const a = Math.min((outer - inner) / 2, (2 * c * sinStep - l.rim) / 2);
-  if (2 * a < minDiameter) return { reason: `${l.count} holes with a ${l.rim} mm rim between them would be under ${minDiameter.toFixed(1)} mm across` };
+  if (2 * a < minDiameter)
+    return {
+      reason: `${l.count} holes with a ${l.rim} mm rim between them would be under ${minDiameter.toFixed(1)} mm across`,
+    };
   const holes: Ring[] = [];
   const centres: Array<[number, number]> = [];
   for (let i = 0; i < l.count; i++) {

@@ -65,7 +65,9 @@ export async function nestOutline(ring: Ring, epsilon = NEST_OUTLINE_TOLERANCE):
     delta: epsilon * SCALE_PER_MM,
     miterLimit: 2,
     arcTolerance: 0.25 * SCALE_PER_MM,
-    offsetInputs: [{ data: toPath(simple, SCALE_PER_MM), joinType: clipper.JoinType.Miter, endType: clipper.EndType.ClosedPolygon }],
+    offsetInputs: [
+      { data: toPath(simple, SCALE_PER_MM), joinType: clipper.JoinType.Miter, endType: clipper.EndType.ClosedPolygon },
+    ],
   });
   const rings = (grown ?? []).map((p) => fromPath(p, SCALE_PER_MM));
   return rings.sort((a, b) => ringArea(b) - ringArea(a))[0] ?? ring.slice();

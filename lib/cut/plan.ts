@@ -35,12 +35,22 @@ export interface CutPlanResult {
  * warning says so). Throws CutError for bad settings, a run shorter than a period, bad cut
  * stations and parts that do not fit the sheet or the bed.
  */
-export function buildCutParts(spec: unknown, result: SolveResult, settings: unknown, opts: { font?: GlyphTable } = {}): CutPlanResult {
+export function buildCutParts(
+  spec: unknown,
+  result: SolveResult,
+  settings: unknown,
+  opts: { font?: GlyphTable } = {},
+): CutPlanResult {
   const s = parseCutSettings(settings);
   if (spec !== undefined && spec !== null && specHash(spec) !== result.specHash)
-    throw new CutError("invalid-settings", "The solve result does not belong to this design spec (their hashes differ): solve the spec again.", "spec");
+    throw new CutError(
+      "invalid-settings",
+      "The solve result does not belong to this design spec (their hashes differ): solve the spec again.",
+      "spec",
+    );
   const warnings: CutWarning[] = [];
-  if (!opts.font) warnings.push({ code: "no-font", message: "No engraving font was given, so the parts carry no labels." });
+  if (!opts.font)
+    warnings.push({ code: "no-font", message: "No engraving font was given, so the parts carry no labels." });
   const parts: Part[] = [];
   let run: RunPlan | null = null;
   let scale = 1;
@@ -52,7 +62,14 @@ export function buildCutParts(spec: unknown, result: SolveResult, settings: unkn
     warnings.push(...track.warnings);
     warnings.push(...trackSurfaceWarnings(built.run.profile, s, scale === 1 ? result : undefined));
     parts.push(...track.parts);
-    run = { ...built.run, cuts: track.cuts, segments: track.segments, supports: track.supports, baseY: track.baseY, centreY: track.centreY };
+    run = {
+      ...built.run,
+      cuts: track.cuts,
+      segments: track.segments,
+      supports: track.supports,
+      baseY: track.baseY,
+      centreY: track.centreY,
+    };
   }
   const wheels = buildWheelParts(result, s, scale, opts.font);
   parts.push(...wheels.parts);
@@ -67,9 +84,19 @@ export function buildCutParts(spec: unknown, result: SolveResult, settings: unkn
  * its grain allows, coarsened to a containing outline of few vertices (nest-outline.ts). Pass the
  * tool paths if they are already computed.
  */
-export async function nestItemsFor(parts: Part[], settings: CutSettings, toolPaths?: Map<string, ToolPath>): Promise<NestItem[]> {
+export async function nestItemsFor(
+  parts: Part[],
+  settings: CutSettings,
+  toolPaths?: Map<string, ToolPath>,
+): Promise<NestItem[]> {
   const paths = toolPaths ?? (await kerfParts(parts, settings)).paths;
   const items: NestItem[] = [];
-  for (const p of parts) items.push({ id: p.id, polygon: await nestOutline(paths.get(p.id)!.outer), quantity: p.quantity, rotations: allowedRotations(p, settings) });
+  for (const p of parts)
+    items.push({
+      id: p.id,
+      polygon: await nestOutline(paths.get(p.id)!.outer),
+      quantity: p.quantity,
+      rotations: allowedRotations(p, settings),
+    });
   return items;
 }

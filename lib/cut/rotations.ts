@@ -11,7 +11,10 @@ const SETS: Record<CutSettings["rotations"], number[]> = {
   none: [0],
 };
 
-export function allowedRotations(part: Pick<Part, "grainAlongX">, s: Pick<CutSettings, "rotations" | "sheet">): number[] {
+export function allowedRotations(
+  part: Pick<Part, "grainAlongX">,
+  s: Pick<CutSettings, "rotations" | "sheet">,
+): number[] {
   const set = SETS[s.rotations];
   if (part.grainAlongX && s.sheet.grain === "length") return set.filter((r) => r % 180 === 0);
   return set;

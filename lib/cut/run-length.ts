@@ -57,7 +57,8 @@ export function hasTrack(result: Pick<SolveResult, "mode">): boolean {
 function periodProfile(result: SolveResult): Pt[] {
   const k = mmPerUnit(result.units);
   const pts = toMm(result.track?.points ?? [], k);
-  if (pts.length < 2 || !(result.period! > 0)) throw new CutError("no-wheel", "The solve result has no track profile to cut.");
+  if (pts.length < 2 || !(result.period! > 0))
+    throw new CutError("no-wheel", "The solve result has no track profile to cut.");
   const x0 = pts[0][0];
   return pts.map(([x, y]) => [x - x0, y]);
 }
@@ -84,7 +85,8 @@ function troughOffsets(period: Pt[]): number[] {
   for (const p of period) lo = Math.min(lo, p[1]);
   const span = Math.max(...period.map((p) => Math.abs(p[1]))) || 1;
   const out: number[] = [];
-  for (const p of period) if (p[1] <= lo + 1e-9 * span && !out.some((x) => Math.abs(x - p[0]) < 1e-9 * span)) out.push(p[0]);
+  for (const p of period)
+    if (p[1] <= lo + 1e-9 * span && !out.some((x) => Math.abs(x - p[0]) < 1e-9 * span)) out.push(p[0]);
   return out;
 }
 
@@ -163,7 +165,8 @@ export function buildRun(result: SolveResult, settings: CutSettings): { run: Run
   const crests: number[] = [];
   const troughs: number[] = [];
   for (let j = 0; j <= whole; j++) crests.push(X0 + j * P);
-  for (let j = 0; j < Math.ceil(periods); j++) for (const t of troughAt) if (j * P + t <= periods * P + 1e-9) troughs.push(X0 + j * P + t);
+  for (let j = 0; j < Math.ceil(periods); j++)
+    for (const t of troughAt) if (j * P + t <= periods * P + 1e-9) troughs.push(X0 + j * P + t);
   const minY = Math.min(...profile.map((p) => p[1]));
   const residual = settings.endTreatment === "scale" ? 0 : 2 * eachEnd;
   return {

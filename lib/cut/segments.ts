@@ -12,7 +12,12 @@ import type { CutWarning } from "./types";
 import { fmtLen } from "./units";
 
 /** The longest and widest part the sheet (less its margin) and the bed both take, and which binds. */
-export function usableSize(s: CutSettings): { length: number; width: number; lengthBy: "sheet" | "bed"; widthBy: "sheet" | "bed" } {
+export function usableSize(s: CutSettings): {
+  length: number;
+  width: number;
+  lengthBy: "sheet" | "bed";
+  widthBy: "sheet" | "bed";
+} {
   const sl = s.sheet.length - 2 * s.margin;
   const sw = s.sheet.width - 2 * s.margin;
   return {
@@ -30,7 +35,10 @@ export function jointReach(s: CutSettings): number {
 
 /** The shortest segment that holds a joint at each end with material to spare. */
 export function minSegment(s: CutSettings): number {
-  const j = s.joint.kind === "key" ? keyShape(s.joint).reach + 2 * s.machine.kerf + 10 : spliceGeometry(s).half + s.joint.dowelDiameter;
+  const j =
+    s.joint.kind === "key"
+      ? keyShape(s.joint).reach + 2 * s.machine.kerf + 10
+      : spliceGeometry(s).half + s.joint.dowelDiameter;
   return Math.max(100, 2 * j);
 }
 
@@ -54,11 +62,18 @@ export function planCuts(run: RunInfo, s: CutSettings): CutPlan {
   const L = run.runLength;
   const U = usableSize(s);
   const minSeg = minSegment(s);
-  const by = U.lengthBy === "sheet" ? `the usable sheet length (${fmtLen(s.sheet.length)} less ${fmtLen(s.margin)} margins)` : `the machine bed (${fmtLen(s.machine.bed.length)})`;
+  const by =
+    U.lengthBy === "sheet"
+      ? `the usable sheet length (${fmtLen(s.sheet.length)} less ${fmtLen(s.margin)} margins)`
+      : `the machine bed (${fmtLen(s.machine.bed.length)})`;
   if (s.cuts) {
     s.cuts.forEach((c, i) => {
       if (!(c > 0 && c < L))
-        throw new CutError("bad-cuts", `Cut station ${i + 1} (${fmtLen(c)}) is not inside the run (0 to ${fmtLen(L)}).`, `cuts.${i}`);
+        throw new CutError(
+          "bad-cuts",
+          `Cut station ${i + 1} (${fmtLen(c)}) is not inside the run (0 to ${fmtLen(L)}).`,
+          `cuts.${i}`,
+        );
     });
     const segs = segmentsOf(s.cuts, L);
     segs.forEach((g, i) => {
@@ -72,7 +87,11 @@ export function planCuts(run: RunInfo, s: CutSettings): CutPlan {
           field,
         );
       if (g.x1 - g.x0 < minSeg)
-        throw new CutError("bad-cuts", `Segment ${i + 1} (${fmtLen(g.x0)} to ${fmtLen(g.x1)}) is shorter than ${fmtLen(minSeg)}, too short to hold its joints.`, field);
+        throw new CutError(
+          "bad-cuts",
+          `Segment ${i + 1} (${fmtLen(g.x0)} to ${fmtLen(g.x1)}) is shorter than ${fmtLen(minSeg)}, too short to hold its joints.`,
+          field,
+        );
     });
     return { cuts: [...s.cuts], segments: segs, warnings: [] };
   }

@@ -19,7 +19,12 @@ interface Copy {
   area: number;
 }
 
-export function shelfLayout(input: { items: NestItem[]; sheet: { width: number; height: number }; margin: number; spacing: number }): SheetNestResult {
+export function shelfLayout(input: {
+  items: NestItem[];
+  sheet: { width: number; height: number };
+  margin: number;
+  spacing: number;
+}): SheetNestResult {
   const t0 = Date.now();
   const { width: W, height: H } = input.sheet;
   const m = input.margin;
@@ -38,8 +43,23 @@ export function shelfLayout(input: { items: NestItem[]; sheet: { width: number; 
       .sort((a, b) => a.h - b.h || a.r - b.r);
     for (let c = 0; c < item.quantity; c++) {
       const o = options[0];
-      if (!o) unplaced.push({ id: item.id, copy: c, reason: "larger than the sheet less its margins in every allowed rotation" });
-      else copies.push({ id: item.id, copy: c, rotation: o.r, w: o.w, h: o.h, minX: o.minX, minY: o.minY, area: ringArea(item.polygon) });
+      if (!o)
+        unplaced.push({
+          id: item.id,
+          copy: c,
+          reason: "larger than the sheet less its margins in every allowed rotation",
+        });
+      else
+        copies.push({
+          id: item.id,
+          copy: c,
+          rotation: o.r,
+          w: o.w,
+          h: o.h,
+          minX: o.minX,
+          minY: o.minY,
+          area: ringArea(item.polygon),
+        });
     }
   }
   copies.sort((a, b) => b.h - a.h || b.w - a.w);
@@ -52,12 +72,21 @@ export function shelfLayout(input: { items: NestItem[]; sheet: { width: number; 
       const sh = sheets[si];
       let shelf = sh.shelves.find((s) => s.h >= c.h - 1e-9 && s.x + c.w <= W - m + 1e-9);
       if (!shelf) {
-        const top = sh.shelves.length ? sh.shelves[sh.shelves.length - 1].y + sh.shelves[sh.shelves.length - 1].h + g : m;
+        const top = sh.shelves.length
+          ? sh.shelves[sh.shelves.length - 1].y + sh.shelves[sh.shelves.length - 1].h + g
+          : m;
         if (top + c.h > H - m + 1e-9) continue;
         shelf = { y: top, h: c.h, x: m };
         sh.shelves.push(shelf);
       }
-      sh.placements.push({ id: c.id, copy: c.copy, rotation: c.rotation, x: shelf.x - c.minX, y: shelf.y - c.minY, sheet: si });
+      sh.placements.push({
+        id: c.id,
+        copy: c.copy,
+        rotation: c.rotation,
+        x: shelf.x - c.minX,
+        y: shelf.y - c.minY,
+        sheet: si,
+      });
       sh.area += c.area;
       shelf.x += c.w + g;
       done = true;
@@ -66,7 +95,11 @@ export function shelfLayout(input: { items: NestItem[]; sheet: { width: number; 
   const used = sheets.filter((s) => s.placements.length);
   const total = used.reduce((a, s) => a + s.area, 0);
   return {
-    sheets: used.map((s, index) => ({ index, utilisation: s.area / (W * H), placements: s.placements.map((p) => ({ ...p, sheet: index })) })),
+    sheets: used.map((s, index) => ({
+      index,
+      utilisation: s.area / (W * H),
+      placements: s.placements.map((p) => ({ ...p, sheet: index })),
+    })),
     utilisation: used.length ? total / (used.length * W * H) : 0,
     unplaced,
     seconds: (Date.now() - t0) / 1000,

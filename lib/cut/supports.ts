@@ -18,7 +18,11 @@ export function jointZone(s: number, settings: CutSettings): [number, number] {
   return [s - half - wall - d / 2, s + half + wall + d / 2];
 }
 
-export function supportStations(L: number, cuts: number[], settings: CutSettings): { xs: number[]; warnings: CutWarning[] } {
+export function supportStations(
+  L: number,
+  cuts: number[],
+  settings: CutSettings,
+): { xs: number[]; warnings: CutWarning[] } {
   const d = settings.supportHoleDiameter;
   const e = Math.min(L / 4, Math.max(3 * d, 50));
   const span = L - 2 * e;
@@ -31,7 +35,11 @@ export function supportStations(L: number, cuts: number[], settings: CutSettings
     const z = zones.find(([a, b]) => x > a && x < b);
     if (z) {
       const to = x - z[0] <= z[1] - x && z[0] >= e ? z[0] : z[1] <= L - e ? z[1] : z[0];
-      warnings.push({ code: "support-moved", message: `A support hole at x = ${fmtLen(x)} fell on a joint and moved to x = ${fmtLen(to)}.`, at: [to] });
+      warnings.push({
+        code: "support-moved",
+        message: `A support hole at x = ${fmtLen(x)} fell on a joint and moved to x = ${fmtLen(to)}.`,
+        at: [to],
+      });
       x = to;
     }
     if (!xs.some((q) => Math.abs(q - x) < 2 * d)) xs.push(x);
@@ -41,7 +49,9 @@ export function supportStations(L: number, cuts: number[], settings: CutSettings
   for (let i = 1; i < bounds.length; i++) {
     const [a, b] = [bounds[i - 1], bounds[i]];
     if (xs.some((x) => x > a && x < b)) continue;
-    const free = [(a + b) / 2, a + (b - a) / 3, a + (2 * (b - a)) / 3].find((x) => !zones.some(([za, zb]) => x > za && x < zb));
+    const free = [(a + b) / 2, a + (b - a) / 3, a + (2 * (b - a)) / 3].find(
+      (x) => !zones.some(([za, zb]) => x > za && x < zb),
+    );
     if (free !== undefined) xs.push(free);
   }
   xs.sort((p, q) => p - q);

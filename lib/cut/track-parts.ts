@@ -35,9 +35,21 @@ export interface TrackParts {
 const pad = (i: number) => String(i).padStart(2, "0");
 
 /** One segment's outline in run coordinates, with the joints' corners relieved. */
-function segmentRing(run: RunInfo, a: number, b: number, left: boolean, right: boolean, yb: number, yc: number, s: CutSettings): Ring {
+function segmentRing(
+  run: RunInfo,
+  a: number,
+  b: number,
+  left: boolean,
+  right: boolean,
+  yb: number,
+  yc: number,
+  s: CutSettings,
+): Ring {
   const key = s.joint.kind === "key" ? keyShape(s.joint) : null;
-  const start: Pt[] = [[a, yb], [b, yb]];
+  const start: Pt[] = [
+    [a, yb],
+    [b, yb],
+  ];
   const rightEnd = right && key ? keyTongue(b, yc, key) : [];
   const top = sliceByX(run.profile, a, b).reverse();
   const leftEnd = left && key ? keySlot(a, yc, key) : [];
@@ -64,7 +76,9 @@ export function buildTrackParts(run: RunInfo, s: CutSettings, font?: GlyphTable)
     const left = i > 0;
     const right = i < n - 1;
     const ring = segmentRing(run, a, b, left, right, yb, yc, s);
-    const drill: DrillHole[] = sup.xs.filter((x) => x > a && x < b).map((x) => ({ x, y: yc, diameter: s.supportHoleDiameter }));
+    const drill: DrillHole[] = sup.xs
+      .filter((x) => x > a && x < b)
+      .map((x) => ({ x, y: yc, diameter: s.supportHoleDiameter }));
     if (s.joint.kind === "dowel") {
       if (left) drill.push(...jointHoles(a, yc, s).right);
       if (right) drill.push(...jointHoles(b, yc, s).left);
@@ -99,17 +113,46 @@ export function buildTrackParts(run: RunInfo, s: CutSettings, font?: GlyphTable)
 }
 
 /** Engraves a label on a part, or notes why not. */
-export function labelPart(part: Part, lines: string[], prefer: Pt, s: CutSettings, font: GlyphTable | undefined, warnings: CutWarning[], arrow = true, within?: Box): void {
+export function labelPart(
+  part: Part,
+  lines: string[],
+  prefer: Pt,
+  s: CutSettings,
+  font: GlyphTable | undefined,
+  warnings: CutWarning[],
+  arrow = true,
+  within?: Box,
+): void {
   if (!font) return;
   const text = lines.filter((l) => l.trim().length > 0);
-  const placed = placeLabel(font, part.region, part.drill, { lines: text, arrow, maxHeight: s.labelHeight, minHeight: 3, prefer, margin: Math.max(3, s.machine.kerf), within });
+  const placed = placeLabel(font, part.region, part.drill, {
+    lines: text,
+    arrow,
+    maxHeight: s.labelHeight,
+    minHeight: 3,
+    prefer,
+    margin: Math.max(3, s.machine.kerf),
+    within,
+  });
   if (!placed) {
-    warnings.push({ code: "label-skipped", partId: part.id, message: `There is no room on part ${part.id} for a label 3 mm high or more: it is not engraved. Mark it by hand.` });
+    warnings.push({
+      code: "label-skipped",
+      partId: part.id,
+      message: `There is no room on part ${part.id} for a label 3 mm high or more: it is not engraved. Mark it by hand.`,
+    });
     return;
   }
   if (!placed.full)
-    warnings.push({ code: "label-shortened", partId: part.id, message: `Part ${part.id} has room only for its id and arrow: the project name is left off its label.` });
+    warnings.push({
+      code: "label-shortened",
+      partId: part.id,
+      message: `Part ${part.id} has room only for its id and arrow: the project name is left off its label.`,
+    });
   if (placed.missing.length)
-    warnings.push({ code: "label-shortened", partId: part.id, message: `The engraving font has no glyph for ${[...new Set(placed.missing)].map((c) => `"${c}"`).join(", ")}: drawn as "?" on part ${part.id}.` });
+    warnings.push({
+      code: "label-shortened",
+      partId: part.id,
+      message: `The engraving font has no glyph for ${[...new Set(placed.missing)].map((c) => `"${c}"`).join(", ")}: drawn as "?" on part ${part.id}.`,
+    });
   part.engrave = placed.strokes;
 }

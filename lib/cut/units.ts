@@ -12,7 +12,8 @@ export function mmPerUnit(units: "mm" | "in"): number {
   return units === "in" ? MM_PER_IN : 1;
 }
 
-export const toMm = (pts: readonly Pt[], k: number): Pt[] => (k === 1 ? pts.map(([x, y]) => [x, y]) : pts.map(([x, y]) => [x * k, y * k]));
+export const toMm = (pts: readonly Pt[], k: number): Pt[] =>
+  k === 1 ? pts.map(([x, y]) => [x, y]) : pts.map(([x, y]) => [x * k, y * k]);
 
 /** Converts millimetres to the output unit. */
 export function fromMm(v: number, units: OutputUnits): number {

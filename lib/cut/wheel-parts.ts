@@ -30,22 +30,37 @@ function bodies(result: SolveResult): Body[] {
     case "partner-wheel":
       return [
         { id: "W1", kind: "wheel", name: "Driver wheel", points: wheel.points },
-        ...(result.partner ? [{ id: "P1", kind: "partner" as const, name: "Partner wheel", points: result.partner.points }] : []),
+        ...(result.partner
+          ? [{ id: "P1", kind: "partner" as const, name: "Partner wheel", points: result.partner.points }]
+          : []),
       ];
     case "twin-wheels":
       return [
         { id: "W1", kind: "wheel", name: "Upper twin wheel", points: wheel.points },
-        ...(result.partner ? [{ id: "P1", kind: "partner" as const, name: "Lower twin wheel", points: result.partner.points }] : []),
+        ...(result.partner
+          ? [{ id: "P1", kind: "partner" as const, name: "Lower twin wheel", points: result.partner.points }]
+          : []),
       ];
   }
 }
 
 /** The wheel outline in mm, counter-clockwise, axle at the origin. */
 export function wheelRing(points: SolveResult["wheel"]["points"], k: number): Ring {
-  return orient(cleanRing(points.map(([x, y]) => [x * k, y * k]), 1e-6), true);
+  return orient(
+    cleanRing(
+      points.map(([x, y]) => [x * k, y * k]),
+      1e-6,
+    ),
+    true,
+  );
 }
 
-export function buildWheelParts(result: SolveResult, s: CutSettings, scale: number, font?: GlyphTable): { parts: Part[]; warnings: CutWarning[] } {
+export function buildWheelParts(
+  result: SolveResult,
+  s: CutSettings,
+  scale: number,
+  font?: GlyphTable,
+): { parts: Part[]; warnings: CutWarning[] } {
   if (!result.wheel?.points?.length) throw new CutError("no-wheel", "The solve result has no wheel outline.");
   const warnings: CutWarning[] = [];
   const parts: Part[] = [];
@@ -66,10 +81,23 @@ export function buildWheelParts(result: SolveResult, s: CutSettings, scale: numb
     if (s.lightening) {
       const l = lighteningHoles(outer, s, Math.max(2 * s.machine.kerf, 10));
       if ("reason" in l)
-        warnings.push({ code: "lightening-skipped", partId: b.id, message: `No lightening holes in ${b.id}: ${l.reason}.` });
+        warnings.push({
+          code: "lightening-skipped",
+          partId: b.id,
+          message: `No lightening holes in ${b.id}: ${l.reason}.`,
+        });
       else holes.push(...l.holes);
     }
-    const part: Part = { id: b.id, kind: b.kind, name: b.name, quantity: s.wheelCount, region: { outer, holes }, drill: [], engrave: [], grainAlongX: false };
+    const part: Part = {
+      id: b.id,
+      kind: b.kind,
+      name: b.name,
+      quantity: s.wheelCount,
+      region: { outer, holes },
+      drill: [],
+      engrave: [],
+      grainAlongX: false,
+    };
     labelPart(part, [s.project, b.id], [0, -(bore + rin) / 2], s, font, warnings);
     warnings.push(...wheelSurfaceWarnings(b.id, outer, s));
     parts.push(part);

@@ -27,7 +27,13 @@ export interface AnimatedPreview {
 export const MAX_PREVIEW_WIDTH = 600;
 export const MAX_PREVIEW_BYTES = 1024 * 1024;
 
-async function encode(result: SolvedGeometry, format: "webp" | "gif", width: number, frames: number, quality: number): Promise<AnimatedPreview> {
+async function encode(
+  result: SolvedGeometry,
+  format: "webp" | "gif",
+  width: number,
+  frames: number,
+  quality: number,
+): Promise<AnimatedPreview> {
   const set = rollingFrames(result, { width, frames });
   const rasters = await Promise.all(set.frames.map((fr) => sharp(Buffer.from(fr.svg)).png().toBuffer()));
   const joined = sharp(rasters, { join: { animated: true } });
@@ -36,10 +42,20 @@ async function encode(result: SolvedGeometry, format: "webp" | "gif", width: num
     format === "webp"
       ? await joined.webp({ loop: 0, delay, quality, effort: 3 }).toBuffer()
       : await joined.gif({ loop: 0, delay, colours: quality >= 60 ? 64 : 32, effort: 5 }).toBuffer();
-  return { data, contentType: format === "webp" ? "image/webp" : "image/gif", width: set.width, height: set.height, frames: set.frames.length, bytes: data.length };
+  return {
+    data,
+    contentType: format === "webp" ? "image/webp" : "image/gif",
+    width: set.width,
+    height: set.height,
+    frames: set.frames.length,
+    bytes: data.length,
+  };
 }
 
-export async function animatedPreview(result: SolvedGeometry, opts: AnimatedPreviewOptions = {}): Promise<AnimatedPreview> {
+export async function animatedPreview(
+  result: SolvedGeometry,
+  opts: AnimatedPreviewOptions = {},
+): Promise<AnimatedPreview> {
   const format = opts.format ?? "webp";
   const maxBytes = opts.maxBytes ?? MAX_PREVIEW_BYTES;
   const width = Math.min(MAX_PREVIEW_WIDTH, Math.max(120, Math.round(opts.width ?? 560)));

@@ -25,9 +25,14 @@ export function previewSvg(result: SolveResult, width = 640, height = 360): stri
   };
   const parts: string[] = [];
   const stroke = (d: string, colour = INK, w = 2) =>
-    parts.push(`<path d="${d}" fill="none" stroke="${colour}" stroke-width="${w}" vector-effect="non-scaling-stroke" stroke-linejoin="round"/>`);
+    parts.push(
+      `<path d="${d}" fill="none" stroke="${colour}" stroke-width="${w}" vector-effect="non-scaling-stroke" stroke-linejoin="round"/>`,
+    );
 
-  if (result.track && (result.mode === "track-for-wheel" || result.mode === "wheel-for-track" || result.mode === "twin-wheels")) {
+  if (
+    result.track &&
+    (result.mode === "track-for-wheel" || result.mode === "wheel-for-track" || result.mode === "twin-wheels")
+  ) {
     const period = result.period ?? 0;
     const axleY = result.mode === "track-for-wheel" ? 0 : (result.axleHeight ?? 0);
     for (let k = -1; k <= 1; k++) {
@@ -52,9 +57,12 @@ export function previewSvg(result: SolveResult, width = 640, height = 360): stri
       stroke(`M0 0 L0 ${-c}`, SOFT, 1);
     }
   }
-  if (!Number.isFinite(box.minX)) return `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}"><rect width="100%" height="100%" fill="${PAPER}"/></svg>`;
+  if (!Number.isFinite(box.minX))
+    return `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}"><rect width="100%" height="100%" fill="${PAPER}"/></svg>`;
   const margin = 0.08 * Math.max(boxWidth(box), boxHeight(box));
-  const vb = [box.minX - margin, -(box.maxY + margin), boxWidth(box) + 2 * margin, boxHeight(box) + 2 * margin].map((v) => v.toFixed(3));
+  const vb = [box.minX - margin, -(box.maxY + margin), boxWidth(box) + 2 * margin, boxHeight(box) + 2 * margin].map(
+    (v) => v.toFixed(3),
+  );
   return [
     `<svg xmlns="http://www.w3.org/2000/svg" width="${width}" height="${height}" viewBox="${vb.join(" ")}" preserveAspectRatio="xMidYMid meet">`,
     `<rect x="${vb[0]}" y="${vb[1]}" width="${vb[2]}" height="${vb[3]}" fill="${PAPER}"/>`,

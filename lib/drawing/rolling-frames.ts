@@ -49,12 +49,16 @@ const poly = (pts: readonly Pt[], view: View, close: boolean) => {
 /** A faint grid at a round step in the design's units, about 24 px apart. */
 function grid(view: View, w: number, h: number): string {
   const raw = 24 / view.scale;
-  const step = [1, 2, 5].map((m) => m * 10 ** Math.floor(Math.log10(raw))).find((s) => s >= raw) ?? 10 ** Math.ceil(Math.log10(raw));
+  const step =
+    [1, 2, 5].map((m) => m * 10 ** Math.floor(Math.log10(raw))).find((s) => s >= raw) ??
+    10 ** Math.ceil(Math.log10(raw));
   const lines: string[] = [];
   const x0 = -view.ox / view.scale;
-  for (let x = Math.ceil(x0 / step) * step; view.ox + view.scale * x <= w; x += step) lines.push(`M${f(view.ox + view.scale * x)} 0V${h}`);
+  for (let x = Math.ceil(x0 / step) * step; view.ox + view.scale * x <= w; x += step)
+    lines.push(`M${f(view.ox + view.scale * x)} 0V${h}`);
   const yTop = view.oy / view.scale;
-  for (let y = Math.floor(yTop / step) * step; view.oy - view.scale * y <= h; y -= step) lines.push(`M0 ${f(view.oy - view.scale * y)}H${w}`);
+  for (let y = Math.floor(yTop / step) * step; view.oy - view.scale * y <= h; y -= step)
+    lines.push(`M0 ${f(view.oy - view.scale * y)}H${w}`);
   return `<path d="${lines.join("")}" stroke="${GRID}" stroke-width="0.6" fill="none"/>`;
 }
 
@@ -76,8 +80,12 @@ export function rollingFrames(result: SolvedGeometry, opts: FrameOptions = {}): 
   const still = [
     `<rect width="${width}" height="${height}" fill="${PAPER}"/>`,
     grid(view, width, height),
-    pair ? "" : `<path d="M0 ${f(toScreen(view, [0, scene.axleY])[1])}H${width}" stroke="${FAINT}" stroke-width="1" stroke-dasharray="6 5"/>`,
-    scene.track.length ? `<path d="${poly(scene.track, view, false)}" fill="none" stroke="${INK}" stroke-width="2" stroke-linejoin="round"/>` : "",
+    pair
+      ? ""
+      : `<path d="M0 ${f(toScreen(view, [0, scene.axleY])[1])}H${width}" stroke="${FAINT}" stroke-width="1" stroke-dasharray="6 5"/>`,
+    scene.track.length
+      ? `<path d="${poly(scene.track, view, false)}" fill="none" stroke="${INK}" stroke-width="2" stroke-linejoin="round"/>`
+      : "",
   ].join("");
   const frames: PosedFrame[] = [];
   for (let k = 0; k < n; k++) {
@@ -85,25 +93,36 @@ export function rollingFrames(result: SolvedGeometry, opts: FrameOptions = {}): 
     const pose = poseAt(result, position);
     const rest = restingAxles(result, pose);
     const wheelAxle: Pt = pair ? [0, 0] : [pose.wheel.x, rest.wheel];
-    const partnerAxle: Pt | undefined = pose.partner ? (pair ? [pose.partner.x, pose.partner.y] : [pose.partner.x, rest.partner ?? pose.partner.y]) : undefined;
+    const partnerAxle: Pt | undefined = pose.partner
+      ? pair
+        ? [pose.partner.x, pose.partner.y]
+        : [pose.partner.x, rest.partner ?? pose.partner.y]
+      : undefined;
     const body: string[] = [];
     if (!pair) {
       const travelled = position * cycle.length;
       const pts: Pt[] = trace.filter((t) => t.along - cycle.start <= travelled).map((t) => [t.x, t.wheel]);
       pts.push(wheelAxle);
-      if (pts.length > 1) body.push(`<path d="${poly(pts, view, false)}" fill="none" stroke="${SOFT}" stroke-width="1.4"/>`);
+      if (pts.length > 1)
+        body.push(`<path d="${poly(pts, view, false)}" fill="none" stroke="${SOFT}" stroke-width="1.4"/>`);
     }
     if (result.partner && pose.partner && partnerAxle) {
       const placed = placeOutline(result.partner.points, -pose.partner.angle, partnerAxle[0], partnerAxle[1]);
-      body.push(`<path d="${poly(placed, view, true)}" fill="rgba(61,90,128,0.08)" stroke="${SOFT}" stroke-width="1.6" stroke-linejoin="round"/>`);
+      body.push(
+        `<path d="${poly(placed, view, true)}" fill="rgba(61,90,128,0.08)" stroke="${SOFT}" stroke-width="1.6" stroke-linejoin="round"/>`,
+      );
       body.push(axleMark(toScreen(view, partnerAxle), SOFT));
     }
     const wheel = placeOutline(result.wheel.points, pose.wheel.angle, wheelAxle[0], wheelAxle[1]);
-    body.push(`<path d="${poly(wheel, view, true)}" fill="rgba(29,53,87,0.08)" stroke="${INK}" stroke-width="1.8" stroke-linejoin="round"/>`);
+    body.push(
+      `<path d="${poly(wheel, view, true)}" fill="rgba(29,53,87,0.08)" stroke="${INK}" stroke-width="1.8" stroke-linejoin="round"/>`,
+    );
     // A spoke from the axle to the outline's first point, so a round wheel is seen to turn.
     const [ax, ay] = toScreen(view, wheelAxle);
     const [mx, my] = toScreen(view, wheel[0]);
-    body.push(`<path d="M${f(ax)} ${f(ay)}L${f(mx)} ${f(my)}" stroke="${INK}" stroke-width="1" stroke-dasharray="4 3"/>`);
+    body.push(
+      `<path d="M${f(ax)} ${f(ay)}L${f(mx)} ${f(my)}" stroke="${INK}" stroke-width="1" stroke-dasharray="4 3"/>`,
+    );
     body.push(axleMark([ax, ay], INK));
     const [cx, cy] = toScreen(view, pose.contact);
     body.push(`<circle cx="${f(cx)}" cy="${f(cy)}" r="3" fill="${INK}" stroke="${PAPER}" stroke-width="1"/>`);

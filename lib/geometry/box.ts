@@ -19,7 +19,10 @@ export function emptyBox(): Box {
 
 /** Bounds of [x, y] points; the empty box when there are none. */
 export function bounds(points: Iterable<readonly [number, number]>): Box {
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    minY = Infinity,
+    maxX = -Infinity,
+    maxY = -Infinity;
   for (const [x, y] of points) {
     if (x < minX) minX = x;
     if (y < minY) minY = y;
@@ -31,7 +34,10 @@ export function bounds(points: Iterable<readonly [number, number]>): Box {
 
 /** Bounds of {x, y} points (Clipper's paths); the empty box when there are none. */
 export function boundsOfXY(points: Iterable<{ readonly x: number; readonly y: number }>): Box {
-  let minX = Infinity, minY = Infinity, maxX = -Infinity, maxY = -Infinity;
+  let minX = Infinity,
+    minY = Infinity,
+    maxX = -Infinity,
+    maxY = -Infinity;
   for (const p of points) {
     if (p.x < minX) minX = p.x;
     if (p.y < minY) minY = p.y;
@@ -71,5 +77,10 @@ export const boxHeight = (b: Box): number => b.maxY - b.minY;
 
 /** The box's corners as a counter-clockwise ring, from (minX, minY). */
 export function boxRing(b: Box): Ring {
-  return [[b.minX, b.minY], [b.maxX, b.minY], [b.maxX, b.maxY], [b.minX, b.maxY]] as Pt[];
+  return [
+    [b.minX, b.minY],
+    [b.maxX, b.minY],
+    [b.maxX, b.maxY],
+    [b.minX, b.maxY],
+  ] as Pt[];
 }

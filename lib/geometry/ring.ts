@@ -36,7 +36,7 @@ export function perimeter(ring: readonly Pt[], closed = true): number {
 /** The ring turning the asked way: a copy, reversed if it turns the other way. */
 export function orient(ring: readonly Pt[], ccw: boolean): Ring {
   const a = signedArea(ring);
-  return (a > 0) === ccw ? ring.slice() : ring.slice().reverse();
+  return a > 0 === ccw ? ring.slice() : ring.slice().reverse();
 }
 
 /** Drops a repeated closing point (exactly equal ones only) and makes the ring counter-clockwise. */

@@ -42,7 +42,11 @@ export const bySeverity = (a: Caution, b: Caution) => SIGNAL_ORDER[a.signal] - S
 /** The message (hazard, consequence, how to avoid it) and its detail (figure, limit, source), for lists that show the detail smaller. */
 export function cautionParts(c: Caution): { signal: Signal; text: string; detail: string } {
   const figures = [c.figure, c.limit].filter(Boolean).join("; ");
-  return { signal: c.signal, text: `${c.hazard} ${c.consequence} ${c.avoid}`, detail: `${figures ? `${figures}. ` : ""}Source: ${c.source}.` };
+  return {
+    signal: c.signal,
+    text: `${c.hazard} ${c.consequence} ${c.avoid}`,
+    detail: `${figures ? `${figures}. ` : ""}Source: ${c.source}.`,
+  };
 }
 
 /** A caution as one paragraph: the message, then its detail in brackets. */

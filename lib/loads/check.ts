@@ -19,7 +19,12 @@ export const DEFAULT_WHEELS = 2;
 /** A person leaning their weight on a piece they push or turn: 200 lbf, the point load ASCE 7-16 §4.5.1 puts on guards, taken by analogy (our choice). */
 export const HAND_LOAD_N = lbfToN(200);
 /** Traction or braking share when none is given: pedalling or braking a ride-on 0.2, pushing or cranking 0.1 (our defaults; the example values of docs/safety.md T7). */
-export const DEFAULT_TRACTION: Record<Use, number> = { "ride-on": 0.2, "push-along": 0.1, "hand-turned": 0.1, display: 0.1 };
+export const DEFAULT_TRACTION: Record<Use, number> = {
+  "ride-on": 0.2,
+  "push-along": 0.1,
+  "hand-turned": 0.1,
+  display: 0.1,
+};
 /** Below this modulus a tread is rubber-like: Hertz (small strain, linear elastic) does not apply (Johnson 1985 §4.1; the threshold is common practice). */
 export const SOFT_MODULUS_GPA = 0.2;
 /** A rounded corner carries the contact only while the patch is small against it: half-width ≤ a tenth of the radius (Hertz's a ≪ R, Johnson §4.1; the tenth is common practice). */
@@ -100,9 +105,15 @@ function wheelLoad(input: LoadsInput): { newtons: number; basis: string } {
     const m = l.riderMassKg ?? DEFAULT_RIDER_KG;
     const f = l.dynamicFactor ?? DEFAULT_DYNAMIC_FACTOR;
     const n = l.wheels ?? DEFAULT_WHEELS;
-    return { newtons: (m * G * f) / n, basis: `rider ${fmt(m, 1)} kg × g × dynamic factor ${fmt(f)} shared by ${n} wheel${n === 1 ? "" : "s"}` };
+    return {
+      newtons: (m * G * f) / n,
+      basis: `rider ${fmt(m, 1)} kg × g × dynamic factor ${fmt(f)} shared by ${n} wheel${n === 1 ? "" : "s"}`,
+    };
   }
-  return { newtons: HAND_LOAD_N, basis: "a person leaning their weight on it: 0.89 kN (200 lbf, by analogy with the ASCE 7-16 §4.5.1 point load)" };
+  return {
+    newtons: HAND_LOAD_N,
+    basis: "a person leaning their weight on it: 0.89 kN (200 lbf, by analogy with the ASCE 7-16 §4.5.1 point load)",
+  };
 }
 
 /** Axle-to-contact distance at axle x (track modes), from the output track polyline; spec units. */
@@ -122,7 +133,12 @@ function rhoAt(result: SolveResult, x: number): number {
   return result.wheel.rMax;
 }
 
-function gripOf(input: LoadsInput, result: SolveResult, V: number, k: number): { grip: GripResult; dynamics: DynamicsResult | null } {
+function gripOf(
+  input: LoadsInput,
+  result: SolveResult,
+  V: number,
+  k: number,
+): { grip: GripResult; dynamics: DynamicsResult | null } {
   const fd = result.check.frictionDemand;
   const tilt = Math.atan(fd.max);
   let share = input.traction ?? DEFAULT_TRACTION[input.use];
@@ -137,12 +153,25 @@ function gripOf(input: LoadsInput, result: SolveResult, V: number, k: number): {
       inertia = input.wheel.densityKgM3 * (input.wheel.treadWidthMm / 1000) * m4;
       share += (inertia * alpha) / rho / V;
     }
-    dynamics = { speedMps: v, omegaRatio: omegaRatio(result.wheel.rMin, result.wheel.rMax), alphaPeak: alpha, inertiaKgM2: inertia };
+    dynamics = {
+      speedMps: v,
+      omegaRatio: omegaRatio(result.wheel.rMin, result.wheel.rMax),
+      alphaPeak: alpha,
+      inertiaKgM2: inertia,
+    };
   }
   const needed = frictionNeeded(tilt, share);
   const available = input.mu ?? (input.tiltDeg !== undefined ? muFromTilt(input.tiltDeg) : null);
   return {
-    grip: { needed, available, at: fd.at, tractionShare: share, marginAsked: GRIP_MARGIN, margin: available === null ? null : available / needed, ok: available === null ? null : available >= GRIP_MARGIN * needed },
+    grip: {
+      needed,
+      available,
+      at: fd.at,
+      tractionShare: share,
+      marginAsked: GRIP_MARGIN,
+      margin: available === null ? null : available / needed,
+      ok: available === null ? null : available >= GRIP_MARGIN * needed,
+    },
     dynamics,
   };
 }
@@ -157,7 +186,10 @@ interface ContactInputs {
 function contactInputs(input: LoadsInput, result: SolveResult, V: number): ContactInputs {
   const w = input.wheel;
   const t = input.track;
-  const eStar = contactModulus({ modulus: w.modulusGpa * 1000, poisson: w.poisson }, { modulus: t.modulusGpa * 1000, poisson: t.poisson });
+  const eStar = contactModulus(
+    { modulus: w.modulusGpa * 1000, poisson: w.poisson },
+    { modulus: t.modulusGpa * 1000, poisson: t.poisson },
+  );
   const length = trackModes.has(result.mode) ? Math.min(w.treadWidthMm, t.widthMm) : w.treadWidthMm;
   const limits = [w.allowableMpa, t.allowableMpa].filter((v): v is number => v !== undefined);
   return { V, length, eStar, allowable: limits.length ? Math.min(...limits) : null };
@@ -167,7 +199,18 @@ function contactOf(input: LoadsInput, result: SolveResult, ci: ContactInputs, k:
   const R = result.check.contactRadius.min * k;
   const at = result.check.contactRadius.at;
   const hertzApplies = input.wheel.modulusGpa >= SOFT_MODULUS_GPA && input.track.modulusGpa >= SOFT_MODULUS_GPA;
-  if (R === 0) return { radiusMm: 0, halfWidthMm: 0, pMaxMpa: null, tauMaxMpa: null, depthMm: 0, at, allowableMpa: ci.allowable, hertzApplies, ok: false };
+  if (R === 0)
+    return {
+      radiusMm: 0,
+      halfWidthMm: 0,
+      pMaxMpa: null,
+      tauMaxMpa: null,
+      depthMm: 0,
+      at,
+      allowableMpa: ci.allowable,
+      hertzApplies,
+      ok: false,
+    };
   const c = lineContact(ci.V, ci.length, combinedRadius(R, Infinity), ci.eStar);
   let ok: boolean | null = ci.allowable === null || !hertzApplies ? null : c.pMax <= ci.allowable;
   const rounded = roundedCorner(input);
@@ -208,7 +251,14 @@ export function cornerRadiusFor(input: LoadsInput, result: SolveResult): number 
     const spec = withCornerRadius(input.spec, rc)!;
     try {
       const r = solve(spec);
-      return contactOf({ ...input, spec }, r, contactInputs(input, r, wheelLoad(input).newtons), result.units === "in" ? 25.4 : 1).ok === true;
+      return (
+        contactOf(
+          { ...input, spec },
+          r,
+          contactInputs(input, r, wheelLoad(input).newtons),
+          result.units === "in" ? 25.4 : 1,
+        ).ok === true
+      );
     } catch {
       return false;
     }
@@ -228,15 +278,20 @@ export function cornerRadiusFor(input: LoadsInput, result: SolveResult): number 
   return Number(Math.min(rc, Math.ceil(hi / step) * step).toFixed(4));
 }
 
-const NIP_SOURCE = "ISO 13854:2017 (a closing gap that reaches zero cannot meet any minimum gap); CPSC Public Playground Safety Handbook §5.3.2.7 (rolling parts enclosed); ISO 13857:2019 (reach distances)";
+const NIP_SOURCE =
+  "ISO 13854:2017 (a closing gap that reaches zero cannot meet any minimum gap); CPSC Public Playground Safety Handbook §5.3.2.7 (rolling parts enclosed); ISO 13857:2019 (reach distances)";
 
 function nipCaution(use: Use, pair: boolean): Caution {
   const guarded = use === "display";
   return {
     check: "nip",
     signal: guarded ? "CAUTION" : "WARNING",
-    hazard: pair ? "Nip where the two wheels turn against each other." : "Pinch point where the wheel meets the track, deepest at every trough.",
-    consequence: pair ? "It can crush and draw in fingers and hair." : "It can crush fingers and toes and catch shoelaces.",
+    hazard: pair
+      ? "Nip where the two wheels turn against each other."
+      : "Pinch point where the wheel meets the track, deepest at every trough.",
+    consequence: pair
+      ? "It can crush and draw in fingers and hair."
+      : "It can crush fingers and toes and catch shoelaces.",
     avoid: guarded
       ? "Keep the guard closed and stop the piece before anyone reaches in."
       : pair
@@ -265,14 +320,19 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
 
   const { grip, dynamics } = gripOf(input, result, V, k);
   const gripFigure = `μ needed ${fmt(grip.needed)}${grip.tractionShare > 0 ? ` with traction H/V = ${fmt(grip.tractionShare)}` : ""}`;
-  const gripSource = "friction cone μ = tan(ψ + atan(H/V)) (Meriam and Kraige, Engineering Mechanics: Statics, friction chapter); margin 1.3: common practice";
+  const gripSource =
+    "friction cone μ = tan(ψ + atan(H/V)) (Meriam and Kraige, Engineering Mechanics: Statics, friction chapter); margin 1.3: common practice";
   if (grip.ok === false)
     cautions.push({
       check: "grip",
       signal: signalFor(use, "WARNING", "CAUTION", "NOTICE"),
       hazard: `The contact needs more grip than the wheel and track give (${fmt(grip.available!)}).`,
-      consequence: use === "ride-on" ? "The wheel may slip out of step with the track, jolt and tip a rider." : "The wheel may slip out of step, jump and jam.",
-      avoid: "Use a higher-grip tread, keep the track clean and dry, lower the drive or braking force, or use a wheel with more sides.",
+      consequence:
+        use === "ride-on"
+          ? "The wheel may slip out of step with the track, jolt and tip a rider."
+          : "The wheel may slip out of step, jump and jam.",
+      avoid:
+        "Use a higher-grip tread, keep the track clean and dry, lower the drive or braking force, or use a wheel with more sides.",
       figure: gripFigure,
       limit: `available μ at least ${GRIP_MARGIN} × needed = ${fmt(GRIP_MARGIN * grip.needed)}`,
       source: gripSource,
@@ -284,7 +344,8 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
       signal: "NOTICE",
       hazard: "No friction figure for this wheel and track.",
       consequence: "Grip cannot be judged.",
-      avoid: "Measure it: tilt a track sample under a loaded tread sample until it slides; μ = tan(slip angle). Enter the angle or μ.",
+      avoid:
+        "Measure it: tilt a track sample under a loaded tread sample until it slides; μ = tan(slip angle). Enter the angle or μ.",
       figure: gripFigure,
       limit: `μ at least ${fmt(GRIP_MARGIN * grip.needed)}`,
       source: "tilt test (ASTM G115 guide to friction measurement); Blau, Tribology International 34 (2001) 585–591",
@@ -293,10 +354,12 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
 
   const ci = contactInputs(input, result, V);
   const contact = contactOf(input, result, ci, k);
-  const hertzSource = "Hertz line contact (K. L. Johnson, Contact Mechanics, 1985, §4.2; R. L. Norton, Machine Design, Example 7-2)";
+  const hertzSource =
+    "Hertz line contact (K. L. Johnson, Contact Mechanics, 1985, §4.2; R. L. Norton, Machine Design, Example 7-2)";
   if (contact.radiusMm === 0) {
     // A rubber-like tread is outside Hertz: no radius can be worked out, only tested.
-    contact.cornerRadiusNeeded = opts.cornerSearch === false || !contact.hertzApplies ? undefined : cornerRadiusFor(input, result);
+    contact.cornerRadiusNeeded =
+      opts.cornerSearch === false || !contact.hertzApplies ? undefined : cornerRadiusFor(input, result);
     const avoid = !contact.hertzApplies
       ? "Needs a corner radius: round the wheel's corners; the tread is rubber-like, so test a sample of it on the track under the wheel load."
       : contact.cornerRadiusNeeded != null
@@ -376,7 +439,8 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
       avoid: `Support it at most ${fmt(Math.floor(deflection.maxSpanMm), 0)} mm apart, or use a deeper or stiffer section.`,
       figure: `${fmt(d.point, 3)} mm (wheel at mid-span) + ${fmt(d.self, 3)} mm (own weight)`,
       limit: `at most ${fmt(limitMm, 3)} mm: L/360${hump !== null ? " and 5 % of the hump height" : ""}`,
-      source: "PL³/48EI and 5wL⁴/384EI (Gere, Mechanics of Materials, 7th ed., Table G-2); L/360: IBC Table 1604.3; 5 % of the hump: common practice",
+      source:
+        "PL³/48EI and 5wL⁴/384EI (Gere, Mechanics of Materials, 7th ed., Table G-2); L/360: IBC Table 1604.3; 5 % of the hump: common practice",
     });
 
   const gaps = Object.entries(input.clearancesMm ?? {}).map(([name, gap]) => judgeGap(name, gap, use));
@@ -403,7 +467,8 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
       avoid: "Change the design before cutting: more sides, or a gentler track.",
       figure: `${fmt(pen.depth * k, 2)} mm`,
       limit: "0 mm",
-      source: "the engine's global collision check (Hall and Wagon, Mathematics Magazine 65 (1992) 283–301: the triangle's road is cut by its vertex)",
+      source:
+        "the engine's global collision check (Hall and Wagon, Mathematics Magazine 65 (1992) 283–301: the triangle's road is cut by its vertex)",
       at: pen.when ?? undefined,
     });
 
@@ -417,7 +482,11 @@ export function checkLoads(input: LoadsInput, solved?: SolveResult, opts: CheckO
     deflection,
     gaps,
     dynamics,
-    engineerLoads: engineerLoads({ riderMassKg: input.load.riderMassKg ?? DEFAULT_RIDER_KG, dynamicFactor: input.load.dynamicFactor ?? DEFAULT_DYNAMIC_FACTOR, use }),
+    engineerLoads: engineerLoads({
+      riderMassKg: input.load.riderMassKg ?? DEFAULT_RIDER_KG,
+      dynamicFactor: input.load.dynamicFactor ?? DEFAULT_DYNAMIC_FACTOR,
+      use,
+    }),
     cautions: cautions.sort(bySeverity),
     disclaimer: DISCLAIMER,
   };

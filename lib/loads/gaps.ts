@@ -24,7 +24,8 @@ export const HAND_MIN = 100;
 export const FOOT_MIN = 120;
 export const MOVING_SMALL = 5;
 
-const SOURCE = "ISO 13854:2017 (finger 25, hand 100, foot 120 mm); ASTM F963 §4.18.1 (a gap that admits a 5 mm rod must admit 13 mm); EN 71-1 Annex A (no gaps of 5–12 mm)";
+const SOURCE =
+  "ISO 13854:2017 (finger 25, hand 100, foot 120 mm); ASTM F963 §4.18.1 (a gap that admits a 5 mm rod must admit 13 mm); EN 71-1 Annex A (no gaps of 5–12 mm)";
 
 /**
  * A gap between a moving part and another part. Under 5 mm no finger enters; from 5 to 25 mm a
@@ -33,10 +34,26 @@ const SOURCE = "ISO 13854:2017 (finger 25, hand 100, foot 120 mm); ASTM F963 §4
  * there; pushed and hand-turned pieces are judged for fingers. Display pieces are behind a guard.
  */
 export function judgeGap(name: string, gap: number, use: Use): GapFinding {
-  if (use === "display") return { name, gap, ok: true, band: "behind the guard", limit: "out of reach (ISO 13857 distances)", source: "ISO 13857:2019" };
-  if (gap < MOVING_SMALL) return { name, gap, ok: true, band: "too narrow for a finger", limit: `under ${MOVING_SMALL} mm`, source: SOURCE };
+  if (use === "display")
+    return {
+      name,
+      gap,
+      ok: true,
+      band: "behind the guard",
+      limit: "out of reach (ISO 13857 distances)",
+      source: "ISO 13857:2019",
+    };
+  if (gap < MOVING_SMALL)
+    return { name, gap, ok: true, band: "too narrow for a finger", limit: `under ${MOVING_SMALL} mm`, source: SOURCE };
   if (gap < FINGER_MIN)
-    return { name, gap, ok: false, band: "finger crush: a finger enters and is crushed as the gap closes", limit: `under ${MOVING_SMALL} mm or at least ${FINGER_MIN} mm`, source: SOURCE };
+    return {
+      name,
+      gap,
+      ok: false,
+      band: "finger crush: a finger enters and is crushed as the gap closes",
+      limit: `under ${MOVING_SMALL} mm or at least ${FINGER_MIN} mm`,
+      source: SOURCE,
+    };
   if (use === "ride-on" && gap < FOOT_MIN) {
     const hand = gap < HAND_MIN;
     return {
@@ -48,5 +65,12 @@ export function judgeGap(name: string, gap: number, use: Use): GapFinding {
       source: SOURCE,
     };
   }
-  return { name, gap, ok: true, band: use === "ride-on" ? "wide enough for a hand and a foot" : "wide enough for a finger", limit: `at least ${use === "ride-on" ? FOOT_MIN : FINGER_MIN} mm`, source: SOURCE };
+  return {
+    name,
+    gap,
+    ok: true,
+    band: use === "ride-on" ? "wide enough for a hand and a foot" : "wide enough for a finger",
+    limit: `at least ${use === "ride-on" ? FOOT_MIN : FINGER_MIN} mm`,
+    source: SOURCE,
+  };
 }

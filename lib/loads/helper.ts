@@ -17,7 +17,10 @@ export interface Suggestion {
   /** The whole design spec to put in the draft (when the design changes). */
   spec?: Record<string, unknown>;
   /** Check inputs to change (tread, span, speed, clearances). */
-  inputs?: Partial<Pick<LoadsInput, "mu" | "tiltDeg" | "speedMps" | "clearancesMm">> & { wheel?: LoadsInput["wheel"]; track?: LoadsInput["track"] };
+  inputs?: Partial<Pick<LoadsInput, "mu" | "tiltDeg" | "speedMps" | "clearancesMm">> & {
+    wheel?: LoadsInput["wheel"];
+    track?: LoadsInput["track"];
+  };
   /** The re-check of the changed design: it passes this check. */
   after: LoadsReport;
 }
@@ -55,7 +58,8 @@ function moreSides(input: LoadsInput, check: CheckId): Suggestion | null {
   for (let n = wheel.sides + 1; n <= MAX_SIDES; n++) {
     const spec = { ...(input.spec as Record<string, unknown>), wheel: { ...wheel, sides: n } };
     const after = tryCheck({ ...input, spec });
-    if (after && passes(after, check)) return { check, change: `Use a wheel with ${n} sides instead of ${wheel.sides}.`, spec, after };
+    if (after && passes(after, check))
+      return { check, change: `Use a wheel with ${n} sides instead of ${wheel.sides}.`, spec, after };
   }
   return null;
 }
@@ -72,10 +76,22 @@ function cornerRadius(input: LoadsInput): Suggestion | null {
 
 function otherTread(input: LoadsInput, check: CheckId): Suggestion | null {
   for (const t of input.treads ?? []) {
-    const wheel = { ...input.wheel, material: t.name, modulusGpa: t.modulusGpa, poisson: t.poisson, allowableMpa: t.allowableMpa ?? input.wheel.allowableMpa };
+    const wheel = {
+      ...input.wheel,
+      material: t.name,
+      modulusGpa: t.modulusGpa,
+      poisson: t.poisson,
+      allowableMpa: t.allowableMpa ?? input.wheel.allowableMpa,
+    };
     const changed: LoadsInput = { ...input, mu: t.mu, tiltDeg: undefined, wheel };
     const after = tryCheck(changed);
-    if (after && passes(after, check)) return { check, change: `Use the tread ${t.name} (μ ${t.mu}).`, inputs: { mu: t.mu, tiltDeg: undefined, wheel }, after };
+    if (after && passes(after, check))
+      return {
+        check,
+        change: `Use the tread ${t.name} (μ ${t.mu}).`,
+        inputs: { mu: t.mu, tiltDeg: undefined, wheel },
+        after,
+      };
   }
   return null;
 }
@@ -86,7 +102,12 @@ function shorterSpan(input: LoadsInput, report: LoadsReport): Suggestion | null 
   const track = { ...input.track, supportSpanMm: span };
   const after = tryCheck({ ...input, track });
   if (!after || !passes(after, "deflection")) return null;
-  return { check: "deflection", change: `Support the track at most ${span} mm apart (now ${input.track.supportSpanMm} mm).`, inputs: { track }, after };
+  return {
+    check: "deflection",
+    change: `Support the track at most ${span} mm apart (now ${input.track.supportSpanMm} mm).`,
+    inputs: { track },
+    after,
+  };
 }
 
 function lowerSpeed(input: LoadsInput): Suggestion | null {
@@ -106,7 +127,12 @@ function lowerSpeed(input: LoadsInput): Suggestion | null {
   const v = Math.floor(lo * 20) / 20;
   const after = at(v);
   if (!after || !passes(after, "grip")) return null;
-  return { check: "grip", change: `Design for at most ${v} m/s (now ${input.speedMps} m/s).`, inputs: { speedMps: v }, after };
+  return {
+    check: "grip",
+    change: `Design for at most ${v} m/s (now ${input.speedMps} m/s).`,
+    inputs: { speedMps: v },
+    after,
+  };
 }
 
 function gapOut(input: LoadsInput, name: string, gap: number): Suggestion | null {
@@ -115,7 +141,14 @@ function gapOut(input: LoadsInput, name: string, gap: number): Suggestion | null
   for (const g of best) {
     const clearancesMm = { ...input.clearancesMm, [name]: g };
     const after = tryCheck({ ...input, clearancesMm });
-    if (after && passes(after, "gap", name)) return { check: "gap", name, change: `Make the ${name} gap ${g} mm (now ${gap} mm).`, inputs: { clearancesMm }, after };
+    if (after && passes(after, "gap", name))
+      return {
+        check: "gap",
+        name,
+        change: `Make the ${name} gap ${g} mm (now ${gap} mm).`,
+        inputs: { clearancesMm },
+        after,
+      };
   }
   return null;
 }

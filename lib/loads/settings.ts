@@ -37,7 +37,13 @@ const DEFAULT_SPAN_MM = 600;
 export function treadsOf(library: LibraryMaterial[]): TreadOption[] {
   return library
     .filter((m) => m.kind === "tread" && m.active !== false)
-    .map((m) => ({ name: m.name, mu: m.frictionStatic, modulusGpa: m.modulusGpa, poisson: m.poisson, ...(m.allowableMpa !== null ? { allowableMpa: m.allowableMpa } : {}) }));
+    .map((m) => ({
+      name: m.name,
+      mu: m.frictionStatic,
+      modulusGpa: m.modulusGpa,
+      poisson: m.poisson,
+      ...(m.allowableMpa !== null ? { allowableMpa: m.allowableMpa } : {}),
+    }));
 }
 
 const opt = (v: number | null) => (v === null ? {} : { allowableMpa: v });
@@ -49,7 +55,14 @@ export function defaultLoadsSettings(library: LibraryMaterial[] = STARTING_LIBRA
     use: "push-along",
     load: {},
     mu: sheet.frictionStatic,
-    wheel: { material: sheet.name, modulusGpa: sheet.modulusGpa, poisson: sheet.poisson, treadWidthMm: sheet.thicknessMm, densityKgM3: sheet.densityKgM3, ...opt(sheet.allowableMpa) },
+    wheel: {
+      material: sheet.name,
+      modulusGpa: sheet.modulusGpa,
+      poisson: sheet.poisson,
+      treadWidthMm: sheet.thicknessMm,
+      densityKgM3: sheet.densityKgM3,
+      ...opt(sheet.allowableMpa),
+    },
     track: {
       material: sheet.name,
       modulusGpa: sheet.modulusGpa,
@@ -64,13 +77,25 @@ export function defaultLoadsSettings(library: LibraryMaterial[] = STARTING_LIBRA
 }
 
 /** Stored settings if they are valid, else the defaults (an old or hand-edited row never breaks a page). */
-export function settingsOrDefault(raw: unknown, library: LibraryMaterial[] = STARTING_LIBRARY): { settings: LoadsSettings; stored: boolean } {
+export function settingsOrDefault(
+  raw: unknown,
+  library: LibraryMaterial[] = STARTING_LIBRARY,
+): { settings: LoadsSettings; stored: boolean } {
   const parsed = raw == null ? null : loadsSettingsSchema.safeParse(raw);
-  return parsed?.success ? { settings: parsed.data, stored: true } : { settings: defaultLoadsSettings(library), stored: false };
+  return parsed?.success
+    ? { settings: parsed.data, stored: true }
+    : { settings: defaultLoadsSettings(library), stored: false };
 }
 
 /** The check's whole input for a spec: settings, the library's treads, and what a cut plan fixes. */
-export function loadsInputFor(spec: unknown, settings: LoadsSettings, library: LibraryMaterial[] = STARTING_LIBRARY, cut?: CutFacts): LoadsInput {
-  const track = cut ? { ...settings.track, widthMm: cut.widthMm, depthMm: cut.depthMm, supportSpanMm: cut.supportSpanMm } : settings.track;
+export function loadsInputFor(
+  spec: unknown,
+  settings: LoadsSettings,
+  library: LibraryMaterial[] = STARTING_LIBRARY,
+  cut?: CutFacts,
+): LoadsInput {
+  const track = cut
+    ? { ...settings.track, widthMm: cut.widthMm, depthMm: cut.depthMm, supportSpanMm: cut.supportSpanMm }
+    : settings.track;
   return { ...settings, track, spec: spec as LoadsInput["spec"], treads: treadsOf(library) };
 }

@@ -34,11 +34,22 @@ export function better(a: Position, b: Position | null): boolean {
  * Reference-point positions where `shape` overlaps none of `placed`: the inner-fit rectangle minus
  * the union of the placed shapes' no-fit polygons (Bennell & Oliveira 2008, §6). Empty when none.
  */
-export function feasibleRegion(lib: ClipperLib, nfps: NoFitCache, shape: number, placed: readonly PlacedShape[], ifp: Box): clipper.Paths {
+export function feasibleRegion(
+  lib: ClipperLib,
+  nfps: NoFitCache,
+  shape: number,
+  placed: readonly PlacedShape[],
+  ifp: Box,
+): clipper.Paths {
   const clip: clipper.Path[] = [];
   for (const p of placed) {
     const nfp = nfps.get(p.shape, shape);
-    if (nfp.box.minX + p.x >= ifp.maxX || nfp.box.maxX + p.x <= ifp.minX || nfp.box.minY + p.y >= ifp.maxY || nfp.box.maxY + p.y <= ifp.minY)
+    if (
+      nfp.box.minX + p.x >= ifp.maxX ||
+      nfp.box.maxX + p.x <= ifp.minX ||
+      nfp.box.minY + p.y >= ifp.maxY ||
+      nfp.box.maxY + p.y <= ifp.minY
+    )
       continue;
     for (const path of nfp.paths) clip.push(path.map((q) => ({ x: q.x + p.x, y: q.y + p.y })));
   }

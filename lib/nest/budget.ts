@@ -35,7 +35,11 @@ export class Budget {
 
   /** True when the search must stop: cancelled, out of time or out of iterations. */
   done(): boolean {
-    return this.aborted || this.elapsed() >= this.seconds || (this.maxIterations !== undefined && this.iterations >= this.maxIterations);
+    return (
+      this.aborted ||
+      this.elapsed() >= this.seconds ||
+      (this.maxIterations !== undefined && this.iterations >= this.maxIterations)
+    );
   }
 
   /** Lets the event loop run if the last pause was long enough ago, and reports progress. */

@@ -19,11 +19,20 @@ export function checkItems(items: readonly NestItem[]): void {
   for (const it of items) {
     if (ids.has(it.id)) throw new Error(`Item id ${JSON.stringify(it.id)} is used twice`);
     ids.add(it.id);
-    if (!Number.isInteger(it.quantity) || it.quantity < 0) throw new Error(`${it.id}: quantity must be a whole number of at least 0`);
+    if (!Number.isInteger(it.quantity) || it.quantity < 0)
+      throw new Error(`${it.id}: quantity must be a whole number of at least 0`);
     total += it.quantity;
-    if (!Array.isArray(it.rotations) || it.rotations.length === 0 || it.rotations.some((r: number) => !Number.isFinite(r)))
+    if (
+      !Array.isArray(it.rotations) ||
+      it.rotations.length === 0 ||
+      it.rotations.some((r: number) => !Number.isFinite(r))
+    )
       throw new Error(`${it.id}: rotations must be a non-empty list of degrees`);
-    if (!Array.isArray(it.polygon) || it.polygon.length < 3 || it.polygon.some((p: readonly number[]) => !Number.isFinite(p[0]) || !Number.isFinite(p[1])))
+    if (
+      !Array.isArray(it.polygon) ||
+      it.polygon.length < 3 ||
+      it.polygon.some((p: readonly number[]) => !Number.isFinite(p[0]) || !Number.isFinite(p[1]))
+    )
       throw new Error(`${it.id}: the polygon needs at least 3 points with finite coordinates`);
     if (!(ringArea(it.polygon) > 0)) throw new Error(`${it.id}: the polygon has zero area`);
   }

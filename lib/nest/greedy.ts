@@ -5,7 +5,12 @@
 import type { Budget } from "./budget";
 import { decode, type Decoded, type DecoderSetup, type Gene } from "./decoder";
 
-export async function greedyLayout(setup: DecoderSetup, order: readonly number[], rotations: (copy: number) => readonly number[], budget: Budget): Promise<{ seq: Gene[]; decoded: Decoded }> {
+export async function greedyLayout(
+  setup: DecoderSetup,
+  order: readonly number[],
+  rotations: (copy: number) => readonly number[],
+  budget: Budget,
+): Promise<{ seq: Gene[]; decoded: Decoded }> {
   const seq: Gene[] = [];
   let partial: Decoded | undefined;
   for (const copy of order) {
@@ -20,7 +25,12 @@ export async function greedyLayout(setup: DecoderSetup, order: readonly number[]
     }
     seq.push(best!.g);
     partial = best!.d;
-    await budget.pause(() => ({ bestUtilisation: 0, placed: seq.length, total: order.length, message: "first layout" }));
+    await budget.pause(() => ({
+      bestUtilisation: 0,
+      placed: seq.length,
+      total: order.length,
+      message: "first layout",
+    }));
   }
   return { seq, decoded: partial ?? decode(setup, seq) };
 }

@@ -33,7 +33,14 @@ function readPolygon(raw: unknown, where: string): Pt[] {
   if (!Array.isArray(data)) fail(`${where}: the shape has no point list ("Data" or "data")`);
   if (data.length > MAX_VERTICES_PER_ITEM + 1) fail(`${where}: more than ${MAX_VERTICES_PER_ITEM} points`);
   const pts = data.map((p, i): Pt => {
-    if (!Array.isArray(p) || p.length < 2 || typeof p[0] !== "number" || typeof p[1] !== "number" || !Number.isFinite(p[0]) || !Number.isFinite(p[1]))
+    if (
+      !Array.isArray(p) ||
+      p.length < 2 ||
+      typeof p[0] !== "number" ||
+      typeof p[1] !== "number" ||
+      !Number.isFinite(p[0]) ||
+      !Number.isFinite(p[1])
+    )
       fail(`${where}: point ${i} is not a pair of finite numbers`);
     return [p[0], p[1]];
   });
@@ -47,10 +54,12 @@ function readPolygon(raw: unknown, where: string): Pt[] {
 
 function readRotations(raw: unknown, where: string): number[] {
   if (raw === undefined) return [0];
-  if (!Array.isArray(raw) || raw.length === 0) fail(`${where}: allowed orientations must be a non-empty list of degrees`);
+  if (!Array.isArray(raw) || raw.length === 0)
+    fail(`${where}: allowed orientations must be a non-empty list of degrees`);
   const out: number[] = [];
   for (const r of raw) {
-    if (typeof r !== "number" || !Number.isFinite(r)) fail(`${where}: orientation ${JSON.stringify(r)} is not a number of degrees`);
+    if (typeof r !== "number" || !Number.isFinite(r))
+      fail(`${where}: orientation ${JSON.stringify(r)} is not a number of degrees`);
     if (!out.includes(r)) out.push(r);
   }
   return out;

@@ -9,7 +9,8 @@
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import { clipper } from "@/lib/geometry/clipper";
 
-const shift = (path: clipper.ReadonlyPath, dx: number, dy: number): clipper.Path => path.map((p) => ({ x: p.x + dx, y: p.y + dy }));
+const shift = (path: clipper.ReadonlyPath, dx: number, dy: number): clipper.Path =>
+  path.map((p) => ({ x: p.x + dx, y: p.y + dy }));
 
 /** A ⊕ P as outer rings (counter-clockwise) and holes (clockwise). Both inputs counter-clockwise. */
 export function minkowskiSum(lib: ClipperLib, a: clipper.ReadonlyPath, p: clipper.ReadonlyPath): clipper.Paths {
@@ -31,7 +32,13 @@ export function reflect(b: clipper.ReadonlyPath): clipper.Path {
 }
 
 /** Area of `fixed` ∩ (`moving` translated by (dx, dy)). */
-function overlapArea(lib: ClipperLib, fixed: clipper.ReadonlyPath, moving: clipper.ReadonlyPath, dx: number, dy: number): number {
+function overlapArea(
+  lib: ClipperLib,
+  fixed: clipper.ReadonlyPath,
+  moving: clipper.ReadonlyPath,
+  dx: number,
+  dy: number,
+): number {
   const out = lib.clipToPaths({
     clipType: clipper.ClipType.Intersection,
     subjectInputs: [{ data: fixed, closed: true }],
@@ -50,9 +57,15 @@ function overlapArea(lib: ClipperLib, fixed: clipper.ReadonlyPath, moving: clipp
  * left by rounding where it does not. Each hole is tried at its vertices; a hole where the shapes
  * overlap there is a sliver and is filled.
  */
-export function noFitPolygon(lib: ClipperLib, fixed: clipper.ReadonlyPath, orbiting: clipper.ReadonlyPath): clipper.Paths {
+export function noFitPolygon(
+  lib: ClipperLib,
+  fixed: clipper.ReadonlyPath,
+  orbiting: clipper.ReadonlyPath,
+): clipper.Paths {
   const sum = minkowskiSum(lib, fixed, reflect(orbiting));
   if (sum.length <= 1) return sum;
   const tolerance = 1e-6 * Math.min(Math.abs(lib.area(fixed)), Math.abs(lib.area(orbiting)));
-  return sum.filter((path) => lib.area(path) > 0 || path.every((q) => overlapArea(lib, fixed, orbiting, q.x, q.y) <= tolerance));
+  return sum.filter(
+    (path) => lib.area(path) > 0 || path.every((q) => overlapArea(lib, fixed, orbiting, q.x, q.y) <= tolerance),
+  );
 }

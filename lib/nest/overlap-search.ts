@@ -115,7 +115,8 @@ export class OverlapSearch {
     this.rowF = new Float64Array(this.n);
     this.rowSign = new Int8Array(this.n);
     const size = this.a.shape.map((_, i) => Math.sqrt(s.set.itemArea[s.copies[i].item]) * s.set.scale);
-    for (let i = 0; i < this.n; i++) for (let j = 0; j < this.n; j++) this.floor[i * this.n + j] = this.t.collisionFloor * Math.min(size[i], size[j]);
+    for (let i = 0; i < this.n; i++)
+      for (let j = 0; j < this.n; j++) this.floor[i * this.n + j] = this.t.collisionFloor * Math.min(size[i], size[j]);
     for (let i = 0; i < this.n; i++) this.updateRow(i);
   }
 
@@ -196,7 +197,8 @@ export class OverlapSearch {
   /** Sum of penetration depths over all pairs, in integer steps. */
   totalOverlap(): number {
     let t = 0;
-    for (let i = 0; i < this.n; i++) for (let j = i + 1; j < this.n; j++) if (this.pd[i * this.n + j] > TOUCH) t += this.pd[i * this.n + j];
+    for (let i = 0; i < this.n; i++)
+      for (let j = i + 1; j < this.n; j++) if (this.pd[i * this.n + j] > TOUCH) t += this.pd[i * this.n + j];
     return t;
   }
 
@@ -241,8 +243,10 @@ export class OverlapSearch {
         if (v < top.v) top = { v, x, y };
       };
       if (shape === a.shape[i]) trial(a.x[i], a.y[i]);
-      for (let k = 0; k < this.t.globalSamples; k++) trial(f.minX + rng.next() * (f.maxX - f.minX), f.minY + rng.next() * (f.maxY - f.minY));
-      for (let k = 0; k < this.t.localSamples; k++) trial(a.x[i] + (rng.next() - 0.5) * size, a.y[i] + (rng.next() - 0.5) * size);
+      for (let k = 0; k < this.t.globalSamples; k++)
+        trial(f.minX + rng.next() * (f.maxX - f.minX), f.minY + rng.next() * (f.maxY - f.minY));
+      for (let k = 0; k < this.t.localSamples; k++)
+        trial(a.x[i] + (rng.next() - 0.5) * size, a.y[i] + (rng.next() - 0.5) * size);
       const refined = this.descend(top, f, size / 8);
       if (refined.v < best.v) best = { shape, ...refined };
       if (best.v === 0) break;
@@ -288,7 +292,16 @@ export class OverlapSearch {
     while (v > 0 && evaluations < this.t.maxDescentEvaluations) {
       let moved = false;
       const h = Math.round(step * Math.SQRT1_2);
-      for (const [dx, dy] of [[step, 0], [-step, 0], [0, step], [0, -step], [h, h], [-h, -h], [h, -h], [-h, h]]) {
+      for (const [dx, dy] of [
+        [step, 0],
+        [-step, 0],
+        [0, step],
+        [0, -step],
+        [h, h],
+        [-h, -h],
+        [h, -h],
+        [-h, h],
+      ]) {
         const nx = clamp(x + dx, f.minX, f.maxX);
         const ny = clamp(y + dy, f.minY, f.maxY);
         if (nx === x && ny === y) continue;
@@ -309,7 +322,11 @@ export class OverlapSearch {
   /** Raises the penalty of every pair still colliding and lets the others decay back towards 1. */
   private penalise(): void {
     const { n } = this;
-    for (let k = 0; k < n * n; k++) this.w[k] = this.pd[k] > TOUCH ? Math.min(this.t.penaltyCap, this.w[k] * this.t.penaltyGrowth) : Math.max(1, this.w[k] * this.t.penaltyDecay);
+    for (let k = 0; k < n * n; k++)
+      this.w[k] =
+        this.pd[k] > TOUCH
+          ? Math.min(this.t.penaltyCap, this.w[k] * this.t.penaltyGrowth)
+          : Math.max(1, this.w[k] * this.t.penaltyDecay);
   }
 
   /**

@@ -23,13 +23,17 @@ export function penetrationDepth(nfp: Nfp, px: number, py: number): number {
   if (!inside) return 0;
   let best = Infinity;
   for (let k = 0; k < e.length; k += 4) {
-    const x1 = e[k], y1 = e[k + 1];
-    const dx = e[k + 2] - x1, dy = e[k + 3] - y1;
-    const wx = px - x1, wy = py - y1;
+    const x1 = e[k],
+      y1 = e[k + 1];
+    const dx = e[k + 2] - x1,
+      dy = e[k + 3] - y1;
+    const wx = px - x1,
+      wy = py - y1;
     const len2 = dx * dx + dy * dy;
     let t = len2 > 0 ? (wx * dx + wy * dy) / len2 : 0;
     t = t < 0 ? 0 : t > 1 ? 1 : t;
-    const ex = wx - t * dx, ey = wy - t * dy;
+    const ex = wx - t * dx,
+      ey = wy - t * dy;
     const d2 = ex * ex + ey * ey;
     if (d2 < best) best = d2;
   }

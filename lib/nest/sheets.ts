@@ -28,9 +28,11 @@ export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResu
   const { width, height } = input.sheet ?? ({} as SheetNestInput["sheet"]);
   const { margin, spacing } = input;
   const units = input.units ?? "mm";
-  if (!(width > 0 && height > 0 && Number.isFinite(width) && Number.isFinite(height))) throw new Error("The sheet width and height must be positive numbers");
+  if (!(width > 0 && height > 0 && Number.isFinite(width) && Number.isFinite(height)))
+    throw new Error("The sheet width and height must be positive numbers");
   if (!(margin >= 0 && Number.isFinite(margin))) throw new Error("The edge margin must be zero or a positive number");
-  if (!(spacing >= 0 && Number.isFinite(spacing))) throw new Error("The part spacing must be zero or a positive number");
+  if (!(spacing >= 0 && Number.isFinite(spacing)))
+    throw new Error("The part spacing must be zero or a positive number");
   const maxSheets = input.maxSheets ?? Infinity;
   if (!(maxSheets >= 1)) throw new Error("maxSheets must be at least 1");
 
@@ -48,7 +50,9 @@ export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResu
     maxX: Math.round((width - margin) * S) + half,
     maxY: Math.round((height - margin) * S) + half,
   };
-  const fitting = items.map((_, i) => set.shapeOf[i].map((sh, k) => (innerFitRectangle(container, set.shapes[sh].box) ? k : -1)).filter((k) => k >= 0));
+  const fitting = items.map((_, i) =>
+    set.shapeOf[i].map((sh, k) => (innerFitRectangle(container, set.shapes[sh].box) ? k : -1)).filter((k) => k >= 0),
+  );
 
   const unplaced: SheetNestResult["unplaced"] = [];
   const usableW = fmt(Math.max(0, width - 2 * margin));
@@ -64,7 +68,14 @@ export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResu
     });
   });
 
-  const setup: DecoderSetup = { lib, set, nfps, copies, container, maxBins: Number.isFinite(maxSheets) ? maxSheets : Math.max(1, active.length) };
+  const setup: DecoderSetup = {
+    lib,
+    set,
+    nfps,
+    copies,
+    container,
+    maxBins: Number.isFinite(maxSheets) ? maxSheets : Math.max(1, active.length),
+  };
   const sheetArea = width * height;
   const rotations = (copy: number) => fitting[copies[copy].item];
   const itemOf = (copy: number) => copies[copy].item;
@@ -83,7 +94,8 @@ export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResu
     let cur = best;
     const lahc = new LateAcceptance(HISTORY, cur.cost);
     const rng = seededRandom(input.seed ?? 1);
-    const placedArea = (seq: Gene[], d: Decoded) => d.steps.reduce((s, st, k) => (st.bin >= 0 ? s + set.itemArea[copies[seq[k].copy].item] : s), 0);
+    const placedArea = (seq: Gene[], d: Decoded) =>
+      d.steps.reduce((s, st, k) => (st.bin >= 0 ? s + set.itemArea[copies[seq[k].copy].item] : s), 0);
     while (!budget.done() && order.length > 1) {
       const mv = neighbour(cur.seq, cur.decoded, rotations, itemOf, rng);
       const d = decode(setup, mv.seq, mv.from, cur.decoded);
@@ -112,10 +124,21 @@ export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResu
       const c = copies[b.seq[k].copy];
       const it = items[c.item];
       if (st.bin < 0) {
-        unplaced.push({ id: it.id, copy: c.index, reason: `${it.id} (copy ${c.index + 1}) found no room on the ${maxSheets} sheet(s) allowed` });
+        unplaced.push({
+          id: it.id,
+          copy: c.index,
+          reason: `${it.id} (copy ${c.index + 1}) found no room on the ${maxSheets} sheet(s) allowed`,
+        });
         return;
       }
-      const p: SheetPlacement = { id: it.id, copy: c.index, rotation: set.shapes[st.shape].rotation, x: st.x / S, y: st.y / S, sheet: st.bin };
+      const p: SheetPlacement = {
+        id: it.id,
+        copy: c.index,
+        rotation: set.shapes[st.shape].rotation,
+        x: st.x / S,
+        y: st.y / S,
+        sheet: st.bin,
+      };
       sheets[st.bin].placements.push(p);
       sheets[st.bin].utilisation += set.itemArea[c.item] / sheetArea;
       placedArea += set.itemArea[c.item];
@@ -130,6 +153,12 @@ export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResu
     seconds: budget.elapsed(),
     cancelled: budget.aborted,
   };
-  budget.report({ fraction: 1, bestUtilisation: result.utilisation, placed: copies.length - unplaced.length, total: copies.length, message: "done" });
+  budget.report({
+    fraction: 1,
+    bestUtilisation: result.utilisation,
+    placed: copies.length - unplaced.length,
+    total: copies.length,
+    message: "done",
+  });
   return result;
 }

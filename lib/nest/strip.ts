@@ -49,7 +49,10 @@ export const DEFAULT_STRIP_TUNING: StripTuning = {
 /** The overlap search keeps n × n pair tables; above this many copies the first layout is returned. */
 const MAX_SEARCH_COPIES = 1500;
 
-export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEFAULT_STRIP_TUNING): Promise<StripNestResult> {
+export async function nestStrip(
+  input: StripNestInput,
+  tuning: StripTuning = DEFAULT_STRIP_TUNING,
+): Promise<StripNestResult> {
   const budget = new Budget(input.seconds, input.signal, input.maxIterations, input.onProgress);
   checkItems(input.items);
   const height = input.height;
@@ -62,13 +65,26 @@ export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEF
   const boxes = items.map((it) => it.rotations.map((r) => bounds(rotateRing(it.polygon, r))));
 
   // Rotations that fit across the strip; an item with none cannot be nested at all.
-  const usable = items.map((_, i) => boxes[i].map((b, k) => (boxHeight(b) <= height * (1 + 1e-9) ? k : -1)).filter((k) => k >= 0));
+  const usable = items.map((_, i) =>
+    boxes[i].map((b, k) => (boxHeight(b) <= height * (1 + 1e-9) ? k : -1)).filter((k) => k >= 0),
+  );
   usable.forEach((ks, i) => {
     if (ks.length > 0) return;
     const b = boxes[i][0];
-    throw new Error(`${items[i].id} is ${fmt(boxWidth(b))} × ${fmt(boxHeight(b))}; it does not fit across the strip (${fmt(height)}) in any allowed rotation`);
+    throw new Error(
+      `${items[i].id} is ${fmt(boxWidth(b))} × ${fmt(boxHeight(b))}; it does not fit across the strip (${fmt(height)}) in any allowed rotation`,
+    );
   });
-  if (total === 0) return { utilisation: 0, length: 0, placed: 0, seconds: budget.elapsed(), iterations: 0, cancelled: budget.aborted, placements: [] };
+  if (total === 0)
+    return {
+      utilisation: 0,
+      length: 0,
+      placed: 0,
+      seconds: budget.elapsed(),
+      iterations: 0,
+      cancelled: budget.aborted,
+      placements: [],
+    };
 
   const lib = await loadClipper();
   const area = items.map((it) => ringArea(it.polygon));
@@ -84,7 +100,12 @@ export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEF
     const set = buildShapes(lib, items, S, spacing);
     const nfps = new NoFitCache(lib, set);
     const half = Math.round((spacing / 2) * S);
-    const containerFor = (len: number) => ({ minX: -half, minY: -half, maxX: Math.round(len * S) + half, maxY: Math.round(height * S) + half });
+    const containerFor = (len: number) => ({
+      minX: -half,
+      minY: -half,
+      maxX: Math.round(len * S) + half,
+      maxY: Math.round(height * S) + half,
+    });
     const setup: DecoderSetup = { lib, set, nfps, copies, container: containerFor(length), maxBins: 1 };
     const order = copies.map((_, i) => i).sort((a, b) => area[copies[b].item] - area[copies[a].item] || a - b);
     const first = await greedyLayout(setup, order, (copy) => usable[copies[copy].item], budget);
@@ -104,12 +125,21 @@ export async function nestStrip(input: StripNestInput, tuning: StripTuning = DEF
     let shrink = tuning.firstShrink;
     let failed = false;
     const pause = () =>
-      budget.pause(() => ({ bestUtilisation: partArea / (height * bestLength), placed: total, total, message: `strip length ${fmt(bestLength)}` }));
+      budget.pause(() => ({
+        bestUtilisation: partArea / (height * bestLength),
+        placed: total,
+        total,
+        message: `strip length ${fmt(bestLength)}`,
+      }));
     // No layout is shorter than the area over the height, nor than the widest part at its narrowest.
     const lowerBound = Math.max(partArea / height, ...copies.map((c) => widthOf(c.item) - spacing));
     while (!budget.done() && total <= MAX_SEARCH_COPIES && bestLength > lowerBound * (1 + 1e-9)) {
       const target = Math.max(lowerBound, bestLength * (1 - shrink));
-      const search = new OverlapSearch({ lib, set, nfps, copies, shapesOf, container: containerFor(target), rng }, best, tuning.separation);
+      const search = new OverlapSearch(
+        { lib, set, nfps, copies, shapesOf, container: containerFor(target), rng },
+        best,
+        tuning.separation,
+      );
       if (failed) for (let k = 0; k < tuning.swapsAfterFailure; k++) search.swapTwo();
       const ok = await search.run(budget, tuning.maxStall, pause);
       failed = !ok;

@@ -34,7 +34,8 @@ export function readCsv(text: string): ReadResult {
       comments++;
       continue;
     }
-    const d: Delim = delim ?? (line.includes("\t") ? "\t" : line.includes(";") ? ";" : line.includes(",") ? "," : "space");
+    const d: Delim =
+      delim ?? (line.includes("\t") ? "\t" : line.includes(";") ? ";" : line.includes(",") ? "," : "space");
     let cells = split(line, d);
     if (cells.length === 3 && cells[2] === "" && d !== "space") cells = cells.slice(0, 2); // a trailing separator
     const numeric = cells.map((c) => NUMBER.test(d === ";" && /^[+-]?\d*,\d+$/.test(c) ? c.replace(",", ".") : c));
@@ -48,7 +49,9 @@ export function readCsv(text: string): ReadResult {
     }
     delim = d;
     if (cells.length !== 2)
-      fail(`CSV line ${no}: expected two numbers (x, y) but found ${cells.length} column${cells.length === 1 ? "" : "s"} ("${line.slice(0, 40)}").`);
+      fail(
+        `CSV line ${no}: expected two numbers (x, y) but found ${cells.length} column${cells.length === 1 ? "" : "s"} ("${line.slice(0, 40)}").`,
+      );
     const xy: number[] = [];
     for (let c = 0; c < 2; c++) {
       let cell = cells[c];
@@ -62,12 +65,19 @@ export function readCsv(text: string): ReadResult {
       xy.push(v);
     }
     if (points.length >= MAX_OUTPUT_POINTS + 1)
-      fail(`The CSV has more than ${MAX_OUTPUT_POINTS.toLocaleString("en-US")} points (the engine's limit); the extra ones start at line ${no}.`);
+      fail(
+        `The CSV has more than ${MAX_OUTPUT_POINTS.toLocaleString("en-US")} points (the engine's limit); the extra ones start at line ${no}.`,
+      );
     points.push([xy[0], xy[1]]);
   }
   if (points.length === 0) fail("The CSV has no rows of numbers.");
   if (decimalComma) notes.push("decimal commas read (semicolon-separated columns)");
   if (comments) notes.push(`skipped ${comments} comment line${comments === 1 ? "" : "s"} starting with #`);
-  if (units === "unknown") notes.push("units unknown: CSV points carry none (a header such as \"x (mm), y (mm)\" names them)");
-  return { subpaths: [{ points, closed: false, vertexList: true, arcs: 0, curves: 0, label: "the CSV points" }], units, notes };
+  if (units === "unknown")
+    notes.push('units unknown: CSV points carry none (a header such as "x (mm), y (mm)" names them)');
+  return {
+    subpaths: [{ points, closed: false, vertexList: true, arcs: 0, curves: 0, label: "the CSV points" }],
+    units,
+    notes,
+  };
 }

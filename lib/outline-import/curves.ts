@@ -30,7 +30,15 @@ function steps(raw: number, min: number, budget: PointBudget, where: () => strin
 }
 
 /** Points after p0 (p3 last) of a cubic with already-transformed control points. */
-export function flattenCubic(p0: Pt, p1: Pt, p2: Pt, p3: Pt, tol: number, budget: PointBudget, where: () => string): Pt[] {
+export function flattenCubic(
+  p0: Pt,
+  p1: Pt,
+  p2: Pt,
+  p3: Pt,
+  tol: number,
+  budget: PointBudget,
+  where: () => string,
+): Pt[] {
   const d1 = Math.hypot(p0[0] - 2 * p1[0] + p2[0], p0[1] - 2 * p1[1] + p2[1]);
   const d2 = Math.hypot(p1[0] - 2 * p2[0] + p3[0], p1[1] - 2 * p2[1] + p3[1]);
   const n = steps(Math.sqrt((3 * Math.max(d1, d2)) / (4 * tol)), 1, budget, where);

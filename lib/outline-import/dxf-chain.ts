@@ -18,10 +18,12 @@ export function chain(pieces: Piece[], tol: number, notes: string[]): Subpath[] 
   const key = (p: Pt, dx = 0, dy = 0) => {
     const gx = Math.floor(p[0] / cell) + dx;
     const gy = Math.floor(p[1] / cell) + dy;
-    if (!Number.isFinite(gx) || !Number.isFinite(gy)) fail("The DXF's coordinates are too large for the tolerance; use a larger tolerance.");
+    if (!Number.isFinite(gx) || !Number.isFinite(gy))
+      fail("The DXF's coordinates are too large for the tolerance; use a larger tolerance.");
     return `${gx},${gy}`;
   };
-  const endOf = (i: number, end: 0 | 1): Pt => (end === 0 ? pieces[i].points[0] : pieces[i].points[pieces[i].points.length - 1]);
+  const endOf = (i: number, end: 0 | 1): Pt =>
+    end === 0 ? pieces[i].points[0] : pieces[i].points[pieces[i].points.length - 1];
   pieces.forEach((_, i) => {
     for (const end of [0, 1] as const) {
       const k = key(endOf(i, end));
@@ -35,7 +37,8 @@ export function chain(pieces: Piece[], tol: number, notes: string[]): Subpath[] 
     const found: Array<{ piece: number; end: 0 | 1 }> = [];
     for (let dx = -1; dx <= 1; dx++)
       for (let dy = -1; dy <= 1; dy++)
-        for (const c of grid.get(key(p, dx, dy)) ?? []) if (!used[c.piece] && dist(endOf(c.piece, c.end), p) <= tol) found.push(c);
+        for (const c of grid.get(key(p, dx, dy)) ?? [])
+          if (!used[c.piece] && dist(endOf(c.piece, c.end), p) <= tol) found.push(c);
     return found;
   };
   const out: Subpath[] = [];
@@ -76,8 +79,17 @@ export function chain(pieces: Piece[], tol: number, notes: string[]): Subpath[] 
     }
     const pts = head.reverse().concat(tail);
     const closed = dist(pts[0], pts[pts.length - 1]) <= tol && pts.length > 2;
-    out.push({ points: pts, closed, arcs, curves: 0, label: `the chain of ${count} LINE/ARC piece${count === 1 ? "" : "s"} that includes ${first}` });
+    out.push({
+      points: pts,
+      closed,
+      arcs,
+      curves: 0,
+      label: `the chain of ${count} LINE/ARC piece${count === 1 ? "" : "s"} that includes ${first}`,
+    });
   }
-  if (out.length > 1) notes.push(`the LINE and ARC entities form ${out.length} separate chains (joined where ends lie within ${fmt(tol)})`);
+  if (out.length > 1)
+    notes.push(
+      `the LINE and ARC entities form ${out.length} separate chains (joined where ends lie within ${fmt(tol)})`,
+    );
   return out;
 }

@@ -10,7 +10,14 @@
 // read CIRCLE's, and names the others three ways) and an ARC's angles in degrees as written (so a
 // full turn stays exactly 360° when the sweep is worked out).
 
-import DxfParser, { type IArcEntity, type ICircleEntity, type IEntity, type ILineEntity, type ILwpolylineEntity, type IPolylineEntity } from "dxf-parser";
+import DxfParser, {
+  type IArcEntity,
+  type ICircleEntity,
+  type IEntity,
+  type ILineEntity,
+  type ILwpolylineEntity,
+  type IPolylineEntity,
+} from "dxf-parser";
 import { fail, fmt, PointBudget, type Pt, type Subpath } from "./common";
 import { flattenArc, type CentreArc } from "./curves";
 import type { Piece } from "./dxf-chain";
@@ -45,7 +52,8 @@ function checkLwpolyline(e: Entity): number {
     else if (p.code === 20) {
       if (!hasY.length) fail(`DXF line ${p.line}: a y (group 20) before any x (group 10) in the LWPOLYLINE.`);
       hasY[hasY.length - 1] = true;
-    } else if (p.code === 42 && !hasY.length) fail(`DXF line ${p.line}: a bulge (group 42) before any vertex in the LWPOLYLINE.`);
+    } else if (p.code === 42 && !hasY.length)
+      fail(`DXF line ${p.line}: a bulge (group 42) before any vertex in the LWPOLYLINE.`);
   }
   const missing = hasY.indexOf(false);
   if (missing >= 0) fail(`DXF line ${e.line}: vertex ${missing + 1} of the LWPOLYLINE has an x but no y.`);
@@ -55,10 +63,12 @@ function checkLwpolyline(e: Entity): number {
 /** What dxf-parser does not check, refused with the line; returns an LWPOLYLINE's vertex count. */
 function checkEntity(e: Entity): number {
   checkNumbers(e.pairs, e.type);
-  for (const code of REQUIRED[e.type] ?? []) if (!e.pairs.some((p) => p.code === code)) fail(`DXF line ${e.line}: the ${e.type} has no group ${code}.`);
+  for (const code of REQUIRED[e.type] ?? [])
+    if (!e.pairs.some((p) => p.code === code)) fail(`DXF line ${e.line}: the ${e.type} has no group ${code}.`);
   for (const code of POINTS[e.type] ?? [])
     e.pairs.forEach((p, i) => {
-      if (p.code === code && e.pairs[i + 1]?.code !== code + 10) fail(`DXF line ${p.line}: in the ${e.type}, group ${code} must be followed by group ${code + 10}.`);
+      if (p.code === code && e.pairs[i + 1]?.code !== code + 10)
+        fail(`DXF line ${p.line}: in the ${e.type}, group ${code} must be followed by group ${code + 10}.`);
     });
   for (const v of e.vertices) {
     checkNumbers(v.pairs, "VERTEX");
@@ -110,12 +120,21 @@ function ocs(e: Entity, scale: number): Affine {
   const len = Math.hypot(nx, ny, nz);
   if (!(len > 0)) fail(`DXF line ${e.line}: the ${e.type} has a zero extrusion direction.`);
   if (Math.abs(nx / len) > 1e-9 || Math.abs(ny / len) > 1e-9)
-    fail(`DXF line ${e.line}: the ${e.type} lies in a tilted plane (extrusion ${fmt(nx)}, ${fmt(ny)}, ${fmt(nz)}); only drawings in the XY plane are read.`);
+    fail(
+      `DXF line ${e.line}: the ${e.type} lies in a tilted plane (extrusion ${fmt(nx)}, ${fmt(ny)}, ${fmt(nz)}); only drawings in the XY plane are read.`,
+    );
   return [nz > 0 ? scale : -scale, 0, 0, scale, 0, 0];
 }
 
 /** Points after a, ending at b, of the bulged segment a → b (bulge = tan(θ/4)). */
-function bulgeTo(a: Pt, b: Pt, bulge: number, m: Affine, c: EntityContext, where: () => string): { pts: Pt[]; arc: boolean } {
+function bulgeTo(
+  a: Pt,
+  b: Pt,
+  bulge: number,
+  m: Affine,
+  c: EntityContext,
+  where: () => string,
+): { pts: Pt[]; arc: boolean } {
   const chord = dist(a, b);
   if (bulge === 0 || chord === 0) {
     c.budget.take(1, where);
@@ -153,15 +172,28 @@ function polyline(verts: Vertex[], closed: boolean, m: Affine, label: string, c:
 
 function lwpolyline(e: Entity, p: ILwpolylineEntity, vertices: number, label: string, c: EntityContext): void {
   const verts = p.vertices ?? [];
-  if (verts.length !== vertices || verts.some((v) => typeof v.x !== "number" || typeof v.y !== "number")) fail(`DXF line ${e.line}: the LWPOLYLINE's vertices could not be read (after each x, group 10, only groups 20, 30, 40, 41 and 42 may follow).`);
-  polyline(verts.map((v) => ({ p: [v.x, v.y] as Pt, bulge: v.bulge ?? 0 })), p.shape === true, ocs(e, c.scale), label, c);
+  if (verts.length !== vertices || verts.some((v) => typeof v.x !== "number" || typeof v.y !== "number"))
+    fail(
+      `DXF line ${e.line}: the LWPOLYLINE's vertices could not be read (after each x, group 10, only groups 20, 30, 40, 41 and 42 may follow).`,
+    );
+  polyline(
+    verts.map((v) => ({ p: [v.x, v.y] as Pt, bulge: v.bulge ?? 0 })),
+    p.shape === true,
+    ocs(e, c.scale),
+    label,
+    c,
+  );
 }
 
 function polylineEntity(e: Entity, p: IPolylineEntity, label: string, c: EntityContext): void {
-  if ((p.vertices ?? []).length !== e.vertices.length) fail(`DXF line ${e.line}: the POLYLINE's vertices could not be read.`);
+  if ((p.vertices ?? []).length !== e.vertices.length)
+    fail(`DXF line ${e.line}: the POLYLINE's vertices could not be read.`);
   if (p.is3dPolygonMesh || p.isPolyfaceMesh) return c.ignore(e, " mesh");
-  if (p.includesCurveFitVertices || p.includesSplineFitVertices) c.notes.push(`${label} is curve- or spline-fitted; its fitted vertices are used`);
-  const verts = p.vertices.filter((v) => !v.splineControlPoint).map((v) => ({ p: [v.x, v.y] as Pt, bulge: v.bulge ?? 0 }));
+  if (p.includesCurveFitVertices || p.includesSplineFitVertices)
+    c.notes.push(`${label} is curve- or spline-fitted; its fitted vertices are used`);
+  const verts = p.vertices
+    .filter((v) => !v.splineControlPoint)
+    .map((v) => ({ p: [v.x, v.y] as Pt, bulge: v.bulge ?? 0 }));
   // A 3-D polyline's vertices are world coordinates; a 2-D one's are in its OCS.
   const m: Affine = p.is3dPolyline ? [c.scale, 0, 0, c.scale, 0, 0] : ocs(e, c.scale);
   polyline(verts, p.shape === true, m, label, c);
@@ -179,7 +211,11 @@ function arcOrCircle(e: Entity, p: IArcEntity | ICircleEntity, label: string, c:
   const r = p.radius;
   if (!(r > 0)) fail(`DXF line ${e.line}: the ${e.type} has a radius of ${fmt(r)}; it must be positive.`);
   const { x: cx, y: cy } = p.center;
-  const degrees = (code: number) => num(e.pairs.find((q) => q.code === code)!, e.type);
+  const degrees = (code: number) =>
+    num(
+      e.pairs.find((q) => q.code === code)!,
+      e.type,
+    );
   const a0 = e.type === "ARC" ? (degrees(50) * Math.PI) / 180 : 0;
   let sweep = 2 * Math.PI;
   if (e.type === "ARC") {
@@ -190,7 +226,9 @@ function arcOrCircle(e: Entity, p: IArcEntity | ICircleEntity, label: string, c:
   }
   const arc: CentreArc = { cx, cy, rx: r, ry: r, phi: 0, theta1: a0, dtheta: sweep };
   c.budget.take(1, () => label);
-  const pts = [apply(m, cx + r * Math.cos(a0), cy + r * Math.sin(a0))].concat(flattenArc(arc, m, c.tol, c.budget, () => label));
+  const pts = [apply(m, cx + r * Math.cos(a0), cy + r * Math.sin(a0))].concat(
+    flattenArc(arc, m, c.tol, c.budget, () => label),
+  );
   if (e.type === "CIRCLE") {
     pts[pts.length - 1] = pts[0];
     c.subpaths.push({ points: pts, closed: true, arcs: 1, curves: 0, label });

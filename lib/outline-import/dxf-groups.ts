@@ -41,8 +41,10 @@ export function pairsOf(text: string): Pair[] {
   const pairs: Pair[] = [];
   for (let k = 0; k < lines.length; k += 2) {
     const codeText = lines[k].trim();
-    if (!/^-?\d{1,4}$/.test(codeText)) fail(`DXF line ${k + 1}: expected a group code (a whole number), found "${codeText.slice(0, 30)}".`);
-    if (k + 1 >= lines.length) fail(`DXF line ${k + 1}: group code ${codeText} has no value line; the file may be cut short.`);
+    if (!/^-?\d{1,4}$/.test(codeText))
+      fail(`DXF line ${k + 1}: expected a group code (a whole number), found "${codeText.slice(0, 30)}".`);
+    if (k + 1 >= lines.length)
+      fail(`DXF line ${k + 1}: group code ${codeText} has no value line; the file may be cut short.`);
     pairs.push({ code: Number(codeText), value: lines[k + 1].trim(), line: k + 1 });
   }
   return pairs;
@@ -50,7 +52,8 @@ export function pairsOf(text: string): Pair[] {
 
 /** A pair's value as a number, or a refusal naming its line. */
 export function num(p: Pair, type: string): number {
-  if (!NUMBER.test(p.value)) fail(`DXF line ${p.line + 1}: group ${p.code} of the ${type} should be a number, found "${p.value.slice(0, 30)}".`);
+  if (!NUMBER.test(p.value))
+    fail(`DXF line ${p.line + 1}: group ${p.code} of the ${type} should be a number, found "${p.value.slice(0, 30)}".`);
   const v = Number(p.value);
   if (!Number.isFinite(v)) fail(`DXF line ${p.line + 1}: the number "${p.value.slice(0, 30)}" is out of range.`);
   return v;
@@ -72,7 +75,9 @@ function entitiesOf(pairs: Pair[], from: number, to: number): Entity[] {
       continue;
     }
     if (++count > MAX_DXF_ENTITIES)
-      fail(`The DXF has more than ${MAX_DXF_ENTITIES.toLocaleString("en-US")} entities, the most the importer reads; simplify the drawing.`);
+      fail(
+        `The DXF has more than ${MAX_DXF_ENTITIES.toLocaleString("en-US")} entities, the most the importer reads; simplify the drawing.`,
+      );
     current = { type: q.value, line: q.line, pairs: [], vertices: [] };
     if (polyline && q.value === "VERTEX") polyline.vertices.push(current);
     else if (polyline && q.value === "SEQEND") polyline = null;
@@ -102,20 +107,25 @@ export function sectionsOf(pairs: Pair[]): Sections {
       out.sawEof = true;
       break;
     }
-    if (!(p.code === 0 && p.value === "SECTION")) fail(`DXF line ${p.line}: expected "0 / SECTION" or "0 / EOF", found "${p.code} / ${p.value.slice(0, 30)}".`);
+    if (!(p.code === 0 && p.value === "SECTION"))
+      fail(`DXF line ${p.line}: expected "0 / SECTION" or "0 / EOF", found "${p.code} / ${p.value.slice(0, 30)}".`);
     const nm = pairs[k + 1];
     if (!nm || nm.code !== 2) fail(`DXF line ${p.line + 2}: a SECTION must be followed by its name (group code 2).`);
     const name = nm.value;
     const start = k + 2;
     let end = start;
     while (end < pairs.length && !(pairs[end].code === 0 && pairs[end].value === "ENDSEC")) end++;
-    if (end >= pairs.length) fail(`The DXF ends inside the ${name} section that starts on line ${p.line} (no ENDSEC); the file may be cut short.`);
+    if (end >= pairs.length)
+      fail(
+        `The DXF ends inside the ${name} section that starts on line ${p.line} (no ENDSEC); the file may be cut short.`,
+      );
     for (let q = start; q < end; q++) {
       const g = pairs[q];
       if (name === "HEADER" && g.code === 9 && g.value === "$INSUNITS") {
         const v = pairs[q + 1];
         if (v && v.code === 70) {
-          if (!/^[+-]?\d+$/.test(v.value)) fail(`DXF line ${v.line + 1}: $INSUNITS should be a whole number, found "${v.value.slice(0, 30)}".`);
+          if (!/^[+-]?\d+$/.test(v.value))
+            fail(`DXF line ${v.line + 1}: $INSUNITS should be a whole number, found "${v.value.slice(0, 30)}".`);
           out.insunits = Number(v.value);
         }
       }

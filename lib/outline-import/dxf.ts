@@ -39,7 +39,10 @@ function unitsOf(insunits: number | null): { units: Units; scale: number; note: 
     return {
       units: u.units,
       scale: u.scale,
-      note: u.scale === 1 ? `units ${u.units} ($INSUNITS ${insunits})` : `drawing units ${u.name} ($INSUNITS ${insunits}) converted to ${u.units}; the tolerance is taken in ${u.units}`,
+      note:
+        u.scale === 1
+          ? `units ${u.units} ($INSUNITS ${insunits})`
+          : `drawing units ${u.name} ($INSUNITS ${insunits}) converted to ${u.units}; the tolerance is taken in ${u.units}`,
     };
   const note =
     insunits === null
@@ -56,7 +59,8 @@ export function readDxf(text: string, tol: number, budget: PointBudget): ReadRes
   if (!sections.sawEof) notes.push("the DXF has no EOF marker after its last section");
   const { units, scale, note } = unitsOf(sections.insunits);
   notes.push(note);
-  if (sections.blocksWithGeometry) notes.push(`ignored geometry inside block definitions (BLOCKS section); INSERT references are not followed`);
+  if (sections.blocksWithGeometry)
+    notes.push(`ignored geometry inside block definitions (BLOCKS section); INSERT references are not followed`);
 
   const ignored = new Map<string, { count: number; line: number }>();
   const c: EntityContext = {
@@ -74,7 +78,9 @@ export function readDxf(text: string, tol: number, budget: PointBudget): ReadRes
   };
   readEntities(sections.entities, c);
   for (const [key, s] of ignored)
-    notes.push(`ignored ${s.count} ${key} ${s.count === 1 ? "entity" : "entities"} (first on DXF line ${s.line}); only LWPOLYLINE, POLYLINE, LINE, ARC and CIRCLE are read`);
+    notes.push(
+      `ignored ${s.count} ${key} ${s.count === 1 ? "entity" : "entities"} (first on DXF line ${s.line}); only LWPOLYLINE, POLYLINE, LINE, ARC and CIRCLE are read`,
+    );
   if (c.pieces.length) c.subpaths.push(...chain(c.pieces, tol, notes));
   return { subpaths: c.subpaths, units, notes };
 }

@@ -26,7 +26,8 @@ export interface FinishOptions {
 function dedupe(points: Pt[], wrap: boolean): Pt[] {
   if (points.length === 0) return points;
   const b = boundsOf(points);
-  const eps = 1e-12 * Math.max(Math.abs(b.minX), Math.abs(b.maxX), Math.abs(b.minY), Math.abs(b.maxY), b.width, b.height);
+  const eps =
+    1e-12 * Math.max(Math.abs(b.minX), Math.abs(b.maxX), Math.abs(b.minY), Math.abs(b.maxY), b.width, b.height);
   const out: Pt[] = [points[0]];
   for (let i = 1; i < points.length; i++) if (dist(points[i], out[out.length - 1]) > eps) out.push(points[i]);
   while (wrap && out.length > 1 && dist(out[0], out[out.length - 1]) <= eps) out.pop();
@@ -42,7 +43,8 @@ function flattenedNote(s: Subpath, tol: number, units: Units): string | null {
 }
 
 const checkFinite = (pts: Pt[], label: string) => {
-  if (!pts.every(([x, y]) => Number.isFinite(x) && Number.isFinite(y))) fail(`${label} has coordinates too large to work with.`);
+  if (!pts.every(([x, y]) => Number.isFinite(x) && Number.isFinite(y)))
+    fail(`${label} has coordinates too large to work with.`);
 };
 
 function wheel(read: ReadResult, tol: number, notes: string[]): { points: Pt[]; chosen: Subpath } {
@@ -59,7 +61,8 @@ function wheel(read: ReadResult, tol: number, notes: string[]): { points: Pt[]; 
       open.push({ s, gap, a, b });
       continue;
     }
-    if (!s.closed && !s.vertexList && gap > 0) notes.push(`closed ${s.label}: its ends were ${fmt(gap)} apart, within the tolerance`);
+    if (!s.closed && !s.vertexList && gap > 0)
+      notes.push(`closed ${s.label}: its ends were ${fmt(gap)} apart, within the tolerance`);
     if (s.vertexList) notes.push("the CSV points are taken as a closed polygon: the last point joins the first");
     if (gap <= tol && pts.length > 2) pts = pts.slice(0, -1); // drop the repeated closing point
     pts = dedupe(pts, true);
@@ -75,8 +78,12 @@ function wheel(read: ReadResult, tol: number, notes: string[]): { points: Pt[]; 
     fail("No closed outline was found in the file (nothing with at least three distinct points).");
   }
   const best = closed.reduce((p, q) => (Math.abs(q.area) > Math.abs(p.area) ? q : p));
-  if (closed.length > 1) notes.push(`took the largest closed shape, ${best.s.label}; ${closed.length - 1} other closed shape${closed.length === 2 ? " was" : "s were"} ignored`);
-  if (open.length) notes.push(`${open.length} open shape${open.length === 1 ? " was" : "s were"} ignored (a wheel is a closed loop)`);
+  if (closed.length > 1)
+    notes.push(
+      `took the largest closed shape, ${best.s.label}; ${closed.length - 1} other closed shape${closed.length === 2 ? " was" : "s were"} ignored`,
+    );
+  if (open.length)
+    notes.push(`${open.length} open shape${open.length === 1 ? " was" : "s were"} ignored (a wheel is a closed loop)`);
   let pts = best.points;
   const x = selfIntersection(pts);
   if (x)
@@ -106,8 +113,12 @@ function track(read: ReadResult, tol: number, notes: string[]): { points: Pt[]; 
     return b.width;
   };
   const best = open.reduce((p, q) => (extent(q) > extent(p) ? q : p));
-  if (open.length > 1) notes.push(`took the widest open shape, ${best.label}; ${open.length - 1} other open shape${open.length === 2 ? " was" : "s were"} ignored`);
-  if (closedCount) notes.push(`${closedCount} closed shape${closedCount === 1 ? " was" : "s were"} ignored (a track profile is open)`);
+  if (open.length > 1)
+    notes.push(
+      `took the widest open shape, ${best.label}; ${open.length - 1} other open shape${open.length === 2 ? " was" : "s were"} ignored`,
+    );
+  if (closedCount)
+    notes.push(`${closedCount} closed shape${closedCount === 1 ? " was" : "s were"} ignored (a track profile is open)`);
   let pts = dedupe(best.points, false);
   if (pts.length < 2) fail(`${best.label} has fewer than two distinct points.`);
   if (pts[pts.length - 1][0] < pts[0][0]) {
@@ -119,8 +130,12 @@ function track(read: ReadResult, tol: number, notes: string[]): { points: Pt[]; 
     const [x1, y1] = pts[i];
     if (x1 > x0) continue;
     if (x1 === x0)
-      fail(`The track profile has a vertical step at x = ${fmt(x0)} (from y = ${fmt(y0)} to ${fmt(y1)}, point ${i}); x must increase from point to point.`);
-    fail(`The track profile doubles back at x = ${fmt(x0)} (point ${i} goes back to x = ${fmt(x1)}); a profile must run left to right, one y for each x.`);
+      fail(
+        `The track profile has a vertical step at x = ${fmt(x0)} (from y = ${fmt(y0)} to ${fmt(y1)}, point ${i}); x must increase from point to point.`,
+      );
+    fail(
+      `The track profile doubles back at x = ${fmt(x0)} (point ${i} goes back to x = ${fmt(x1)}); a profile must run left to right, one y for each x.`,
+    );
   }
   const P = pts[pts.length - 1][0] - pts[0][0];
   const y0 = pts[0][1];
@@ -131,14 +146,17 @@ function track(read: ReadResult, tol: number, notes: string[]): { points: Pt[]; 
         `One period of track must end at the height it starts: y = ${fmt(y0)} at x = ${fmt(pts[0][0])} but y = ${fmt(y1)} at x = ${fmt(pts[pts.length - 1][0])}.`,
       );
     pts[pts.length - 1] = [pts[pts.length - 1][0], y0];
-    notes.push(`the last point's height was set to the first's (they differed by ${fmt(Math.abs(y1 - y0))}, within the tolerance)`);
+    notes.push(
+      `the last point's height was set to the first's (they differed by ${fmt(Math.abs(y1 - y0))}, within the tolerance)`,
+    );
   }
   return { points: pts, chosen: best };
 }
 
 export function finish(read: ReadResult, opts: FinishOptions): Finished {
   const notes = [...read.notes];
-  const { points: raw, chosen } = opts.want === "wheel" ? wheel(read, opts.tolerance, notes) : track(read, opts.tolerance, notes);
+  const { points: raw, chosen } =
+    opts.want === "wheel" ? wheel(read, opts.tolerance, notes) : track(read, opts.tolerance, notes);
   const flat = flattenedNote(chosen, opts.tolerance, read.units);
   if (flat) notes.push(flat);
   let points = raw;
@@ -153,7 +171,10 @@ export function finish(read: ReadResult, opts: FinishOptions): Finished {
     notes.push(`the file does not state its units; the numbers are taken as ${opts.units}, as asked`);
   }
   const min = opts.want === "wheel" ? 3 : 2;
-  if (points.length < min) fail(`The ${opts.want === "wheel" ? "outline" : "profile"} has ${points.length} distinct points; it needs at least ${min}.`);
+  if (points.length < min)
+    fail(
+      `The ${opts.want === "wheel" ? "outline" : "profile"} has ${points.length} distinct points; it needs at least ${min}.`,
+    );
   if (points.length > MAX_OUTPUT_POINTS)
     fail(
       `The ${opts.want === "wheel" ? "outline" : "profile"} has ${points.length.toLocaleString("en-US")} points after flattening, more than the engine's limit of ${MAX_OUTPUT_POINTS.toLocaleString("en-US")}; use a larger tolerance or a simpler drawing.`,
@@ -161,9 +182,13 @@ export function finish(read: ReadResult, opts: FinishOptions): Finished {
   if (opts.want === "wheel") {
     const c = centroid(points);
     if (!starShapedAbout(points, c).ok)
-      notes.push(`the outline is not star-shaped about its area centroid ${fmtPt([c.x, c.y])}: place the axle where every ray from it crosses the outline once`);
+      notes.push(
+        `the outline is not star-shaped about its area centroid ${fmtPt([c.x, c.y])}: place the axle where every ray from it crosses the outline once`,
+      );
   } else {
-    notes.push(`period = ${fmt(points[points.length - 1][0] - points[0][0])}${units === "unknown" ? "" : ` ${units}`} (last x − first x)`);
+    notes.push(
+      `period = ${fmt(points[points.length - 1][0] - points[0][0])}${units === "unknown" ? "" : ` ${units}`} (last x − first x)`,
+    );
   }
   return { points, closed: opts.want === "wheel", units, notes, bounds: boundsOf(points) };
 }

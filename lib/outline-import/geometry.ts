@@ -13,7 +13,14 @@ export const IDENTITY: Affine = [1, 0, 0, 1, 0, 0];
 export function multiply(m1: Affine, m2: Affine): Affine {
   const [a1, b1, c1, d1, e1, f1] = m1;
   const [a2, b2, c2, d2, e2, f2] = m2;
-  return [a1 * a2 + c1 * b2, b1 * a2 + d1 * b2, a1 * c2 + c1 * d2, b1 * c2 + d1 * d2, a1 * e2 + c1 * f2 + e1, b1 * e2 + d1 * f2 + f1];
+  return [
+    a1 * a2 + c1 * b2,
+    b1 * a2 + d1 * b2,
+    a1 * c2 + c1 * d2,
+    b1 * c2 + d1 * d2,
+    a1 * e2 + c1 * f2 + e1,
+    b1 * e2 + d1 * f2 + f1,
+  ];
 }
 
 export function apply(m: Affine, x: number, y: number): Pt {
@@ -98,7 +105,12 @@ export function dist(a: Pt, b: Pt): number {
 const orient = (a: Pt, b: Pt, c: Pt) => (b[0] - a[0]) * (c[1] - a[1]) - (b[1] - a[1]) * (c[0] - a[0]);
 
 function onSegment(a: Pt, b: Pt, c: Pt): boolean {
-  return Math.min(a[0], b[0]) <= c[0] && c[0] <= Math.max(a[0], b[0]) && Math.min(a[1], b[1]) <= c[1] && c[1] <= Math.max(a[1], b[1]);
+  return (
+    Math.min(a[0], b[0]) <= c[0] &&
+    c[0] <= Math.max(a[0], b[0]) &&
+    Math.min(a[1], b[1]) <= c[1] &&
+    c[1] <= Math.max(a[1], b[1])
+  );
 }
 
 /** Where segments ab and cd meet (touching counts), or null. */
@@ -133,7 +145,8 @@ export function selfIntersection(p: ReadonlyArray<Pt>): { i: number; j: number; 
     const a = p[(i - 1 + n) % n];
     const b = p[i];
     const c = p[(i + 1) % n];
-    if (orient(a, b, c) === 0 && (b[0] - a[0]) * (c[0] - b[0]) + (b[1] - a[1]) * (c[1] - b[1]) < 0) return { i: (i - 1 + n) % n, j: i, at: b };
+    if (orient(a, b, c) === 0 && (b[0] - a[0]) * (c[0] - b[0]) + (b[1] - a[1]) * (c[1] - b[1]) < 0)
+      return { i: (i - 1 + n) % n, j: i, at: b };
   }
   // Sweep along the axis where edges overlap less (a zigzag across x is cheap to sweep along y).
   let spanX = 0;
@@ -194,7 +207,10 @@ export type StarResult = { ok: true } | { ok: false; at: { x: number; y: number 
  * and `angle` the direction of the ray from the axle through it, in radians counter-clockwise from
  * straight down (the engine's body-angle convention; its messages quote it in degrees).
  */
-export function starShapedAbout(points: ReadonlyArray<readonly [number, number]>, axle: { x: number; y: number }): StarResult {
+export function starShapedAbout(
+  points: ReadonlyArray<readonly [number, number]>,
+  axle: { x: number; y: number },
+): StarResult {
   let q = points.map(([x, y]) => [x - axle.x, y - axle.y] as Pt);
   let size = 0;
   for (const [x, y] of q) size = Math.max(size, Math.hypot(x, y));
@@ -218,7 +234,11 @@ export function starShapedAbout(points: ReadonlyArray<readonly [number, number]>
     if (d <= 1e-12 * size && u[0] * v[0] + u[1] * v[1] < 0) {
       // The edge passes through the axle itself.
       const t = (u[0] * (u[0] - v[0]) + u[1] * (u[1] - v[1])) / ((v[0] - u[0]) ** 2 + (v[1] - u[1]) ** 2);
-      return { ok: false, at: back([u[0] + t * (v[0] - u[0]), u[1] + t * (v[1] - u[1])]), angle: angleFromDown(v[0] - u[0], v[1] - u[1]) };
+      return {
+        ok: false,
+        at: back([u[0] + t * (v[0] - u[0]), u[1] + t * (v[1] - u[1])]),
+        angle: angleFromDown(v[0] - u[0], v[1] - u[1]),
+      };
     }
     if (orientation * s <= 0) return bad(u);
     total += s;

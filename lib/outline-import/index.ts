@@ -50,7 +50,8 @@ function checkOptions(opts: unknown): ImportOptions {
   if (typeof opts !== "object" || opts === null) fail("Import options are missing.");
   const o = opts as Record<string, unknown>;
   if (o.want !== "wheel" && o.want !== "track") fail('Say what the file holds: want must be "wheel" or "track".');
-  if (typeof o.tolerance !== "number" || !Number.isFinite(o.tolerance) || !(o.tolerance > 0)) fail("The tolerance must be a positive number.");
+  if (typeof o.tolerance !== "number" || !Number.isFinite(o.tolerance) || !(o.tolerance > 0))
+    fail("The tolerance must be a positive number.");
   if (o.units !== undefined && o.units !== "mm" && o.units !== "in") fail('units must be "mm" or "in" when given.');
   return { want: o.want, tolerance: o.tolerance, units: o.units as "mm" | "in" | undefined };
 }
@@ -62,9 +63,22 @@ export function importOutline(file: FileInput, opts: ImportOptions): ImportResul
     const text = readText(file);
     const kind = detectKind(file.name, file.type, text);
     const budget = new PointBudget();
-    const read: ReadResult = kind === "svg" ? readSvg(text, o.tolerance, budget) : kind === "dxf" ? readDxf(text, o.tolerance, budget) : readCsv(text);
+    const read: ReadResult =
+      kind === "svg"
+        ? readSvg(text, o.tolerance, budget)
+        : kind === "dxf"
+          ? readDxf(text, o.tolerance, budget)
+          : readCsv(text);
     const f = finish(read, o);
-    return { ok: true, points: f.points, closed: f.closed, units: f.units, source: kind, notes: f.notes, bounds: f.bounds };
+    return {
+      ok: true,
+      points: f.points,
+      closed: f.closed,
+      units: f.units,
+      source: kind,
+      notes: f.notes,
+      bounds: f.bounds,
+    };
   } catch (e) {
     if (e instanceof ImportFailure) return { ok: false, error: e.message };
     const why = e instanceof Error ? e.message : String(e);
@@ -82,6 +96,9 @@ export function placeAxleDefault(points: ReadonlyArray<readonly [number, number]
  * that is not). On failure: the outline point where it first goes wrong and the ray's direction,
  * in radians counter-clockwise from straight down (the engine's body angle), in [0, 2π).
  */
-export function isStarShapedAbout(points: ReadonlyArray<readonly [number, number]>, axle: { x: number; y: number }): StarResult {
+export function isStarShapedAbout(
+  points: ReadonlyArray<readonly [number, number]>,
+  axle: { x: number; y: number },
+): StarResult {
   return starShapedAbout(points, axle);
 }

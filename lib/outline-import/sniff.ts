@@ -8,7 +8,8 @@ import { fail, MAX_FILE_BYTES } from "./common";
 
 export type Kind = "svg" | "dxf" | "csv";
 
-export type FileInput = { name: string; type?: string; text: string } | { name: string; type?: string; bytes: Uint8Array };
+export type FileInput =
+  { name: string; type?: string; text: string } | { name: string; type?: string; bytes: Uint8Array };
 
 const MB = (n: number) => `${(n / (1024 * 1024)).toFixed(1)} MB (${n.toLocaleString("en-US")} bytes)`;
 const LIMIT = `the limit is 2 MB (${MAX_FILE_BYTES.toLocaleString("en-US")} bytes)`;
@@ -34,7 +35,19 @@ function compressedKind(b: ArrayLike<number>): string | null {
   for (const [name, sig] of COMPRESSED) {
     if (!startsWith(b, sig)) continue;
     // bzip2: "BZh" + block size '1'..'9' + the block magic 31 41 59 26 53 59.
-    if (name === "bzip2" && !(b.length >= 10 && b[3] >= 0x31 && b[3] <= 0x39 && startsWith(Array.from({ length: 6 }, (_, i) => b[4 + i]), [0x31, 0x41, 0x59, 0x26, 0x53, 0x59]))) continue;
+    if (
+      name === "bzip2" &&
+      !(
+        b.length >= 10 &&
+        b[3] >= 0x31 &&
+        b[3] <= 0x39 &&
+        startsWith(
+          Array.from({ length: 6 }, (_, i) => b[4 + i]),
+          [0x31, 0x41, 0x59, 0x26, 0x53, 0x59],
+        )
+      )
+    )
+      continue;
     return name;
   }
   return null;
@@ -86,7 +99,9 @@ function checkControls(text: string): string {
   for (let i = 0; i < t.length; i++) {
     const c = t.charCodeAt(i);
     if (c < 0x20 && c !== 9 && c !== 10 && c !== 13 && c !== 12)
-      fail(`This is not a text file: it contains the control character 0x${c.toString(16).padStart(2, "0")} at offset ${i}.`);
+      fail(
+        `This is not a text file: it contains the control character 0x${c.toString(16).padStart(2, "0")} at offset ${i}.`,
+      );
     if (c === 0x7f) fail(`This is not a text file: it contains the control character 0x7f at offset ${i}.`);
   }
   return t;
@@ -99,8 +114,16 @@ export function readText(file: FileInput): string {
     if (!(b instanceof Uint8Array)) fail("The file's bytes must be given as a Uint8Array.");
     if (b.length > MAX_FILE_BYTES) fail(`The file is ${MB(b.length)}; ${LIMIT}.`);
     const z = compressedKind(b);
-    if (z) fail(`Compressed files are not accepted: this is a ${z} archive. Unpack it first and upload the SVG, DXF or CSV inside.`);
-    if (startsWith(b, Array.from(BINARY_DXF, (ch) => ch.charCodeAt(0))))
+    if (z)
+      fail(
+        `Compressed files are not accepted: this is a ${z} archive. Unpack it first and upload the SVG, DXF or CSV inside.`,
+      );
+    if (
+      startsWith(
+        b,
+        Array.from(BINARY_DXF, (ch) => ch.charCodeAt(0)),
+      )
+    )
       fail("This is a binary DXF file, which is not accepted: save the drawing as an ASCII DXF and upload that.");
     const nul = b.indexOf(0);
     if (nul >= 0) fail(`This is not a text file: it contains a NUL byte at offset ${nul}.`);
@@ -118,17 +141,23 @@ export function readText(file: FileInput): string {
     const c = text.charCodeAt(i);
     if (c >= 0xd800 && c <= 0xdbff) {
       const d = text.charCodeAt(i + 1);
-      if (!(d >= 0xdc00 && d <= 0xdfff)) fail(`This is not a text file: it holds an unpaired surrogate at character ${i}.`);
+      if (!(d >= 0xdc00 && d <= 0xdfff))
+        fail(`This is not a text file: it holds an unpaired surrogate at character ${i}.`);
       bytes += 4;
       i++;
-    } else if (c >= 0xdc00 && c <= 0xdfff) fail(`This is not a text file: it holds an unpaired surrogate at character ${i}.`);
+    } else if (c >= 0xdc00 && c <= 0xdfff)
+      fail(`This is not a text file: it holds an unpaired surrogate at character ${i}.`);
     else bytes += c < 0x80 ? 1 : c < 0x800 ? 2 : 3;
   }
   if (bytes > MAX_FILE_BYTES) fail(`The file is ${MB(bytes)}; ${LIMIT}.`);
   const head = Array.from(text.slice(0, 10), (ch) => ch.charCodeAt(0));
   const z = compressedKind(head);
-  if (z) fail(`Compressed files are not accepted: this is a ${z} archive. Unpack it first and upload the SVG, DXF or CSV inside.`);
-  if (text.startsWith(BINARY_DXF)) fail("This is a binary DXF file, which is not accepted: save the drawing as an ASCII DXF and upload that.");
+  if (z)
+    fail(
+      `Compressed files are not accepted: this is a ${z} archive. Unpack it first and upload the SVG, DXF or CSV inside.`,
+    );
+  if (text.startsWith(BINARY_DXF))
+    fail("This is a binary DXF file, which is not accepted: save the drawing as an ASCII DXF and upload that.");
   const nul = text.indexOf("\u0000");
   if (nul >= 0) fail(`This is not a text file: it contains a NUL character at offset ${nul}.`);
   if (text.charCodeAt(0) === 0xfeff) text = text.slice(1);
@@ -189,13 +218,20 @@ export function detectKind(name: string, type: string | undefined, text: string)
     );
   const mime = typeof type === "string" ? type.split(";")[0].trim().toLowerCase() : "";
   const byMime = MIME[mime];
-  if (byMime && byMime !== byExt) fail(`The file name says .${ext} but its declared type is ${mime}; the two must agree.`);
+  if (byMime && byMime !== byExt)
+    fail(`The file name says .${ext} but its declared type is ${mime}; the two must agree.`);
   const byContent = contentKind(text);
   const want: ContentKind = byExt === "csv" ? "text" : byExt;
   if (byContent !== want) {
-    if (byExt === "svg") fail(`The file is named .${ext} but its content is ${DESCRIBE[byContent]} (no <svg> element at the start).`);
-    if (byExt === "dxf") fail(`The file is named .${ext} but its content is ${DESCRIBE[byContent]}: an ASCII DXF starts with the pair "0" / "SECTION".`);
-    fail(`The file is named .${ext} but its content is ${DESCRIBE[byContent]}; CSV points must be plain rows of numbers.`);
+    if (byExt === "svg")
+      fail(`The file is named .${ext} but its content is ${DESCRIBE[byContent]} (no <svg> element at the start).`);
+    if (byExt === "dxf")
+      fail(
+        `The file is named .${ext} but its content is ${DESCRIBE[byContent]}: an ASCII DXF starts with the pair "0" / "SECTION".`,
+      );
+    fail(
+      `The file is named .${ext} but its content is ${DESCRIBE[byContent]}; CSV points must be plain rows of numbers.`,
+    );
   }
   return byExt;
 }

@@ -38,7 +38,8 @@ class LineCounter {
 const BARE_AMPERSAND = /&(?![\p{L}_:][\p{L}\p{N}_:.\-]*;|#[0-9]+;|#x[0-9A-Fa-f]+;)/gu;
 const BARE_AMPERSAND_REFUSED = 'a bare "&" (write &amp;).';
 
-const DOCTYPE_REFUSED = "the file has a DOCTYPE declaration, which is refused: DOCTYPEs can declare entities that expand without bound or read other files. Save the SVG without it.";
+const DOCTYPE_REFUSED =
+  "the file has a DOCTYPE declaration, which is refused: DOCTYPEs can declare entities that expand without bound or read other files. Save the SVG without it.";
 
 /** saxes's message (without its "line:column: " prefix) as our sentence, or null to let it pass. */
 function describeXmlError(message: string, line: number, text: string, markup: number, offset: number): string | null {
@@ -55,22 +56,35 @@ function describeXmlError(message: string, line: number, text: string, markup: n
     const name = text.slice(amp + 1, offset - 1).slice(0, 40);
     return `${at}: the entity reference &${name}; is not one of XML's predefined entities (custom entities need a DOCTYPE, which is refused).`;
   }
-  if (message.startsWith("malformed character entity")) return `${at}: a character reference that is not a valid character.`;
+  if (message.startsWith("malformed character entity"))
+    return `${at}: a character reference that is not a valid character.`;
   const dup = /^duplicate attribute: (.*)\.$/.exec(message);
   if (dup) return `${at}: <${tag}> gives the attribute ${dup[1]} twice.`;
   if (message.startsWith("attribute without value")) return `${at}: <${tag}> has an attribute with no value.`;
-  if (message.startsWith("unquoted attribute value")) return `${at}: <${tag}> has an attribute value that is not quoted.`;
-  if (message.startsWith("no whitespace between attributes")) return `${at}: <${tag}> needs a space between attributes.`;
-  if (message.startsWith("disallowed character in attribute name")) return `${at}: <${tag}> has an attribute that cannot be read.`;
+  if (message.startsWith("unquoted attribute value"))
+    return `${at}: <${tag}> has an attribute value that is not quoted.`;
+  if (message.startsWith("no whitespace between attributes"))
+    return `${at}: <${tag}> needs a space between attributes.`;
+  if (message.startsWith("disallowed character in attribute name"))
+    return `${at}: <${tag}> has an attribute that cannot be read.`;
   if (message.startsWith("forward-slash in opening tag")) return `${at}: in <${tag}>, "/" must be followed by ">".`;
-  if (message.startsWith("disallowed character in tag name")) return `${at}: a "<" that does not start an element (write &lt;).`;
-  if (message.startsWith("disallowed character in closing tag") || message.startsWith("weird empty close tag")) return `${at}: a closing tag that cannot be read.`;
+  if (message.startsWith("disallowed character in tag name"))
+    return `${at}: a "<" that does not start an element (write &lt;).`;
+  if (message.startsWith("disallowed character in closing tag") || message.startsWith("weird empty close tag"))
+    return `${at}: a closing tag that cannot be read.`;
   const unmatched = /^unmatched closing tag: (.*)\.$/.exec(message);
   if (unmatched) return `${at}: </${unmatched[1]}> does not match any open element.`;
-  if (message.startsWith("malformed comment")) return `${at}: a comment holds "--", which XML does not allow inside a comment.`;
-  if (message.includes('"]]>"')) return `${at}: the text holds "]]>", which XML allows only at the end of a CDATA section.`;
-  if (message.startsWith("disallowed character")) return `${at}: a character that XML does not allow (such as a form feed or a control character).`;
-  if (/XML declaration|processing instruction|version|encoding|standalone|expected|value|whitespace required/i.test(message))
+  if (message.startsWith("malformed comment"))
+    return `${at}: a comment holds "--", which XML does not allow inside a comment.`;
+  if (message.includes('"]]>"'))
+    return `${at}: the text holds "]]>", which XML allows only at the end of a CDATA section.`;
+  if (message.startsWith("disallowed character"))
+    return `${at}: a character that XML does not allow (such as a form feed or a control character).`;
+  if (
+    /XML declaration|processing instruction|version|encoding|standalone|expected|value|whitespace required/i.test(
+      message,
+    )
+  )
     return `${at}: the XML declaration or a processing instruction cannot be read.`;
   return `${at}: the markup is not well-formed XML here; save the drawing again as plain SVG.`;
 }
@@ -122,7 +136,9 @@ export function walkMarkup(text: string, h: MarkupHandlers): void {
       const start = markupStart();
       const written = /^<\/([^\s>]*)/.exec(text.slice(start, start + 200))?.[1] ?? "";
       if (!top || top.name !== written)
-        fail(`line ${lines.at(start)}: </${written}> does not match ${top ? `<${top.name}> opened on line ${top.line}` : "any open element"}.`);
+        fail(
+          `line ${lines.at(start)}: </${written}> does not match ${top ? `<${top.name}> opened on line ${top.line}` : "any open element"}.`,
+        );
     }
     h.close();
     if (open.length === 0) rootClosed = true;

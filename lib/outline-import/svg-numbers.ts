@@ -25,7 +25,14 @@ export function numberList(s: string): { numbers: number[]; end: number } {
 }
 
 const FUNCTION = /[ \t\r\n\f]*(matrix|translate|scale|rotate|skewX|skewY)[ \t\r\n\f]*\(([^)]*)\)[ \t\r\n\f]*,?/y;
-const ARITY: Record<string, number[]> = { matrix: [6], translate: [1, 2], scale: [1, 2], rotate: [1, 3], skewX: [1], skewY: [1] };
+const ARITY: Record<string, number[]> = {
+  matrix: [6],
+  translate: [1, 2],
+  scale: [1, 2],
+  rotate: [1, 3],
+  skewX: [1],
+  skewY: [1],
+};
 const rad = (deg: number) => (deg * Math.PI) / 180;
 
 function functionMatrix(fn: string, a: number[]): Affine {
@@ -52,13 +59,18 @@ function functionMatrix(fn: string, a: number[]): Affine {
 
 /** A transform attribute (SVG 1.1 §7.6) as one matrix, the functions applied left to right. */
 export function parseTransform(v: string, el: string, line: number): Affine {
-  const bad = (why: string, at: number): never => fail(`line ${line}: <${el}> has a transform that cannot be read (${why} at character ${at + 1}).`);
+  const bad = (why: string, at: number): never =>
+    fail(`line ${line}: <${el}> has a transform that cannot be read (${why} at character ${at + 1}).`);
   let m: Affine = IDENTITY;
   let i = 0;
   while (i < v.length && v.slice(i).trim() !== "") {
     FUNCTION.lastIndex = i;
     const f = FUNCTION.exec(v);
-    if (!f) bad("expected matrix, translate, scale, rotate, skewX or skewY", i + (v.length - i - v.slice(i).trimStart().length));
+    if (!f)
+      bad(
+        "expected matrix, translate, scale, rotate, skewX or skewY",
+        i + (v.length - i - v.slice(i).trimStart().length),
+      );
     const [whole, fn, args] = f as RegExpExecArray;
     const list = numberList(args);
     if (list.end < args.length) bad("expected a number", i + whole.indexOf("(") + 1 + list.end);

@@ -21,19 +21,27 @@ const COMMAND_LETTER = /[MmLlHhVvCcSsQqTtAaZz]/;
 function countCommands(d: string, counter: PathCounter): void {
   for (let i = 0; i < d.length; i++)
     if (COMMAND_LETTER.test(d[i]) && ++counter.commands > MAX_PATH_COMMANDS)
-      fail(`The file has more than ${MAX_PATH_COMMANDS.toLocaleString("en-US")} path commands, the most the importer reads; simplify the drawing.`);
+      fail(
+        `The file has more than ${MAX_PATH_COMMANDS.toLocaleString("en-US")} path commands, the most the importer reads; simplify the drawing.`,
+      );
 }
 
 /** svg-pathdata's SyntaxError as what went wrong and the 0-based index where. */
 function describeSyntaxError(message: string, d: string): { what: string; at: number } {
   let m: RegExpExecArray | null;
-  if ((m = /^Unexpected character "(.*)" at index (\d+)\. Command cannot follow comma/.exec(message))) return { what: `unexpected "${m[1]}" after a comma`, at: Number(m[2]) };
-  if ((m = /^Unexpected character "(.*)" at index (\d+)/.exec(message))) return { what: `unexpected "${m[1]}"`, at: Number(m[2]) };
-  if ((m = /^Unterminated command at index (\d+)/.exec(message))) return { what: "expected a number", at: Number(m[1]) };
+  if ((m = /^Unexpected character "(.*)" at index (\d+)\. Command cannot follow comma/.exec(message)))
+    return { what: `unexpected "${m[1]}" after a comma`, at: Number(m[2]) };
+  if ((m = /^Unexpected character "(.*)" at index (\d+)/.exec(message)))
+    return { what: `unexpected "${m[1]}"`, at: Number(m[2]) };
+  if ((m = /^Unterminated command at index (\d+)/.exec(message)))
+    return { what: "expected a number", at: Number(m[1]) };
   if (/^Unterminated command at the path end/.test(message)) return { what: "expected a number", at: d.length };
-  if ((m = /^Invalid number ending at (\d+)/.exec(message))) return { what: "a number that cannot be read", at: Math.max(0, Number(m[1]) - 1) };
-  if ((m = /^Expected positive number, got "(.*)" at index "(\d+)"/.exec(message))) return { what: "an arc radius must not be negative", at: Math.max(0, Number(m[2]) - m[1].length) };
-  if ((m = /^Expected a flag, got "(.*)" at index "(\d+)"/.exec(message))) return { what: "expected an arc flag (0 or 1)", at: Math.max(0, Number(m[2]) - m[1].length) };
+  if ((m = /^Invalid number ending at (\d+)/.exec(message)))
+    return { what: "a number that cannot be read", at: Math.max(0, Number(m[1]) - 1) };
+  if ((m = /^Expected positive number, got "(.*)" at index "(\d+)"/.exec(message)))
+    return { what: "an arc radius must not be negative", at: Math.max(0, Number(m[2]) - m[1].length) };
+  if ((m = /^Expected a flag, got "(.*)" at index "(\d+)"/.exec(message)))
+    return { what: "expected an arc flag (0 or 1)", at: Math.max(0, Number(m[2]) - m[1].length) };
   return { what: "the path data cannot be read", at: 0 };
 }
 
@@ -43,7 +51,10 @@ function parsePath(d: string, label: string): SVGCommand[] {
     fail(`${label}: ${what} at character ${at + 1} of its path data (d="${d.slice(Math.max(0, at - 12), at + 12)}").`);
   const first = d.search(/[^ \t\r\n\f]/);
   if (first >= 0 && d[first] !== "M" && d[first] !== "m")
-    bad(COMMAND_LETTER.test(d[first]) ? "path data must begin with a moveto (M or m)" : `unexpected "${d[first]}"`, first);
+    bad(
+      COMMAND_LETTER.test(d[first]) ? "path data must begin with a moveto (M or m)" : `unexpected "${d[first]}"`,
+      first,
+    );
   let commands: SVGCommand[];
   try {
     commands = new SVGPathData(SVGPathData.parse(d)).toAbs().commands;
@@ -51,7 +62,8 @@ function parsePath(d: string, label: string): SVGCommand[] {
     const { what, at } = describeSyntaxError(e instanceof Error ? e.message : String(e), d);
     return bad(what, at);
   }
-  for (const c of commands) for (const v of Object.values(c)) if (typeof v === "number" && !Number.isFinite(v)) bad("a number out of range", 0);
+  for (const c of commands)
+    for (const v of Object.values(c)) if (typeof v === "number" && !Number.isFinite(v)) bad("a number out of range", 0);
   return commands;
 }
 
@@ -100,7 +112,13 @@ class PathPen {
   moveTo(p: Pt, isStart = true): void {
     this.flush();
     this.budget.take(1, this.where);
-    this.sub = { points: [this.t(p)], closed: false, arcs: 0, curves: 0, label: `${this.label} subpath ${this.out.length + 1}` };
+    this.sub = {
+      points: [this.t(p)],
+      closed: false,
+      arcs: 0,
+      curves: 0,
+      label: `${this.label} subpath ${this.out.length + 1}`,
+    };
     if (isStart) this.cur = this.start = p;
     this.remember(null, null);
   }
@@ -129,7 +147,17 @@ class PathPen {
     this.remember(k1, "quad");
   }
   arc(c: { rX: number; rY: number; xRot: number; lArcFlag: number; sweepFlag: number }, p: Pt): void {
-    const e = endpointToCentre(this.cur[0], this.cur[1], c.rX, c.rY, c.xRot, c.lArcFlag === 1, c.sweepFlag === 1, p[0], p[1]);
+    const e = endpointToCentre(
+      this.cur[0],
+      this.cur[1],
+      c.rX,
+      c.rY,
+      c.xRot,
+      c.lArcFlag === 1,
+      c.sweepFlag === 1,
+      p[0],
+      p[1],
+    );
     if (e.kind === "line") return this.lineTo(p);
     if (e.kind === "arc") {
       const s = this.current();
@@ -153,7 +181,14 @@ class PathPen {
 }
 
 /** Flattened subpaths of one path's d attribute, mapped by m. */
-export function pathToSubpaths(d: string, m: Affine, tol: number, budget: PointBudget, label: string, counter: PathCounter): Subpath[] {
+export function pathToSubpaths(
+  d: string,
+  m: Affine,
+  tol: number,
+  budget: PointBudget,
+  label: string,
+  counter: PathCounter,
+): Subpath[] {
   countCommands(d, counter);
   const commands = parsePath(d, label);
   const pen = new PathPen(m, tol, budget, label);

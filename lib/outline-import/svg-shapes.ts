@@ -38,8 +38,10 @@ function ellipseLoop(s: Shape, c: ShapeContext, cx: number, cy: number, rx: numb
 function polyPoints(s: Shape, c: ShapeContext): void {
   const v = s.a.get("points") ?? "";
   const { numbers: nums, end } = numberList(v);
-  if (end < v.length) fail(`${s.label}: its points cannot be read at character ${end + 1} ("${v.slice(end, end + 20)}").`);
-  if (nums.length % 2 === 1) fail(`${s.label}: its points hold an odd count of numbers (${nums.length}); they must come in x, y pairs.`);
+  if (end < v.length)
+    fail(`${s.label}: its points cannot be read at character ${end + 1} ("${v.slice(end, end + 20)}").`);
+  if (nums.length % 2 === 1)
+    fail(`${s.label}: its points hold an odd count of numbers (${nums.length}); they must come in x, y pairs.`);
   c.budget.take(nums.length / 2, s.where);
   const pts: Pt[] = [];
   for (let k = 0; k < nums.length; k += 2) pts.push(s.pt(nums[k], nums[k + 1]));
@@ -101,7 +103,8 @@ export function drawShape(el: string, a: Map<string, string>, m: Affine, line: n
   switch (el) {
     case "path": {
       const d = a.get("d");
-      if (d !== undefined && d.trim() !== "") c.subpaths.push(...pathToSubpaths(d, m, c.tol, c.budget, label, c.counter));
+      if (d !== undefined && d.trim() !== "")
+        c.subpaths.push(...pathToSubpaths(d, m, c.tol, c.budget, label, c.counter));
       return;
     }
     case "polygon":

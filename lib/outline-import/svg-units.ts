@@ -20,16 +20,22 @@ export function lengthOf(v: string | undefined, el: string, attr: string, line: 
   const m = LENGTH.exec(v);
   if (!m) fail(`line ${line}: <${el}> has ${attr}="${v.slice(0, 40)}", which is not a length.`);
   const unit = m[2];
-  if (!(unit in PX_PER)) fail(`line ${line}: <${el}> has ${attr}="${v.slice(0, 40)}"; lengths in "${unit}" are not supported (use a number, px, mm, cm, in, pt or pc).`);
+  if (!(unit in PX_PER))
+    fail(
+      `line ${line}: <${el}> has ${attr}="${v.slice(0, 40)}"; lengths in "${unit}" are not supported (use a number, px, mm, cm, in, pt or pc).`,
+    );
   return Number(m[1]) * PX_PER[unit];
 }
 
 export function viewBoxOf(v: string | undefined, el: string, line: number): ViewBox | null {
   if (v === undefined) return null;
   const { numbers: nums, end } = numberList(v);
-  if (end < v.length && nums.length < 5) fail(`line ${line}: <${el}> has a viewBox that cannot be read ("${v.slice(0, 40)}").`);
-  if (nums.length !== 4) fail(`line ${line}: <${el}> has a viewBox of ${nums.length} numbers; it needs four (min-x min-y width height).`);
-  if (!(nums[2] > 0 && nums[3] > 0)) fail(`line ${line}: <${el}> has a viewBox with a width or height that is not positive.`);
+  if (end < v.length && nums.length < 5)
+    fail(`line ${line}: <${el}> has a viewBox that cannot be read ("${v.slice(0, 40)}").`);
+  if (nums.length !== 4)
+    fail(`line ${line}: <${el}> has a viewBox of ${nums.length} numbers; it needs four (min-x min-y width height).`);
+  if (!(nums[2] > 0 && nums[3] > 0))
+    fail(`line ${line}: <${el}> has a viewBox with a width or height that is not positive.`);
   return [nums[0], nums[1], nums[2], nums[3]];
 }
 
@@ -42,7 +48,8 @@ export function viewBoxMap(vb: ViewBox, w: number, h: number, par: string | unde
   let tx = 0;
   let ty = 0;
   if (p !== "none") {
-    const m = /^(xMinYMin|xMidYMin|xMaxYMin|xMinYMid|xMidYMid|xMaxYMid|xMinYMax|xMidYMax|xMaxYMax)?\s*(meet|slice)?$/.exec(p);
+    const m =
+      /^(xMinYMin|xMidYMin|xMaxYMin|xMinYMid|xMidYMid|xMaxYMid|xMinYMax|xMidYMax|xMaxYMax)?\s*(meet|slice)?$/.exec(p);
     const align = (m && m[1]) || "xMidYMid";
     const s = m && m[2] === "slice" ? Math.max(sx, sy) : Math.min(sx, sy);
     sx = sy = s;
@@ -77,10 +84,18 @@ export function rootUnits(a: Map<string, string>, line: number): { ctm: Affine; 
     if (vb) {
       const W = w ? toOut(w) : (toOut(h!) * vb[2]) / vb[3];
       const H = h ? toOut(h) : (toOut(w!) * vb[3]) / vb[2];
-      return { ctm: viewBoxMap(vb, W, H, a.get("preserveAspectRatio")), units, note: `units ${units} from the root's ${sizeText} and viewBox "${vb.join(" ")}"` };
+      return {
+        ctm: viewBoxMap(vb, W, H, a.get("preserveAspectRatio")),
+        units,
+        note: `units ${units} from the root's ${sizeText} and viewBox "${vb.join(" ")}"`,
+      };
     }
     const s = units === "mm" ? 25.4 / 96 : 1 / 96;
-    return { ctm: [s, 0, 0, s, 0, 0], units, note: `units ${units} from the root's ${sizeText}; with no viewBox, user units are CSS px (96 per inch)` };
+    return {
+      ctm: [s, 0, 0, s, 0, 0],
+      units,
+      note: `units ${units} from the root's ${sizeText}; with no viewBox, user units are CSS px (96 per inch)`,
+    };
   }
   const given = [a.get("width"), a.get("height")].filter((v) => v !== undefined).map((v) => v!.trim());
   const note = given.length

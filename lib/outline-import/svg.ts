@@ -48,36 +48,72 @@ class Notes {
 function noteAttributes(notes: Notes, el: string, attrs: Map<string, string>, line: number): void {
   for (const [k, v] of attrs) {
     if (/^on/i.test(k))
-      notes.add("handler", line, (c, l) => `ignored ${times(c, "an event-handler attribute", "event-handler attributes")} (first ${k} on <${el}>, line ${l}); nothing is ever run`);
+      notes.add(
+        "handler",
+        line,
+        (c, l) =>
+          `ignored ${times(c, "an event-handler attribute", "event-handler attributes")} (first ${k} on <${el}>, line ${l}); nothing is ever run`,
+      );
     if ((k === "href" || k.endsWith(":href")) && !v.trim().startsWith("#"))
-      notes.add("href", line, (c, l) => `ignored ${times(c, "an external reference", "external references")} (first ${k}="${v.slice(0, 60)}" on <${el}>, line ${l}); nothing is ever fetched`);
+      notes.add(
+        "href",
+        line,
+        (c, l) =>
+          `ignored ${times(c, "an external reference", "external references")} (first ${k}="${v.slice(0, 60)}" on <${el}>, line ${l}); nothing is ever fetched`,
+      );
   }
 }
 
 function noteRawText(notes: Notes, el: string, line: number): void {
-  if (el === "script") notes.add("script", line, (c, l) => `ignored ${times(c, "a <script> element", "<script> elements")} (first on line ${l}); scripts are never run`);
-  if (el === "foreignObject") notes.add("foreign", line, (c, l) => `ignored ${times(c, "a <foreignObject>", "<foreignObject> elements")} (first on line ${l}) and everything in it`);
+  if (el === "script")
+    notes.add(
+      "script",
+      line,
+      (c, l) =>
+        `ignored ${times(c, "a <script> element", "<script> elements")} (first on line ${l}); scripts are never run`,
+    );
+  if (el === "foreignObject")
+    notes.add(
+      "foreign",
+      line,
+      (c, l) =>
+        `ignored ${times(c, "a <foreignObject>", "<foreignObject> elements")} (first on line ${l}) and everything in it`,
+    );
 }
 
 /** Why an element under parent draws nothing (null when it draws), noting <use> and <image>. */
 function skipReason(el: string, attrs: Map<string, string>, parent: Frame, line: number, notes: Notes): string | null {
   if (parent.skip) return parent.skip;
-  const hidden = attrs.get("display")?.trim() === "none" || /(^|;)\s*display\s*:\s*none\s*(;|$)/.test(attrs.get("style") ?? "");
+  const hidden =
+    attrs.get("display")?.trim() === "none" || /(^|;)\s*display\s*:\s*none\s*(;|$)/.test(attrs.get("style") ?? "");
   if (hidden) return "hidden (display: none)";
   if (el in NOT_DRAWN) return NOT_DRAWN[el];
-  if (el === "use") notes.add("use", line, (c, l) => `ignored ${times(c, "a <use> element", "<use> elements")} (first on line ${l}); references are not followed`);
-  if (el === "image") notes.add("image", line, (c, l) => `ignored ${times(c, "an <image>", "<image> elements")} (first on line ${l}); images are never loaded`);
+  if (el === "use")
+    notes.add(
+      "use",
+      line,
+      (c, l) =>
+        `ignored ${times(c, "a <use> element", "<use> elements")} (first on line ${l}); references are not followed`,
+    );
+  if (el === "image")
+    notes.add(
+      "image",
+      line,
+      (c, l) => `ignored ${times(c, "an <image>", "<image> elements")} (first on line ${l}); images are never loaded`,
+    );
   // Text, gradients, editor metadata and unknown elements draw no outline.
   return GEOMETRY.has(el) || CONTAINERS.has(el) || el === "svg" ? null : "unused";
 }
 
 /** The map of an element's children: a nested viewport (SVG 1.1 §7.9) or its transform attribute. */
 function elementMap(el: string, attrs: Map<string, string>, parent: Affine, line: number): Affine {
-  if (el !== "svg") return attrs.has("transform") ? multiply(parent, parseTransform(attrs.get("transform")!, el, line)) : parent;
+  if (el !== "svg")
+    return attrs.has("transform") ? multiply(parent, parseTransform(attrs.get("transform")!, el, line)) : parent;
   const L = (k: string) => lengthOf(attrs.get(k), el, k, line);
   let ctm = multiply(parent, [1, 0, 0, 1, L("x"), L("y")]);
   const vb = viewBoxOf(attrs.get("viewBox"), el, line);
-  if (vb && attrs.has("width") && attrs.has("height")) ctm = multiply(ctm, viewBoxMap(vb, L("width"), L("height"), attrs.get("preserveAspectRatio")));
+  if (vb && attrs.has("width") && attrs.has("height"))
+    ctm = multiply(ctm, viewBoxMap(vb, L("width"), L("height"), attrs.get("preserveAspectRatio")));
   return ctm;
 }
 
@@ -102,7 +138,12 @@ export function readSvg(text: string, tol: number, budget: PointBudget): ReadRes
     const skip = skipReason(el, attrs, parent, line, notes);
     const ctm = skip ? parent.ctm : elementMap(el, attrs, parent.ctm, line);
     if (GEOMETRY.has(el)) {
-      if (skip && skip !== "unused") notes.add(`skip:${skip}`, line, (c, l) => `ignored ${times(c, "a shape", "shapes")} ${skip} (first on line ${l})`);
+      if (skip && skip !== "unused")
+        notes.add(
+          `skip:${skip}`,
+          line,
+          (c, l) => `ignored ${times(c, "a shape", "shapes")} ${skip} (first on line ${l})`,
+        );
       else if (!skip) drawShape(el, attrs, ctm, line, shapes);
     }
     frames.push({ ctm, skip });
@@ -111,7 +152,9 @@ export function readSvg(text: string, tol: number, budget: PointBudget): ReadRes
   walkMarkup(text, {
     open(tag: SaxesTagPlain, line: number) {
       if (++elements > MAX_SVG_ELEMENTS)
-        fail(`The SVG has more than ${MAX_SVG_ELEMENTS.toLocaleString("en-US")} elements, the most the importer reads; simplify the drawing.`);
+        fail(
+          `The SVG has more than ${MAX_SVG_ELEMENTS.toLocaleString("en-US")} elements, the most the importer reads; simplify the drawing.`,
+        );
       const el = tag.name;
       const attrs = new Map(Object.entries(tag.attributes));
       noteAttributes(notes, el, attrs, line);
@@ -129,11 +172,20 @@ export function readSvg(text: string, tol: number, budget: PointBudget): ReadRes
     },
     instruction(target: string, line: number) {
       if (target.toLowerCase() === "xml-stylesheet")
-        notes.add("stylesheet", line, (k, l) => `ignored ${times(k, "an xml-stylesheet instruction", "xml-stylesheet instructions")} (line ${l}); stylesheets are never loaded`);
+        notes.add(
+          "stylesheet",
+          line,
+          (k, l) =>
+            `ignored ${times(k, "an xml-stylesheet instruction", "xml-stylesheet instructions")} (line ${l}); stylesheets are never loaded`,
+        );
     },
   });
   if (!unitNote) fail("No <svg> element was found.");
   // SVG's y axis points down; the engine's points up.
   for (const s of shapes.subpaths) s.points = s.points.map(([x, y]) => [x, -y === 0 ? 0 : -y] as Pt);
-  return { subpaths: shapes.subpaths, units, notes: [unitNote, "y flipped (SVG is y-down, the engine is y-up)", ...notes.list()] };
+  return {
+    subpaths: shapes.subpaths,
+    units,
+    notes: [unitNote, "y flipped (SVG is y-down, the engine is y-up)", ...notes.list()],
+  };
 }

@@ -48,7 +48,12 @@ export function fitBox(b: Box, screen: Screen): { view: ViewBox; px: number } {
   // The spare width (when the height decides the scale) is shared out evenly on both sides.
   const spare = width - cw - (PAD.left + PAD.right) * px;
   return {
-    view: { x: b.minX - PAD.left * px - spare / 2, y: -(b.maxY + PAD.top * px), width, height: ch + (PAD.top + PAD.bottom) * px },
+    view: {
+      x: b.minX - PAD.left * px - spare / 2,
+      y: -(b.maxY + PAD.top * px),
+      width,
+      height: ch + (PAD.top + PAD.bottom) * px,
+    },
     px,
   };
 }

@@ -48,6 +48,10 @@ export function personOutline(height = PERSON_HEIGHT_MM): Pt[] {
   const left = [...right].reverse().map(([x, y]): Pt => [-x, y]);
   const crown = head();
   // Between the feet, up to the crotch, so the legs read as two.
-  const legs: Pt[] = [[-0.012, 0], [0, 0.45], [0.012, 0]];
+  const legs: Pt[] = [
+    [-0.012, 0],
+    [0, 0.45],
+    [0.012, 0],
+  ];
   return [...right, ...crown, ...left, ...legs].map(([x, y]): Pt => [x * height, y * height]);
 }

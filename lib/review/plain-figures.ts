@@ -34,8 +34,18 @@ export function plainFigures(r: Checked): PlainFigure[] {
   const mu = c.frictionDemand.max;
   const out: PlainFigure[] = [
     pair
-      ? { key: "level", label: "Steady turning", text: `The two wheels stay in touch all the way round: the distance between their axles holds to within ${length(c.axleDeviation, r.units)}.`, ok: c.axleDeviation <= tol }
-      : { key: "level", label: "Level ride", text: `The axle stays level to within ${length(c.axleDeviation, r.units)} over the whole roll.`, ok: c.axleDeviation <= tol },
+      ? {
+          key: "level",
+          label: "Steady turning",
+          text: `The two wheels stay in touch all the way round: the distance between their axles holds to within ${length(c.axleDeviation, r.units)}.`,
+          ok: c.axleDeviation <= tol,
+        }
+      : {
+          key: "level",
+          label: "Level ride",
+          text: `The axle stays level to within ${length(c.axleDeviation, r.units)} over the whole roll.`,
+          ok: c.axleDeviation <= tol,
+        },
     {
       key: "grip",
       label: "Grip needed",
@@ -50,9 +60,24 @@ export function plainFigures(r: Checked): PlainFigure[] {
       ok: mu <= FRICTION_GUIDE,
     },
     c.interference.depth > 0
-      ? { key: "cut-in", label: "Clearance", text: `The wheel cuts into ${other} by ${length(c.interference.depth, r.units)} away from the point of contact. It would jam; the shop must change the design before building it.`, ok: false }
-      : { key: "cut-in", label: "Clearance", text: `The wheel never cuts into ${other}: they touch only where they roll.`, ok: true },
-    { key: "slip", label: "Rolling, not sliding", text: `The lengths rolled on the wheel and on ${other} agree to within ${length(c.slip, r.units)}.`, ok: c.slip <= tol },
+      ? {
+          key: "cut-in",
+          label: "Clearance",
+          text: `The wheel cuts into ${other} by ${length(c.interference.depth, r.units)} away from the point of contact. It would jam; the shop must change the design before building it.`,
+          ok: false,
+        }
+      : {
+          key: "cut-in",
+          label: "Clearance",
+          text: `The wheel never cuts into ${other}: they touch only where they roll.`,
+          ok: true,
+        },
+    {
+      key: "slip",
+      label: "Rolling, not sliding",
+      text: `The lengths rolled on the wheel and on ${other} agree to within ${length(c.slip, r.units)}.`,
+      ok: c.slip <= tol,
+    },
     {
       key: "closure",
       label: "Repeats exactly",

@@ -32,5 +32,8 @@ export function approvalLine(stamp: ApprovalStamp | null, opts: { ascii?: boolea
 }
 
 function asciiOnly(s: string): string {
-  return s.normalize("NFKD").replace(/[\u0300-\u036f]/g, "").replace(/[^\x20-\x7e]/g, "?");
+  return s
+    .normalize("NFKD")
+    .replace(/[\u0300-\u036f]/g, "")
+    .replace(/[^\x20-\x7e]/g, "?");
 }

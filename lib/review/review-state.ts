@@ -5,6 +5,8 @@ export function showsRun(mode: string): boolean {
   return mode !== "partner-wheel";
 }
 
-export function reviewStatus(r: { decision: { decision: "approve" | "request-changes" } | null }): "open" | "approved" | "changes-requested" {
+export function reviewStatus(r: {
+  decision: { decision: "approve" | "request-changes" } | null;
+}): "open" | "approved" | "changes-requested" {
   return !r.decision ? "open" : r.decision.decision === "approve" ? "approved" : "changes-requested";
 }

@@ -38,7 +38,14 @@ interface Common {
   /** Where the person's feet stand, mm (y up). */
   floorY: number;
   bounds: { minX: number; minY: number; maxX: number; maxY: number };
-  dims: { runLength?: number; humpHeight?: number; axleHeight?: number; wheelAcross: number; partnerAcross?: number; centreDistance?: number };
+  dims: {
+    runLength?: number;
+    humpHeight?: number;
+    axleHeight?: number;
+    wheelAcross: number;
+    partnerAcross?: number;
+    centreDistance?: number;
+  };
 }
 
 export interface RunLayout extends Common {
@@ -112,16 +119,28 @@ export function runScene(result: SolvedGeometry, run: RunChoice | null): RunScen
       person,
       floorY,
       centreDistance: a,
-      bounds: boundsOf([wheel.map(([x, y]) => [x, y]), partner.map(([x, y]) => [x, y - a]), person, [[-rW, rW], [rW, -a - rP]]]),
+      bounds: boundsOf([
+        wheel.map(([x, y]) => [x, y]),
+        partner.map(([x, y]) => [x, y - a]),
+        person,
+        [
+          [-rW, rW],
+          [rW, -a - rP],
+        ],
+      ]),
       dims: { wheelAcross: 2 * rW, partnerAcross: 2 * rP, centreDistance: a },
     };
   }
-  if (hasTrack(result)) return trackRun(result, run ?? { runLength: (result.period ?? 1) * unit * 3, endTreatment: "flat" }, unit);
+  if (hasTrack(result))
+    return trackRun(result, run ?? { runLength: (result.period ?? 1) * unit * 3, endTreatment: "flat" }, unit);
   return twinRun(result, run, unit);
 }
 
 function trackRun(result: SolvedGeometry, run: RunChoice, unit: number): RunLayout {
-  const built = buildRun(result as Parameters<typeof buildRun>[0], parseCutSettings({ runLength: run.runLength, endTreatment: run.endTreatment }));
+  const built = buildRun(
+    result as Parameters<typeof buildRun>[0],
+    parseCutSettings({ runLength: run.runLength, endTreatment: run.endTreatment }),
+  );
   const r = built.run;
   const k = unit * r.scale;
   const x0 = result.track!.points[0][0];
@@ -154,8 +173,21 @@ function trackRun(result: SolvedGeometry, run: RunChoice, unit: number): RunLayo
     troughY,
     // The run starts at the design's first crest: `phase` is that crest's x in the design's period, mm.
     designStart: x0 + r.phase / unit,
-    bounds: boundsOf([r.profile, person, [[0, floorY], [r.runLength, axleY + across(wheel) / 2]], [[-across(wheel) / 2, axleY]]]),
-    dims: { runLength: r.runLength, humpHeight: crestY - troughY, axleHeight: axleY - floorY, wheelAcross: across(wheel) },
+    bounds: boundsOf([
+      r.profile,
+      person,
+      [
+        [0, floorY],
+        [r.runLength, axleY + across(wheel) / 2],
+      ],
+      [[-across(wheel) / 2, axleY]],
+    ]),
+    dims: {
+      runLength: r.runLength,
+      humpHeight: crestY - troughY,
+      axleHeight: axleY - floorY,
+      wheelAcross: across(wheel),
+    },
   };
 }
 
@@ -164,7 +196,10 @@ function twinRun(result: SolvedGeometry, run: RunChoice | null, unit: number): R
   const periods = run ? Math.max(1, Math.floor(run.runLength / P + 1e-9)) : TWIN_DEFAULT_PERIODS;
   const k = unit;
   const x0 = result.track!.points[0][0];
-  const profile = tileTrack(result.track!.points, result.period ?? 1, periods).map(([x, y]): Pt => [(x - x0) * k, y * k]);
+  const profile = tileTrack(result.track!.points, result.period ?? 1, periods).map(([x, y]): Pt => [
+    (x - x0) * k,
+    y * k,
+  ]);
   const axleY = (result.axleHeight ?? 0) * k;
   const lowerAxleY = (result.lowerAxleHeight ?? 0) * k;
   const wheel = mm(result.wheel.points, k);
@@ -195,8 +230,22 @@ function twinRun(result: SolvedGeometry, run: RunChoice | null, unit: number): R
     crestY: Math.max(...ys),
     troughY: Math.min(...ys),
     designStart: x0,
-    bounds: boundsOf([profile, person, [[0, axleY + across(wheel) / 2], [runLength, floorY]], [[-across(wheel) / 2, axleY]]]),
-    dims: { runLength, humpHeight: Math.max(...ys) - Math.min(...ys), axleHeight: axleY - floorY, wheelAcross: across(wheel), partnerAcross: across(partner) },
+    bounds: boundsOf([
+      profile,
+      person,
+      [
+        [0, axleY + across(wheel) / 2],
+        [runLength, floorY],
+      ],
+      [[-across(wheel) / 2, axleY]],
+    ]),
+    dims: {
+      runLength,
+      humpHeight: Math.max(...ys) - Math.min(...ys),
+      axleHeight: axleY - floorY,
+      wheelAcross: across(wheel),
+      partnerAcross: across(partner),
+    },
   };
 }
 
@@ -230,14 +279,30 @@ export function poseOnRun(result: SolvedGeometry, scene: RunScene, p: number): R
     const r2 = rayReach(scene.partner!, upInBody(phi));
     // The partner's axle where the two outlines, turned as the engine says, touch on the line of centres.
     const restY = -(r1 + r2);
-    return { along: (theta * 180) / Math.PI, wheelAxle: [0, 0], wheelAngle: theta, partnerAxle: [0, restY], partnerAngle: phi, contact: [0, -r1], axleLineY: -a, offLine: restY + a };
+    return {
+      along: (theta * 180) / Math.PI,
+      wheelAxle: [0, 0],
+      wheelAngle: theta,
+      partnerAxle: [0, restY],
+      partnerAngle: phi,
+      contact: [0, -r1],
+      axleLineY: -a,
+      offLine: restY + a,
+    };
   }
   const x = scene.rollStart + t * (scene.rollEnd - scene.rollStart);
   const designX = scene.designStart + (x - scene.rollStart) / scene.k;
   const angle = wheelTurnAt(result, scene, x);
   const contactY = trackYAtX(result, designX) * scene.k;
   const rest = contactY + rayReach(scene.wheel, downInBody(angle));
-  const pose: RunPose = { along: x, wheelAxle: [x, rest], wheelAngle: angle, contact: [x, contactY], axleLineY: scene.axleY, offLine: rest - scene.axleY };
+  const pose: RunPose = {
+    along: x,
+    wheelAxle: [x, rest],
+    wheelAngle: angle,
+    contact: [x, contactY],
+    axleLineY: scene.axleY,
+    offLine: rest - scene.axleY,
+  };
   if (scene.partner && scene.lowerAxleY !== undefined) {
     const lower = lowerAngleAt(result, designX);
     pose.partnerAxle = [x, contactY - rayReach(scene.partner, upInBody(lower))];
@@ -263,4 +328,3 @@ export function placeOfPosition(scene: RunScene, p: number): number {
   const t = Math.min(1, Math.max(0, p));
   return scene.kind === "pair" ? 360 * t : scene.rollStart + t * (scene.rollEnd - scene.rollStart);
 }
-

@@ -14,14 +14,14 @@ export interface ActionState {
   values?: Record<string, string>;
 }
 
-
 const SECRET_FIELDS = new Set(["password", "newPassword", "currentPassword", "newPasswordAgain"]);
 
 /** What the user typed, minus passwords, to put back into the form. */
 function typedValues(formData: FormData): Record<string, string> {
   const values: Record<string, string> = {};
   for (const [key, value] of formData.entries()) {
-    if (typeof value === "string" && !key.startsWith("$") && !SECRET_FIELDS.has(key)) values[key] = value.slice(0, 1000);
+    if (typeof value === "string" && !key.startsWith("$") && !SECRET_FIELDS.has(key))
+      values[key] = value.slice(0, 1000);
   }
   return values;
 }

@@ -21,17 +21,32 @@ export async function requireSheetAccess(cutPlanId: number) {
 export function bumpLimitParam(raw: string | null | undefined): number | undefined {
   if (raw === null || raw === undefined || raw === "") return undefined;
   const v = Number(raw);
-  if (!Number.isFinite(v) || v < 0.1 || v > 10) throw new AppError("bad_request", "The bump limit must be a number of millimetres from 0.1 to 10.", { limit: ["0.1 to 10 mm"] });
+  if (!Number.isFinite(v) || v < 0.1 || v > 10)
+    throw new AppError("bad_request", "The bump limit must be a number of millimetres from 0.1 to 10.", {
+      limit: ["0.1 to 10 mm"],
+    });
   return v;
 }
 
-export async function assemblySheetFor(plan: CutPlanRow, access: Awaited<ReturnType<typeof requireSheetAccess>>, opts: { inches?: boolean; bumpLimit?: number } = {}): Promise<AssemblySheet> {
-  const [job, project, shop] = await Promise.all([jobForPlan(plan, access.revision, access.designName), getProjectSummary(access.projectId), projectShop(access.projectId)]);
+export async function assemblySheetFor(
+  plan: CutPlanRow,
+  access: Awaited<ReturnType<typeof requireSheetAccess>>,
+  opts: { inches?: boolean; bumpLimit?: number } = {},
+): Promise<AssemblySheet> {
+  const [job, project, shop] = await Promise.all([
+    jobForPlan(plan, access.revision, access.designName),
+    getProjectSummary(access.projectId),
+    projectShop(access.projectId),
+  ]);
   return buildAssemblySheet({
     job,
     cutPlanId: plan.id,
     cutPlanNumber: plan.number,
-    project: { name: project?.name ?? "Project", site: project?.site ?? "", client: project?.clientOrganisation ?? null },
+    project: {
+      name: project?.name ?? "Project",
+      site: project?.site ?? "",
+      client: project?.clientOrganisation ?? null,
+    },
     approval: job.approval ?? null,
     shop,
     date: new Date(),

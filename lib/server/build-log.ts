@@ -19,29 +19,50 @@ import { LOG_FORM_LIMIT, PHOTO_MAX_COUNT } from "@/lib/validation/limits";
 export function mayWrite(access: ProjectAccess, kind: string, withPhotos: boolean): void {
   if (access.canManage || access.memberRole === "installer") return;
   if (access.memberRole === "client") {
-    if (kind !== "note") throw new AppError("forbidden", "A client may add notes to the build log; milestones and problems are the shop's and the crew's.");
-    if (withPhotos) throw new AppError("forbidden", "Photos in the build log come from the shop and the crew; a client's note is text.");
+    if (kind !== "note")
+      throw new AppError(
+        "forbidden",
+        "A client may add notes to the build log; milestones and problems are the shop's and the crew's.",
+      );
+    if (withPhotos)
+      throw new AppError(
+        "forbidden",
+        "Photos in the build log come from the shop and the crew; a client's note is text.",
+      );
     return;
   }
   throw new AppError("forbidden", "Your part in this project does not write to its build log.");
 }
 
-export async function addLogEntry(access: ProjectAccess, request: Request): Promise<{ id: number; photos: { id: number }[] }> {
+export async function addLogEntry(
+  access: ProjectAccess,
+  request: Request,
+): Promise<{ id: number; photos: { id: number }[] }> {
   const form = await formBody(request, LOG_FORM_LIMIT);
   const files = [...form.getAll("photos[]"), ...form.getAll("photos")].filter((f): f is File => typeof f !== "string");
   const kind = String(form.get("kind") ?? "");
   mayWrite(access, kind, files.length > 0);
   const parsed = logEntrySchema.safeParse({ kind, text: form.get("text") ?? "", parts: form.get("parts") ?? "" });
   if (!parsed.success) throw AppError.fromZod(parsed.error);
-  if (!parsed.data.text && files.length === 0) throw new AppError("bad_request", "Write something, or add a photo.", { text: ["Say what happened."] });
-  if (files.length > PHOTO_MAX_COUNT) throw new AppError("bad_request", `At most ${PHOTO_MAX_COUNT} photos in one entry.`, { photos: [`At most ${PHOTO_MAX_COUNT}.`] });
+  if (!parsed.data.text && files.length === 0)
+    throw new AppError("bad_request", "Write something, or add a photo.", { text: ["Say what happened."] });
+  if (files.length > PHOTO_MAX_COUNT)
+    throw new AppError("bad_request", `At most ${PHOTO_MAX_COUNT} photos in one entry.`, {
+      photos: [`At most ${PHOTO_MAX_COUNT}.`],
+    });
   const photos: PreparedPhoto[] = [];
   for (const file of files) photos.push(await preparePhoto(Buffer.from(await file.arrayBuffer()), file.name));
-  return storeWithPhotos(photos, access.projectId, (stored) => insertLogEntry(access.user, access.projectId, parsed.data, stored));
+  return storeWithPhotos(photos, access.projectId, (stored) =>
+    insertLogEntry(access.user, access.projectId, parsed.data, stored),
+  );
 }
 
 /** Puts each photo and its thumbnail in the store, then runs `write` with their keys; on any failure the stored objects are removed. */
-async function storeWithPhotos<T>(photos: PreparedPhoto[], projectId: number, write: (stored: StoredPhoto[]) => Promise<T>): Promise<T> {
+async function storeWithPhotos<T>(
+  photos: PreparedPhoto[],
+  projectId: number,
+  write: (stored: StoredPhoto[]) => Promise<T>,
+): Promise<T> {
   const stored: StoredPhoto[] = [];
   try {
     for (const photo of photos) {

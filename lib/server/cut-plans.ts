@@ -60,30 +60,51 @@ export async function storeCutPlan(
   const purpose = intent.purpose ?? (approval ? "production" : "review");
   const reason = intent.reason?.trim() || null;
   if (purpose === "production" && !approval && !reason)
-    throw new AppError("unprocessable", `R${target.revision.number} has no client approval. To save this cut plan for production anyway, give your reason: it is logged, and the files stay marked NOT APPROVED.`, {
-      reason: ["Say why this plan goes to production before the client's approval."],
-    });
+    throw new AppError(
+      "unprocessable",
+      `R${target.revision.number} has no client approval. To save this cut plan for production anyway, give your reason: it is logged, and the files stay marked NOT APPROVED.`,
+      {
+        reason: ["Say why this plan goes to production before the client's approval."],
+      },
+    );
   const { library, settings } = await composeFromLibrary(choice, target.projectId);
   const built = buildPlanParts(target.revision, settings, { labels: false });
   const s = built.plan.settings;
   const items = await nestItemsFor(built.plan.parts, s);
-  const problems = await checkNest({ items, nest, sheet: { width: s.sheet.length, height: s.sheet.width }, margin: s.margin, spacing: s.spacing });
+  const problems = await checkNest({
+    items,
+    nest,
+    sheet: { width: s.sheet.length, height: s.sheet.width },
+    margin: s.margin,
+    spacing: s.spacing,
+  });
   if (problems.length) {
     const shown = problems.slice(0, 5).join(" ");
-    throw new AppError("bad_request", `The cut plan was not saved: ${shown}${problems.length > 5 ? ` (and ${problems.length - 5} more)` : ""}`);
+    throw new AppError(
+      "bad_request",
+      `The cut plan was not saved: ${shown}${problems.length > 5 ? ` (and ${problems.length - 5} more)` : ""}`,
+    );
   }
   const { summary, nest: stored } = summariseCutPlan(
     built.plan,
     nest,
     { material: library.material.name, sheet: library.sheet.name, machine: library.machine.name },
-    { purpose, approvalReference: approval ? approvalReference(approval) : null, unapprovedReason: !approval && purpose === "production" ? reason : null },
+    {
+      purpose,
+      approvalReference: approval ? approvalReference(approval) : null,
+      unapprovedReason: !approval && purpose === "production" ? reason : null,
+    },
   );
-  const { id, number } = await insertCutPlan(actor, { revisionId: target.revision.id, revisionNumber: target.revision.number, projectId: target.projectId }, {
-    // The library figures are copied in, so a later edit of a library row cannot change this plan.
-    settings: { ...choice, composed: s } as unknown as Record<string, unknown>,
-    nest: stored,
-    summary: summary as unknown as Record<string, unknown>,
-  });
+  const { id, number } = await insertCutPlan(
+    actor,
+    { revisionId: target.revision.id, revisionNumber: target.revision.number, projectId: target.projectId },
+    {
+      // The library figures are copied in, so a later edit of a library row cannot change this plan.
+      settings: { ...choice, composed: s } as unknown as Record<string, unknown>,
+      nest: stored,
+      summary: summary as unknown as Record<string, unknown>,
+    },
+  );
   return { id, number, summary };
 }
 

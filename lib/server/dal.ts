@@ -20,7 +20,14 @@ export const getCurrentUser = cache(async (): Promise<CurrentUser | null> => {
   const id = Number(session?.user?.id);
   if (!Number.isInteger(id) || id <= 0) return null;
   const [user] = await db
-    .select({ id: users.id, email: users.email, name: users.name, role: users.role, active: users.active, sessionsFrom: users.sessionsFrom })
+    .select({
+      id: users.id,
+      email: users.email,
+      name: users.name,
+      role: users.role,
+      active: users.active,
+      sessionsFrom: users.sessionsFrom,
+    })
     .from(users)
     .where(eq(users.id, id))
     .limit(1);
@@ -55,7 +62,10 @@ export interface ProjectAccess {
  * The caller's access to one project. A project the caller does not belong to answers 404, the
  * same as one that does not exist, so ids reveal nothing. `manage` asks for change rights (403 otherwise).
  */
-export async function requireProjectAccess(projectId: number, need: "view" | "manage" = "view"): Promise<ProjectAccess> {
+export async function requireProjectAccess(
+  projectId: number,
+  need: "view" | "manage" = "view",
+): Promise<ProjectAccess> {
   const user = await requireUser();
   const notFound = new AppError("not_found", "No such project.");
   if (!Number.isInteger(projectId) || projectId <= 0) throw notFound;
@@ -69,7 +79,8 @@ export async function requireProjectAccess(projectId: number, need: "view" | "ma
   const memberRole = row.memberRole ?? null;
   if (user.role !== "admin" && !memberRole) throw notFound;
   const canManage = user.role === "admin" || (memberRole === "fabricator" && user.role === "fabricator");
-  if (need === "manage" && !canManage) throw new AppError("forbidden", "Only the project's fabricator or an admin can change this project.");
+  if (need === "manage" && !canManage)
+    throw new AppError("forbidden", "Only the project's fabricator or an admin can change this project.");
   return { user, projectId, memberRole, canManage };
 }
 
@@ -104,7 +115,8 @@ export async function requireRevisionAccess(revisionId: number) {
  */
 export async function requireCutPlanAccess(revisionId: number) {
   const access = await requireRevisionAccess(revisionId);
-  if (!access.canManage) throw new AppError("forbidden", "Cut plans and cut files are for the shop: the project's fabricator or an admin.");
+  if (!access.canManage)
+    throw new AppError("forbidden", "Cut plans and cut files are for the shop: the project's fabricator or an admin.");
   return access;
 }
 
@@ -120,6 +132,10 @@ export async function requireReviewAccess(reviewId: number) {
 /** Only the project's client members decide a review: the shop cannot sign for its client (403). */
 export async function requireReviewSigner(reviewId: number) {
   const access = await requireReviewAccess(reviewId);
-  if (access.memberRole !== "client") throw new AppError("forbidden", "Only the project's client can approve or ask for changes; the shop cannot sign for them.");
+  if (access.memberRole !== "client")
+    throw new AppError(
+      "forbidden",
+      "Only the project's client can approve or ask for changes; the shop cannot sign for them.",
+    );
   return access;
 }

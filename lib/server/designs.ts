@@ -30,12 +30,21 @@ export function solveStored(spec: unknown, options: { place?: ErrorPlace } = {})
   }
 }
 
-export async function createDesign(actor: CurrentUser, projectId: number, input: { name: string; spec: unknown }): Promise<number> {
+export async function createDesign(
+  actor: CurrentUser,
+  projectId: number,
+  input: { name: string; spec: unknown },
+): Promise<number> {
   const spec = validSpec(input.spec);
   return insertDesign(actor, projectId, { name: input.name, spec });
 }
 
-export async function updateDesign(actor: CurrentUser, designId: number, projectId: number, input: { name?: string; draft?: unknown; loads?: LoadsSettings }): Promise<void> {
+export async function updateDesign(
+  actor: CurrentUser,
+  designId: number,
+  projectId: number,
+  input: { name?: string; draft?: unknown; loads?: LoadsSettings },
+): Promise<void> {
   const draft = input.draft !== undefined ? validSpec(input.draft, { spec: "draft" }) : undefined;
   await updateDesignRow(actor, designId, projectId, { name: input.name, draft, loads: input.loads });
 }
@@ -45,7 +54,12 @@ export async function updateDesign(actor: CurrentUser, designId: number, project
  * solve is refused with the engine's message), then the row is written with its number taken under
  * a lock (db/queries/designs.ts insertRevision).
  */
-export async function saveRevision(actor: CurrentUser, designId: number, projectId: number, input: { spec: unknown; note: string; loads?: LoadsSettings }): Promise<{ id: number; number: number; specHash: string }> {
+export async function saveRevision(
+  actor: CurrentUser,
+  designId: number,
+  projectId: number,
+  input: { spec: unknown; note: string; loads?: LoadsSettings },
+): Promise<{ id: number; number: number; specHash: string }> {
   const spec = validSpec(input.spec);
   const result = solveStored(spec, { place: { spec: "spec" } });
   return insertRevision(actor, designId, projectId, {

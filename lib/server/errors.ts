@@ -9,7 +9,20 @@ import { ImportFailure } from "@/lib/outline-import/common";
 import { NotBracketedError } from "@/lib/track/brent";
 import { EngineError } from "@/lib/track/errors";
 
-export type ErrorKind = "bad_request" | "unauthorized" | "forbidden" | "not_found" | "conflict" | "unprocessable" | "method_not_allowed" | "too_large" | "unsupported" | "too_many" | "timeout" | "unavailable" | "internal";
+export type ErrorKind =
+  | "bad_request"
+  | "unauthorized"
+  | "forbidden"
+  | "not_found"
+  | "conflict"
+  | "unprocessable"
+  | "method_not_allowed"
+  | "too_large"
+  | "unsupported"
+  | "too_many"
+  | "timeout"
+  | "unavailable"
+  | "internal";
 
 const STATUS: Record<ErrorKind, number> = {
   bad_request: 400,
@@ -103,7 +116,8 @@ export interface ErrorPlace {
 const under = (base: string, path: string) => (base ? `${base}.${path}` : path);
 
 /** Said instead of the root finder's own wording ("The root is not bracketed: f(…)") if it ever reaches a person. */
-export const NO_CLOSING_SHAPE = "No shape closes with these settings: try fewer periods per turn, another number of lobes or a gentler track.";
+export const NO_CLOSING_SHAPE =
+  "No shape closes with these settings: try fewer periods per turn, another number of lobes or a gentler track.";
 /** Added to the engine's time-limit message: what to change. */
 export const TIMEOUT_HINT = "Try a coarser tolerance or a simpler shape.";
 
@@ -134,6 +148,6 @@ export function toAppError(error: unknown, place: ErrorPlace = {}): AppError {
   if (error instanceof EngineError) return fromEngine(error, place);
   if (error instanceof CutError) return fromCut(error, place);
   if (error instanceof ImportFailure) return new AppError("bad_request", error.message);
-  console.error("[axlewright] unexpected error:", error instanceof Error ? error.stack ?? error.message : error);
+  console.error("[axlewright] unexpected error:", error instanceof Error ? (error.stack ?? error.message) : error);
   return new AppError("internal");
 }

@@ -11,21 +11,35 @@ type SheetAccess = Awaited<ReturnType<typeof requireSheetAccess>>;
 /** What can be ticked on the plan's sheet: every part id, then every joint ("T01/T02"). */
 export async function tickItems(access: SheetAccess): Promise<string[]> {
   const job = await jobForPlan(access.plan, access.revision, access.designName);
-  const joints = job.plan.run ? job.plan.run.cuts.map((_, i) => `${job.plan.run!.segments[i].id}/${job.plan.run!.segments[i + 1].id}`) : [];
+  const joints = job.plan.run
+    ? job.plan.run.cuts.map((_, i) => `${job.plan.run!.segments[i].id}/${job.plan.run!.segments[i + 1].id}`)
+    : [];
   return [...job.plan.parts.map((p) => p.id), ...joints];
 }
 
 export async function ticksOf(access: SheetAccess) {
   const [items, state] = await Promise.all([tickItems(access), installState(access.projectId, access.plan.id)]);
   const done = new Set(state.filter((s) => s.done).map((s) => s.item));
-  return { items: items.map((item) => ({ item, done: done.has(item), ...(state.find((s) => s.item === item) ?? {}) })), installed: items.filter((i) => done.has(i)).length, total: items.length };
+  return {
+    items: items.map((item) => ({ item, done: done.has(item), ...(state.find((s) => s.item === item) ?? {}) })),
+    installed: items.filter((i) => done.has(i)).length,
+    total: items.length,
+  };
 }
 
 export async function tick(access: SheetAccess, input: { item: string; done: boolean }) {
-  if (!(access.canManage || access.memberRole === "installer")) throw new AppError("forbidden", "Only the crew, the shop or an admin tick parts as installed.");
+  if (!(access.canManage || access.memberRole === "installer"))
+    throw new AppError("forbidden", "Only the crew, the shop or an admin tick parts as installed.");
   const items = await tickItems(access);
   const item = input.item.toUpperCase();
-  if (!items.includes(item)) throw new AppError("bad_request", `${input.item} is not a part or a joint of this cut plan.`, { item: ["Not on this sheet."] });
-  const id = await insertTick(access.user, access.projectId, access.plan.id, { item, done: input.done, what: item.includes("/") ? `the joint ${item}` : `part ${item}` });
+  if (!items.includes(item))
+    throw new AppError("bad_request", `${input.item} is not a part or a joint of this cut plan.`, {
+      item: ["Not on this sheet."],
+    });
+  const id = await insertTick(access.user, access.projectId, access.plan.id, {
+    item,
+    done: input.done,
+    what: item.includes("/") ? `the joint ${item}` : `part ${item}`,
+  });
   return { id, ...(await ticksOf(access)) };
 }

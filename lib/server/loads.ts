@@ -18,7 +18,11 @@ export async function libraryMaterials(): Promise<LibraryMaterial[]> {
 }
 
 /** The check of a solved revision; `cut` when a stored cut plan fixes the board and the spans. */
-export async function loadsForRevision(revision: { spec: unknown; loads?: unknown }, result: SolveResult, cut?: CutFacts): Promise<ServerLoads> {
+export async function loadsForRevision(
+  revision: { spec: unknown; loads?: unknown },
+  result: SolveResult,
+  cut?: CutFacts,
+): Promise<ServerLoads> {
   const library = await libraryMaterials();
   const { settings, stored } = settingsOrDefault(revision.loads ?? null, library);
   return { report: checkLoads(loadsInputFor(revision.spec, settings, library, cut), result), stored };

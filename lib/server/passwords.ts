@@ -1,7 +1,6 @@
 // Passwords are stored as Argon2id hashes (RFC 9106), with the library's defaults for memory and time cost.
 import { hash, verify } from "@node-rs/argon2";
 
-
 export function hashPassword(password: string): Promise<string> {
   return hash(password);
 }

@@ -19,7 +19,13 @@ function stripe(): Stripe {
   if (!key) throw new AppError("internal", "Payments are not set up on this server (no STRIPE_SECRET_KEY).");
   const host = process.env.STRIPE_API_HOST;
   client ??= new Stripe(key, {
-    ...(host ? { host, port: Number(process.env.STRIPE_API_PORT ?? 443), protocol: (process.env.STRIPE_API_PROTOCOL ?? "https") as "http" | "https" } : {}),
+    ...(host
+      ? {
+          host,
+          port: Number(process.env.STRIPE_API_PORT ?? 443),
+          protocol: (process.env.STRIPE_API_PROTOCOL ?? "https") as "http" | "https",
+        }
+      : {}),
     maxNetworkRetries: 1,
     timeout: PAYMENT_SERVICE_TIMEOUT_MS,
   });
@@ -27,12 +33,22 @@ function stripe(): Stripe {
 }
 
 /** A payment page for the review's due deposit: the open session already made for it, or a new one. */
-export async function checkoutForDeposit(review: ReviewRow, depositId: number, customerEmail: string): Promise<{ url: string; sessionId: string }> {
+export async function checkoutForDeposit(
+  review: ReviewRow,
+  depositId: number,
+  customerEmail: string,
+): Promise<{ url: string; sessionId: string }> {
   const deposit = await findDeposit(depositId);
   if (!deposit) throw new AppError("not_found", "This review asks for no deposit.");
-  if (deposit.status !== "due") throw new AppError("conflict", deposit.status === "paid" ? "The deposit is paid already." : "The deposit falls due when the client approves.");
+  if (deposit.status !== "due")
+    throw new AppError(
+      "conflict",
+      deposit.status === "paid" ? "The deposit is paid already." : "The deposit falls due when the client approves.",
+    );
   if (deposit.checkoutSessionId) {
-    const open = await stripe().checkout.sessions.retrieve(deposit.checkoutSessionId).catch(() => null);
+    const open = await stripe()
+      .checkout.sessions.retrieve(deposit.checkoutSessionId)
+      .catch(() => null);
     if (open?.status === "open" && open.url) return { url: open.url, sessionId: open.id };
   }
   const back = `/projects/${review.projectId}/reviews/${review.id}`;
@@ -40,7 +56,16 @@ export async function checkoutForDeposit(review: ReviewRow, depositId: number, c
   const description = `Deposit for ${project?.name ?? "the project"}: ${review.designName} R${review.revisionNumber}`;
   const session = await stripe().checkout.sessions.create({
     mode: "payment",
-    line_items: [{ quantity: 1, price_data: { currency: deposit.currency.toLowerCase(), unit_amount: deposit.amountMinor, product_data: { name: description } } }],
+    line_items: [
+      {
+        quantity: 1,
+        price_data: {
+          currency: deposit.currency.toLowerCase(),
+          unit_amount: deposit.amountMinor,
+          product_data: { name: description },
+        },
+      },
+    ],
     customer_email: customerEmail,
     client_reference_id: `deposit-${deposit.id}`,
     metadata: { depositId: String(deposit.id), reviewId: String(review.id), projectId: String(review.projectId) },
@@ -57,7 +82,10 @@ export async function checkoutForDeposit(review: ReviewRow, depositId: number, c
  * default five-minute tolerance, so an old delivery is refused too); an event already acted on is
  * refused; a completed, paid session marks its deposit paid once its amount and currency match.
  */
-export async function handlePaymentWebhook(rawBody: string, signature: string | null): Promise<{ received: true; changed: boolean }> {
+export async function handlePaymentWebhook(
+  rawBody: string,
+  signature: string | null,
+): Promise<{ received: true; changed: boolean }> {
   const secret = process.env.STRIPE_WEBHOOK_SECRET;
   if (!secret) throw new AppError("internal", "Payments are not set up on this server (no STRIPE_WEBHOOK_SECRET).");
   if (!signature) throw new AppError("bad_request", "The payment event has no signature.");
@@ -67,7 +95,8 @@ export async function handlePaymentWebhook(rawBody: string, signature: string | 
   } catch {
     throw new AppError("bad_request", "The payment event's signature does not verify; it was ignored.");
   }
-  if (await eventSeen(event.id)) throw new AppError("bad_request", "This payment event was processed already; a replay changes nothing.");
+  if (await eventSeen(event.id))
+    throw new AppError("bad_request", "This payment event was processed already; a replay changes nothing.");
   if (event.type !== "checkout.session.completed") {
     await recordEvent(event.id, event.type).catch(duplicateAsReplay);
     return { received: true, changed: false };
@@ -75,18 +104,30 @@ export async function handlePaymentWebhook(rawBody: string, signature: string | 
   const session = event.data.object as Stripe.Checkout.Session;
   const deposit = await findDeposit(Number(session.metadata?.depositId));
   if (!deposit) throw new AppError("bad_request", "The payment event names no deposit of ours.");
-  if (session.payment_status !== "paid") throw new AppError("bad_request", "The payment event is not for a paid session.");
-  if (session.id !== deposit.checkoutSessionId) throw new AppError("bad_request", "The payment event is for another payment page than this deposit's.");
+  if (session.payment_status !== "paid")
+    throw new AppError("bad_request", "The payment event is not for a paid session.");
+  if (session.id !== deposit.checkoutSessionId)
+    throw new AppError("bad_request", "The payment event is for another payment page than this deposit's.");
   if (session.amount_total !== deposit.amountMinor || session.currency?.toUpperCase() !== deposit.currency)
-    throw new AppError("bad_request", "The payment event's amount or currency does not match the deposit; nothing was marked paid.");
-  if (deposit.status !== "due") throw new AppError("bad_request", deposit.status === "paid" ? "The deposit is paid already." : "The deposit is not due.");
-  const changed = await markDepositPaid(deposit, { id: event.id, type: event.type, sessionId: session.id }).catch(duplicateAsReplay);
+    throw new AppError(
+      "bad_request",
+      "The payment event's amount or currency does not match the deposit; nothing was marked paid.",
+    );
+  if (deposit.status !== "due")
+    throw new AppError(
+      "bad_request",
+      deposit.status === "paid" ? "The deposit is paid already." : "The deposit is not due.",
+    );
+  const changed = await markDepositPaid(deposit, { id: event.id, type: event.type, sessionId: session.id }).catch(
+    duplicateAsReplay,
+  );
   if (!changed) throw new AppError("bad_request", "The deposit is paid already.");
   return { received: true, changed };
 }
 
 /** Two deliveries of one event at once: the second loses on the unique event id, and is a replay. */
 function duplicateAsReplay(error: unknown): never {
-  if (isDuplicateKey(error)) throw new AppError("bad_request", "This payment event was processed already; a replay changes nothing.");
+  if (isDuplicateKey(error))
+    throw new AppError("bad_request", "This payment event was processed already; a replay changes nothing.");
   throw error;
 }

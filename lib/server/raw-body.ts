@@ -3,7 +3,13 @@ import "server-only";
 // re-encode them first), read with a size cap that holds as they arrive, even without a Content-Length.
 import { AppError } from "./errors";
 
-const tooLargeFor = (limit: number) => new AppError("too_large", limit >= 1048576 ? `The upload is over ${Math.round(limit / 1048576)} MB in all.` : `The request body is over ${Math.round(limit / 1024)} KiB.`);
+const tooLargeFor = (limit: number) =>
+  new AppError(
+    "too_large",
+    limit >= 1048576
+      ? `The upload is over ${Math.round(limit / 1048576)} MB in all.`
+      : `The request body is over ${Math.round(limit / 1024)} KiB.`,
+  );
 
 export async function cappedBytes(request: Request, limit: number): Promise<Buffer> {
   if (Number(request.headers.get("content-length") ?? "0") > limit) throw tooLargeFor(limit);

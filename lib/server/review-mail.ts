@@ -20,10 +20,19 @@ export interface PreviewImage {
 }
 
 function escapeHtml(s: string): string {
-  return s.replace(/&/g, "&amp;").replace(/</g, "&lt;").replace(/>/g, "&gt;").replace(/"/g, "&quot;").replace(/'/g, "&#39;");
+  return s
+    .replace(/&/g, "&amp;")
+    .replace(/</g, "&lt;")
+    .replace(/>/g, "&gt;")
+    .replace(/"/g, "&quot;")
+    .replace(/'/g, "&#39;");
 }
 
-const paragraphs = (s: string) => escapeHtml(s).split(/\n{2,}/).map((p) => `<p>${p.replace(/\n/g, "<br>")}</p>`).join("");
+const paragraphs = (s: string) =>
+  escapeHtml(s)
+    .split(/\n{2,}/)
+    .map((p) => `<p>${p.replace(/\n/g, "<br>")}</p>`)
+    .join("");
 
 function page(body: string): string {
   return `<!doctype html><html><body style="margin:0;background:#f6f0e1;color:#1d3557;font-family:Helvetica,Arial,sans-serif;font-size:15px;line-height:1.5"><div style="max-width:620px;margin:0 auto;padding:20px">${body}<p style="color:#6b6658;font-size:12px;margin-top:28px">Sent by Axlewright for the shop building your piece. Figures are engineering estimates; anything people ride or touch is checked against local codes by the authority having jurisdiction and a licensed engineer.</p></div></body></html>`;
@@ -41,7 +50,9 @@ export function reviewRequestMail(m: {
   preview: PreviewImage | null;
 }): MailMessage & { to: string } {
   const what = `${m.design}, revision ${m.revision}`;
-  const depositLine = m.deposit ? `A deposit of ${m.deposit} is due when you approve; the review page takes you to pay it.` : "";
+  const depositLine = m.deposit
+    ? `A deposit of ${m.deposit} is due when you approve; the review page takes you to pay it.`
+    : "";
   const text = [
     `Hello ${m.to.name},`,
     "",
@@ -73,7 +84,14 @@ export function reviewRequestMail(m: {
     text,
     html,
     attachments: m.preview
-      ? [{ filename: `${m.design.replace(/[^A-Za-z0-9]+/g, "-").toLowerCase() || "design"}-r${m.revision}-rolling.${m.preview.contentType === "image/gif" ? "gif" : "webp"}`, content: m.preview.data, contentType: m.preview.contentType, cid: PREVIEW_CID }]
+      ? [
+          {
+            filename: `${m.design.replace(/[^A-Za-z0-9]+/g, "-").toLowerCase() || "design"}-r${m.revision}-rolling.${m.preview.contentType === "image/gif" ? "gif" : "webp"}`,
+            content: m.preview.data,
+            contentType: m.preview.contentType,
+            cid: PREVIEW_CID,
+          },
+        ]
       : [],
   };
 }
@@ -99,7 +117,9 @@ export function reviewDecidedMail(m: {
     "",
     headline,
     "",
-    ...(approved ? [`Approval reference: ${m.reference} (signed ${when})`, "Cut files of this revision now carry the reference."] : [`Saved ${when}. A new revision, sent for review again, is needed.`]),
+    ...(approved
+      ? [`Approval reference: ${m.reference} (signed ${when})`, "Cut files of this revision now carry the reference."]
+      : [`Saved ${when}. A new revision, sent for review again, is needed.`]),
     ...(m.comment ? ["", "Their comment:", ...m.comment.split("\n").map((l) => `> ${l}`)] : []),
     "",
     `The review: ${m.link}`,
@@ -107,9 +127,18 @@ export function reviewDecidedMail(m: {
   const html = page(
     `<h1 style="font-size:20px;margin:0 0 12px">${approved ? "Approved" : "Changes requested"}: ${escapeHtml(what)}</h1>` +
       `<p>Hello ${escapeHtml(m.to.name)},</p><p>${escapeHtml(headline)}</p>` +
-      (approved ? `<p>Approval reference: <code>${escapeHtml(m.reference)}</code> (signed ${escapeHtml(when)}).</p>` : `<p>A new revision, sent for review again, is needed.</p>`) +
-      (m.comment ? `<blockquote style="margin:12px 0;padding:8px 12px;border-left:3px solid #1d3557;background:#fffaf0">${paragraphs(m.comment)}</blockquote>` : "") +
+      (approved
+        ? `<p>Approval reference: <code>${escapeHtml(m.reference)}</code> (signed ${escapeHtml(when)}).</p>`
+        : `<p>A new revision, sent for review again, is needed.</p>`) +
+      (m.comment
+        ? `<blockquote style="margin:12px 0;padding:8px 12px;border-left:3px solid #1d3557;background:#fffaf0">${paragraphs(m.comment)}</blockquote>`
+        : "") +
       `<p><a href="${escapeHtml(m.link)}">Open the review</a></p>`,
   );
-  return { to: m.to.email, subject: `${approved ? "Approved" : "Changes requested"}: ${m.project} — ${what}`, text, html };
+  return {
+    to: m.to.email,
+    subject: `${approved ? "Approved" : "Changes requested"}: ${m.project} — ${what}`,
+    text,
+    html,
+  };
 }

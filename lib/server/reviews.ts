@@ -39,15 +39,19 @@ const DEFAULT_RUN_MM = 2400;
 
 export const reviewPath = (projectId: number, reviewId: number) => `/projects/${projectId}/reviews/${reviewId}`;
 
-
 /** The run the mock-up shows: as asked, else the revision's cut plan, else an earlier review of the design, else the default. */
-async function chooseRun(revision: Revision, input: NewReview, result: SolveResult): Promise<{ runLengthMm: number; endTreatment: EndTreatment } | null> {
+async function chooseRun(
+  revision: Revision,
+  input: NewReview,
+  result: SolveResult,
+): Promise<{ runLengthMm: number; endTreatment: EndTreatment } | null> {
   if (!showsRun(result.mode)) return null;
   let runLengthMm = input.runLength;
   let endTreatment = input.endTreatment;
   if (runLengthMm === undefined || endTreatment === undefined) {
     const plan = await latestCutPlan(revision.id);
-    const composed = (plan?.settings as { composed?: { runLength?: number; endTreatment?: EndTreatment } } | undefined)?.composed;
+    const composed = (plan?.settings as { composed?: { runLength?: number; endTreatment?: EndTreatment } } | undefined)
+      ?.composed;
     const earlier = (await listRevisionReviews(revision.id)).find((r) => r.runLengthMm !== null);
     runLengthMm ??= composed?.runLength ?? earlier?.runLengthMm ?? DEFAULT_RUN_MM;
     endTreatment ??= composed?.endTreatment ?? earlier?.endTreatment ?? "flat";
@@ -63,17 +67,28 @@ async function chooseRun(revision: Revision, input: NewReview, result: SolveResu
   return { runLengthMm, endTreatment };
 }
 
-export async function requestReview(access: ProjectAccess & { revision: Revision; designName: string }, input: NewReview): Promise<{ id: number; revisionId: number; mailed: number }> {
-  if (!access.canManage) throw new AppError("forbidden", "Only the project's fabricator or an admin can send a revision for review.");
+export async function requestReview(
+  access: ProjectAccess & { revision: Revision; designName: string },
+  input: NewReview,
+): Promise<{ id: number; revisionId: number; mailed: number }> {
+  if (!access.canManage)
+    throw new AppError("forbidden", "Only the project's fabricator or an admin can send a revision for review.");
   const { revision, projectId } = access;
   const clients = await clientMembers(projectId);
-  if (clients.length === 0) throw new AppError("unprocessable", "This project has no client member to review it: add the client to the project first.");
+  if (clients.length === 0)
+    throw new AppError(
+      "unprocessable",
+      "This project has no client member to review it: add the client to the project first.",
+    );
   const result = solveStored(revision.spec);
   const run = await chooseRun(revision, input, result);
   let deposit: { amountMinor: number; currency: string } | null = null;
   if (input.deposit) {
     const minor = toMinor(input.deposit.amount, input.deposit.currency);
-    if (minor === null) throw new AppError("bad_request", `A ${input.deposit.currency} amount cannot have that many decimals.`, { "deposit.amount": ["Too many decimals for this currency."] });
+    if (minor === null)
+      throw new AppError("bad_request", `A ${input.deposit.currency} amount cannot have that many decimals.`, {
+        "deposit.amount": ["Too many decimals for this currency."],
+      });
     deposit = { amountMinor: minor, currency: input.deposit.currency };
   }
   const id = await insertReview(access.user, {
@@ -109,11 +124,23 @@ export async function requestReview(access: ProjectAccess & { revision: Revision
   return { id, revisionId: revision.id, mailed };
 }
 
-export async function addReviewComment(access: ProjectAccess & { review: ReviewRow }, input: { text: string; at?: number | null }) {
+export async function addReviewComment(
+  access: ProjectAccess & { review: ReviewRow },
+  input: { text: string; at?: number | null },
+) {
   const at = input.at ?? null;
   if (at !== null) {
-    const range = access.review.runLengthMm !== null ? { max: access.review.runLengthMm, what: `a place along the ${Math.round(access.review.runLengthMm)} mm run (mm from its start)` } : { max: 360, what: "the driver's turn in degrees (0 to 360)" };
-    if (at < 0 || at > range.max) throw new AppError("bad_request", `The pin must be ${range.what}.`, { at: [`Between 0 and ${Number(range.max.toFixed(1))}.`] });
+    const range =
+      access.review.runLengthMm !== null
+        ? {
+            max: access.review.runLengthMm,
+            what: `a place along the ${Math.round(access.review.runLengthMm)} mm run (mm from its start)`,
+          }
+        : { max: 360, what: "the driver's turn in degrees (0 to 360)" };
+    if (at < 0 || at > range.max)
+      throw new AppError("bad_request", `The pin must be ${range.what}.`, {
+        at: [`Between 0 and ${Number(range.max.toFixed(1))}.`],
+      });
   }
   const id = await insertComment(access.user, access.review, { text: input.text, at });
   return { id };
@@ -132,16 +159,22 @@ export async function decideReview(
 ): Promise<{ signOff: SignOffRow; payment: { url: string } | null }> {
   const { review, user } = access;
   const existing = await reviewDetail(review.id);
-  if (existing?.decision) throw new AppError("conflict", "This review has been decided already; a decision cannot be changed.");
+  if (existing?.decision)
+    throw new AppError("conflict", "This review has been decided already; a decision cannot be changed.");
   if (!sameName(input.typedName, user.name))
-    throw new AppError("unprocessable", "The name typed does not match the name on your account.", { typedName: [`Type your full name as it is on your account: ${user.name}.`] });
+    throw new AppError("unprocessable", "The name typed does not match the name on your account.", {
+      typedName: [`Type your full name as it is on your account: ${user.name}.`],
+    });
   const found = await findRevision(review.revisionId);
   if (!found) throw new AppError("not_found", "No such revision.");
   // The hash is recomputed from the spec as stored now: a revision whose stored spec no longer
   // gives its recorded hash is not signed, whatever the page showed.
   const hash = specHash(found.revision.spec);
   if (hash !== found.revision.specHash)
-    throw new AppError("conflict", `R${found.revision.number}'s stored spec no longer matches its recorded hash, so it cannot be signed. Nothing was saved; tell the shop.`);
+    throw new AppError(
+      "conflict",
+      `R${found.revision.number}'s stored spec no longer matches its recorded hash, so it cannot be signed. Nothing was saved; tell the shop.`,
+    );
   const signOff = await insertSignOff(user, review, {
     decision: input.decision,
     typedName: input.typedName.trim().replace(/\s+/g, " "),
@@ -175,7 +208,11 @@ export async function decideReview(
 }
 
 /** Sends the client on to pay a due deposit; a payment-service failure leaves the decision standing and the page offers to try again. */
-async function startDepositPayment(review: ReviewRow, detail: ReviewDetail, user: CurrentUser): Promise<{ url: string } | null> {
+async function startDepositPayment(
+  review: ReviewRow,
+  detail: ReviewDetail,
+  user: CurrentUser,
+): Promise<{ url: string } | null> {
   try {
     const { checkoutForDeposit } = await import("./payments");
     const { url } = await checkoutForDeposit(review, detail.deposit!.id, user.email);
@@ -218,6 +255,13 @@ export function reviewJson(r: ReviewDetail, opts: { withOrigin: boolean }) {
     status: reviewStatus(r),
     comments: r.comments,
     decision: r.decision ? signOffJson(r.decision, opts) : null,
-    deposit: r.deposit ? { amountMinor: r.deposit.amountMinor, currency: r.deposit.currency, status: r.deposit.status, paidAt: r.deposit.paidAt } : null,
+    deposit: r.deposit
+      ? {
+          amountMinor: r.deposit.amountMinor,
+          currency: r.deposit.currency,
+          status: r.deposit.status,
+          paidAt: r.deposit.paidAt,
+        }
+      : null,
   };
 }

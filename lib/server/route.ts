@@ -24,7 +24,11 @@ export function route<P extends Params = Params>(handler: Handler<P>) {
 }
 
 /** Reads and validates a JSON body; refuses anything over `limit` bytes (counted as it arrives) before parsing it. */
-export async function jsonBody<T extends z.ZodType>(request: Request, schema: T, limit = DEFAULT_BODY_LIMIT): Promise<z.infer<T>> {
+export async function jsonBody<T extends z.ZodType>(
+  request: Request,
+  schema: T,
+  limit = DEFAULT_BODY_LIMIT,
+): Promise<z.infer<T>> {
   const text = await rawTextBody(request, limit);
   let data: unknown;
   try {

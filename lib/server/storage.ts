@@ -13,21 +13,36 @@ function s3(): S3Client {
     endpoint: process.env.S3_ENDPOINT,
     region: process.env.S3_REGION ?? "us-east-1",
     forcePathStyle: true,
-    credentials: { accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "", secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "" },
+    credentials: {
+      accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "",
+      secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "",
+    },
     // A store that does not answer is a clear failure after a short wait, not a hung upload.
     maxAttempts: 2,
-    requestHandler: { connectionTimeout: OBJECT_STORE_CONNECT_TIMEOUT_MS, requestTimeout: OBJECT_STORE_REQUEST_TIMEOUT_MS },
+    requestHandler: {
+      connectionTimeout: OBJECT_STORE_CONNECT_TIMEOUT_MS,
+      requestTimeout: OBJECT_STORE_REQUEST_TIMEOUT_MS,
+    },
   });
   return client;
 }
 
 const bucket = () => process.env.S3_BUCKET ?? "axlewright";
 
-const unavailable = () => new AppError("unavailable", "The photo store did not answer; nothing was saved. Try again in a moment.");
+const unavailable = () =>
+  new AppError("unavailable", "The photo store did not answer; nothing was saved. Try again in a moment.");
 
 export async function putObject(key: string, body: Buffer, contentType: string): Promise<void> {
   try {
-    await s3().send(new PutObjectCommand({ Bucket: bucket(), Key: key, Body: body, ContentType: contentType, ContentLength: body.length }));
+    await s3().send(
+      new PutObjectCommand({
+        Bucket: bucket(),
+        Key: key,
+        Body: body,
+        ContentType: contentType,
+        ContentLength: body.length,
+      }),
+    );
   } catch (error) {
     console.error("[axlewright] object not stored:", error instanceof Error ? error.message : error);
     throw unavailable();
@@ -37,9 +52,13 @@ export async function putObject(key: string, body: Buffer, contentType: string):
 export async function getObject(key: string): Promise<{ body: Buffer; contentType: string }> {
   try {
     const out = await s3().send(new GetObjectCommand({ Bucket: bucket(), Key: key }));
-    return { body: Buffer.from(await out.Body!.transformToByteArray()), contentType: out.ContentType ?? "application/octet-stream" };
+    return {
+      body: Buffer.from(await out.Body!.transformToByteArray()),
+      contentType: out.ContentType ?? "application/octet-stream",
+    };
   } catch (error) {
-    if ((error as { name?: string }).name === "NoSuchKey") throw new AppError("not_found", "That photo is no longer in the store.");
+    if ((error as { name?: string }).name === "NoSuchKey")
+      throw new AppError("not_found", "That photo is no longer in the store.");
     console.error("[axlewright] object not read:", error instanceof Error ? error.message : error);
     throw unavailable();
   }

@@ -34,7 +34,15 @@ export const clearLocalDraft = drafts.clear;
 /** Same design? Compared as JSON with keys sorted, so key order does not matter. */
 export function sameSpec(a: unknown, b: unknown): boolean {
   const sorted = (v: unknown): unknown =>
-    Array.isArray(v) ? v.map(sorted) : v && typeof v === "object" ? Object.fromEntries(Object.entries(v).sort(([x], [y]) => (x < y ? -1 : 1)).map(([k, x]) => [k, sorted(x)])) : v;
+    Array.isArray(v)
+      ? v.map(sorted)
+      : v && typeof v === "object"
+        ? Object.fromEntries(
+            Object.entries(v)
+              .sort(([x], [y]) => (x < y ? -1 : 1))
+              .map(([k, x]) => [k, sorted(x)]),
+          )
+        : v;
   return JSON.stringify(sorted(a)) === JSON.stringify(sorted(b));
 }
 

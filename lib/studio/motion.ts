@@ -124,7 +124,14 @@ export function positionAt(r: SolvedGeometry, along: number): number {
 }
 
 /** A periodic table extended by whole periods: value(x) = k·turn + table(x − kP). */
-function extended(xs: Float64Array, ys: Float64Array, ds: Float64Array, period: number, turn: number, x: number): number {
+function extended(
+  xs: Float64Array,
+  ys: Float64Array,
+  ds: Float64Array,
+  period: number,
+  turn: number,
+  x: number,
+): number {
   const k = Math.floor((x - xs[0]) / period);
   return k * turn + hermite(xs, ys, ds, x - k * period);
 }
@@ -157,7 +164,15 @@ export function xAtWheelAngle(r: SolvedGeometry, angle: number): number {
   const P = periodOf(r);
   const k = Math.floor((angle - t.angle[0]) / t.turn);
   // Read backwards the slope is dx/dθ = r.
-  return k * P + hermite(t.angle, t.xs, t.dAngle.map((d) => 1 / d), angle - k * t.turn);
+  return (
+    k * P +
+    hermite(
+      t.angle,
+      t.xs,
+      t.dAngle.map((d) => 1 / d),
+      angle - k * t.turn,
+    )
+  );
 }
 
 /** Track height at x, the period repeated (track modes). */
@@ -186,7 +201,6 @@ export interface Pose {
   /** Twin wheels: where the lower wheel touches the track (straight above its axle). */
   lowerContact?: Pt;
 }
-
 
 /** Everything the canvas draws at one cycle position, from the engine's tables alone. */
 export function poseAt(r: SolvedGeometry, position: number): Pose {

@@ -33,6 +33,7 @@ export function sceneOf(r: SolvedGeometry): Scene {
   const parts = [discBounds(runStart, axleY, r.wheel.rMax), discBounds(runEnd, axleY, r.wheel.rMax)];
   if (track.length) parts.push(boundsOf(track));
   const lowerAxleY = r.mode === "twin-wheels" ? r.lowerAxleHeight : undefined;
-  if (lowerAxleY !== undefined && r.partner) parts.push(discBounds(runStart, lowerAxleY, r.partner.rMax), discBounds(runEnd, lowerAxleY, r.partner.rMax));
+  if (lowerAxleY !== undefined && r.partner)
+    parts.push(discBounds(runStart, lowerAxleY, r.partner.rMax), discBounds(runEnd, lowerAxleY, r.partner.rMax));
   return { pair: false, track, axleY, lowerAxleY, runStart, runEnd, period, bounds: unionBounds(...parts) };
 }

@@ -11,7 +11,19 @@ type Spec = DesignSpecInput;
 type Wheel = NonNullable<Spec["wheel"]>;
 type Track = NonNullable<Spec["track"]>;
 
-const LENGTH_KEYS = ["inradius", "circumradius", "side", "cornerRadius", "semiMajor", "semiMinor", "radius", "axleOffset", "amplitude", "period", "scale"] as const;
+const LENGTH_KEYS = [
+  "inradius",
+  "circumradius",
+  "side",
+  "cornerRadius",
+  "semiMajor",
+  "semiMinor",
+  "radius",
+  "axleOffset",
+  "amplitude",
+  "period",
+  "scale",
+] as const;
 
 function round(v: number): number {
   // Keep what the user sees tidy without losing real precision (12 significant digits).
@@ -28,7 +40,11 @@ function rescaleFormula(source: string, variable: "x" | "theta", k: number): str
   }
   const scaledArgument =
     variable === "x"
-      ? root.transform((node) => ((node as { isSymbolNode?: boolean; name?: string }).isSymbolNode && (node as { name?: string }).name === "x" ? parse(`(${k} * x)`) : node))
+      ? root.transform((node) =>
+          (node as { isSymbolNode?: boolean; name?: string }).isSymbolNode && (node as { name?: string }).name === "x"
+            ? parse(`(${k} * x)`)
+            : node,
+        )
       : root;
   return `(${scaledArgument.toString()}) / ${k}`;
 }

@@ -92,7 +92,10 @@ export function hermite(xs: ArrayLike<number>, ys: ArrayLike<number>, ds: ArrayL
   const s2 = s * s;
   const s3 = s2 * s;
   return (
-    (2 * s3 - 3 * s2 + 1) * ys[i] + (s3 - 2 * s2 + s) * h * ds[i] + (-2 * s3 + 3 * s2) * ys[i + 1] + (s3 - s2) * h * ds[i + 1]
+    (2 * s3 - 3 * s2 + 1) * ys[i] +
+    (s3 - 2 * s2 + s) * h * ds[i] +
+    (-2 * s3 + 3 * s2) * ys[i + 1] +
+    (s3 - s2) * h * ds[i + 1]
   );
 }
 

@@ -28,12 +28,7 @@ export interface BrentResult {
 
 const EPS = 2.220446049250313e-16;
 
-export function brent(
-  f: (x: number) => number,
-  a: number,
-  b: number,
-  opts: BrentOptions = {},
-): BrentResult {
+export function brent(f: (x: number) => number, a: number, b: number, opts: BrentOptions = {}): BrentResult {
   const deadline = opts.deadline ?? NO_DEADLINE;
   const maxIter = opts.maxIter ?? 200;
   let fa = f(a);

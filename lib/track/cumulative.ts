@@ -79,7 +79,12 @@ export class Cumulative {
             `The formula gives a value that is infinite or not a number between ${a.toPrecision(4)} and ${b.toPrecision(4)}, so the shape cannot be worked out there: check the formula in that range.`,
           );
         const room = this.panels.length + stack.length < maxPanels;
-        if (room && q.error > Math.max(rel * Math.abs(q.value), 1e-300) && depth < 30 && b - a > 1e-13 * (Math.abs(a) + 1)) {
+        if (
+          room &&
+          q.error > Math.max(rel * Math.abs(q.value), 1e-300) &&
+          depth < 30 &&
+          b - a > 1e-13 * (Math.abs(a) + 1)
+        ) {
           const m = 0.5 * (a + b);
           stack.push([m, b, depth + 1], [a, m, depth + 1]);
           continue;

@@ -25,15 +25,18 @@ export function d1(f: (t: number) => number, t: number, scale: number, side: Sid
 export function d2(f: (t: number) => number, t: number, scale: number, side: Side = 0): number {
   if (side === 0) {
     const h = 5e-3 * scale;
-    return (
-      (-f(t - 2 * h) + 16 * f(t - h) - 30 * f(t) + 16 * f(t + h) - f(t + 2 * h)) / (12 * h * h)
-    );
+    return (-f(t - 2 * h) + 16 * f(t - h) - 30 * f(t) + 16 * f(t + h) - f(t + 2 * h)) / (12 * h * h);
   }
   const s = side;
   const g = 4e-3 * scale;
   // Fourth-order one-sided six-point formula.
   return (
-    (45 * f(t) - 154 * f(t + s * g) + 214 * f(t + 2 * s * g) - 156 * f(t + 3 * s * g) + 61 * f(t + 4 * s * g) - 10 * f(t + 5 * s * g)) /
+    (45 * f(t) -
+      154 * f(t + s * g) +
+      214 * f(t + 2 * s * g) -
+      156 * f(t + 3 * s * g) +
+      61 * f(t + 4 * s * g) -
+      10 * f(t + 5 * s * g)) /
     (12 * g * g)
   );
 }

@@ -37,7 +37,11 @@ function at<T>(pw: Piecewise, piece: { a: number; b: number }, fn: (t: number, s
 function minRadius(pw: Piecewise, kappa: (t: number, side: -1 | 0 | 1) => number): number {
   let best = 0;
   for (const p of pieces(pw)) {
-    const e = extremes(at(pw, p, (t, s) => Math.abs(kappa(t, s))), [p], 24);
+    const e = extremes(
+      at(pw, p, (t, s) => Math.abs(kappa(t, s))),
+      [p],
+      24,
+    );
     best = Math.max(best, e.max.value);
   }
   return best === 0 ? Infinity : 1 / best;

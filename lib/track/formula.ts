@@ -55,8 +55,10 @@ export function parseProblem(raw: string): string {
   const at = /\(char (\d+)\)/.exec(raw);
   const place = at ? ` at character ${at[1]}` : "";
   if (/Parenthesis \) expected/.test(raw)) return `A bracket is opened but not closed${place}: add the missing ")".`;
-  if (/Unexpected end of expression/.test(raw)) return `The formula stops too soon${place}: something is missing after the last sign or bracket.`;
-  if (/Value expected/.test(raw)) return `A number or a name is missing${place}, between two signs or after an opening bracket.`;
+  if (/Unexpected end of expression/.test(raw))
+    return `The formula stops too soon${place}: something is missing after the last sign or bracket.`;
+  if (/Value expected/.test(raw))
+    return `A number or a name is missing${place}, between two signs or after an opening bracket.`;
   const part = /Unexpected part "([^"]*)"/.exec(raw);
   if (part) return `"${part[1]}"${place} follows without a sign: write the multiplication out, e.g. "2*x", not "2 x".`;
   const op = /Unexpected operator (\S+)/.exec(raw);
@@ -98,7 +100,8 @@ export function compileFormula(source: string, variable: string, where: string):
     switch (n.type) {
       case "ConstantNode": {
         const v = n.value;
-        if (typeof v !== "number" || !Number.isFinite(v)) fail(`Only numbers are allowed, not ${JSON.stringify(v)}.`, where);
+        if (typeof v !== "number" || !Number.isFinite(v))
+          fail(`Only numbers are allowed, not ${JSON.stringify(v)}.`, where);
         return () => v;
       }
       case "SymbolNode": {
@@ -138,7 +141,10 @@ export function compileFormula(source: string, variable: string, where: string):
         if (!spec) fail(`The function "${name || "?"}" is not allowed.`, where);
         const args = (n.args ?? []).map((a) => build(a, depth + 1));
         if (args.length < spec.arity[0] || args.length > spec.arity[1])
-          fail(`${name} takes ${spec.arity[0] === spec.arity[1] ? spec.arity[0] : `${spec.arity[0]} to ${spec.arity[1]}`} argument(s), not ${args.length}.`, where);
+          fail(
+            `${name} takes ${spec.arity[0] === spec.arity[1] ? spec.arity[0] : `${spec.arity[0]} to ${spec.arity[1]}`} argument(s), not ${args.length}.`,
+            where,
+          );
         const f = spec.fn;
         if (args.length === 1) {
           const [a] = args;
@@ -151,7 +157,10 @@ export function compileFormula(source: string, variable: string, where: string):
         return (x) => f(...args.map((g) => g(x)));
       }
       default:
-        fail(`"${n.type.replace(/Node$/, "")}" is not allowed in a formula: only arithmetic and elementary functions.`, where);
+        fail(
+          `"${n.type.replace(/Node$/, "")}" is not allowed in a formula: only arithmetic and elementary functions.`,
+          where,
+        );
     }
   };
   return build(root, 0);

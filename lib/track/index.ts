@@ -24,7 +24,15 @@
 // - Twin wheels: the upper wheel is `wheel` (axle at axleHeight), the lower is `partner` (axle at
 //   lowerAxleHeight); both close with periodsPerTurn periods per turn.
 
-export { designSpecSchema, MODE_NAMES, parseSpec, canonicalJson, specHash, type DesignSpec, type DesignSpecInput } from "./spec";
+export {
+  designSpecSchema,
+  MODE_NAMES,
+  parseSpec,
+  canonicalJson,
+  specHash,
+  type DesignSpec,
+  type DesignSpecInput,
+} from "./spec";
 export { solve, solveInStages, ENGINE_VERSION, type SolveOptions, type SolveStages } from "./solve";
 export { EngineError, isEngineError, type EngineErrorCode } from "./errors";
 export { tileRun, type TileInput, type TileResult } from "./tiling";

@@ -91,7 +91,12 @@ export interface Sweep {
   points: Float64Array[];
 }
 
-export function sweep(body: RollingBody, designed: TrackHeight, span: { from: number; to: number; step: number }, o: { top: (x: number) => number; margin: number }): Sweep {
+export function sweep(
+  body: RollingBody,
+  designed: TrackHeight,
+  span: { from: number; to: number; step: number },
+  o: { top: (x: number) => number; margin: number },
+): Sweep {
   const n = Math.max(1, Math.ceil((span.to - span.from) / span.step));
   const xs = Array.from({ length: n + 1 }, (_, i) => span.from + ((span.to - span.from) * i) / n);
   const designedHeights = xs.map((x) => restingHeight(body, designed, x));
@@ -147,7 +152,12 @@ export function bumpOver(built: TrackHeight, s: Sweep, refine?: { body: RollingB
 }
 
 /** The largest change of axle height between two tracks, the axle swept over [from, to] in `step`s (every outline point kept). */
-export function axleBump(body: RollingBody, designed: TrackHeight, built: TrackHeight, span: { from: number; to: number; step: number }): Bump {
+export function axleBump(
+  body: RollingBody,
+  designed: TrackHeight,
+  built: TrackHeight,
+  span: { from: number; to: number; step: number },
+): Bump {
   return bumpOver(built, sweep(body, designed, span, { top: () => Infinity, margin: Infinity }), { body, designed });
 }
 
@@ -216,12 +226,22 @@ export const TOLERANCE_STEP = 0.05;
 const roundDown = (v: number) => Math.floor(v / TOLERANCE_STEP + 1e-9) * TOLERANCE_STEP;
 
 /** ± how far a joint at `station` may sit off it, both ways, before the axle bumps by more than the limit. */
-export function jointTolerance(body: RollingBody, designed: TrackHeight, station: number, o: ToleranceOptions): { tolerance: number; plus: number; minus: number } {
+export function jointTolerance(
+  body: RollingBody,
+  designed: TrackHeight,
+  station: number,
+  o: ToleranceOptions,
+): { tolerance: number; plus: number; minus: number } {
   const step = o.step ?? o.reach / 300;
   const cap = o.cap ?? o.reach / 4;
   const precision = o.precision ?? o.limit / 50;
   // One sweep for every shift tried: far enough past the joint for the largest.
-  const s = sweep(body, designed, { from: station - o.reach, to: station + o.reach + cap, step }, { top: topWithin(designed, o.reach, step, cap), margin: 2 * o.limit });
+  const s = sweep(
+    body,
+    designed,
+    { from: station - o.reach, to: station + o.reach + cap, step },
+    { top: topWithin(designed, o.reach, step, cap), margin: 2 * o.limit },
+  );
   const bumpFor = (shift: number) => bumpOver(shiftedFrom(designed, station, shift), s, { body, designed }).bump;
   const plus = roundDown(largestWithin((c) => bumpFor(c), o.limit, cap, precision));
   const minus = roundDown(largestWithin((c) => bumpFor(-c), o.limit, cap, precision));
@@ -229,11 +249,29 @@ export function jointTolerance(body: RollingBody, designed: TrackHeight, station
 }
 
 /** How far a support may sit low before the axle bumps by more than the limit. */
-export function supportTolerance(body: RollingBody, designed: TrackHeight, support: { at: number; left: number; right: number }, o: ToleranceOptions): number {
+export function supportTolerance(
+  body: RollingBody,
+  designed: TrackHeight,
+  support: { at: number; left: number; right: number },
+  o: ToleranceOptions,
+): number {
   const step = o.step ?? o.reach / 300;
   const cap = o.cap ?? o.reach / 4;
   const precision = o.precision ?? o.limit / 50;
   // The track sinks most at the support itself, so the axle does too: sweep the wheel's reach about it.
-  const s = sweep(body, designed, { from: Math.max(support.left, support.at - o.reach), to: Math.min(support.right, support.at + o.reach), step }, { top: topWithin(designed, o.reach, step), margin: 2 * o.limit });
-  return roundDown(largestWithin((drop) => bumpOver(loweredAt(designed, support.at, drop, support.left, support.right), s, { body, designed }).bump, o.limit, cap, precision));
+  const s = sweep(
+    body,
+    designed,
+    { from: Math.max(support.left, support.at - o.reach), to: Math.min(support.right, support.at + o.reach), step },
+    { top: topWithin(designed, o.reach, step), margin: 2 * o.limit },
+  );
+  return roundDown(
+    largestWithin(
+      (drop) =>
+        bumpOver(loweredAt(designed, support.at, drop, support.left, support.right), s, { body, designed }).bump,
+      o.limit,
+      cap,
+      precision,
+    ),
+  );
 }

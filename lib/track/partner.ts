@@ -48,7 +48,11 @@ export function solveCentreDistance(wheel: Wheel, lobes: number, deadline: Deadl
     return brent(F, lo, hi, { xtol: 1e-15 * rMax, deadline }).root;
   } catch (e) {
     if (!(e instanceof NotBracketedError)) throw e;
-    throw new EngineError("no-solution", `No centre distance gives a partner with ${lobes} lobe${lobes === 1 ? "" : "s"} that closes: try another number of lobes.`, "lobes");
+    throw new EngineError(
+      "no-solution",
+      `No centre distance gives a partner with ${lobes} lobe${lobes === 1 ? "" : "s"} that closes: try another number of lobes.`,
+      "lobes",
+    );
   }
 }
 
@@ -84,6 +88,9 @@ export function partnerFor(wheel: Wheel, lobes: number, a: number, deadline: Dea
     const rr = a - wheel.r(t);
     return [rr * Math.sin(th), rr * Math.cos(th)];
   };
-  const breaks = pieces.map((p) => p.a).filter((x) => x > 0).map((t) => follower.value(t));
+  const breaks = pieces
+    .map((p) => p.a)
+    .filter((x) => x > 0)
+    .map((t) => follower.value(t));
   return { a, lobes, T1, T2, follower, r, breaks, point };
 }

@@ -15,7 +15,13 @@ export interface Piecewise {
   piece(t: number, side?: Side): [number, number];
 }
 
-export function piecewise(f: (t: number) => number, lo: number, hi: number, breaks: readonly number[], scaleCap: number): Piecewise {
+export function piecewise(
+  f: (t: number) => number,
+  lo: number,
+  hi: number,
+  breaks: readonly number[],
+  scaleCap: number,
+): Piecewise {
   const knots = [lo, ...breaks.filter((b) => b > lo && b < hi).sort((a, b) => a - b), hi];
   const piece = (t: number, side: Side = 0): [number, number] => {
     let i = 0;

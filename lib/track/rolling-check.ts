@@ -115,7 +115,8 @@ function deepest<PoseT>(
     for (const copy of copies(pose)) {
       const d = probeGrid.map((v) => depth(pose, v, copy));
       for (let j = 0; j < d.length; j++)
-        if (d[j] > -Infinity && (j === 0 || d[j] >= d[j - 1]) && (j === d.length - 1 || d[j] >= d[j + 1])) cands.push({ d: d[j], j, copy });
+        if (d[j] > -Infinity && (j === 0 || d[j] >= d[j - 1]) && (j === d.length - 1 || d[j] >= d[j + 1]))
+          cands.push({ d: d[j], j, copy });
     }
     cands.sort((x, y) => y.d - x.d);
     let best = { d: -Infinity, v: probeGrid[0], copy: 0 };
@@ -214,7 +215,8 @@ export function checkTrackRoll(inp: TrackRollInput): RollCheck {
   const closureError = Math.abs(wrapPi(poses[poses.length - 1].alpha - T));
 
   let maxR = inp.size;
-  for (let i = 0; i <= 256; i++) maxR = Math.max(maxR, Math.hypot(inp.wheel.x((inp.wheel.V * i) / 256), inp.wheel.y((inp.wheel.V * i) / 256)));
+  for (let i = 0; i <= 256; i++)
+    maxR = Math.max(maxR, Math.hypot(inp.wheel.x((inp.wheel.V * i) / 256), inp.wheel.y((inp.wheel.V * i) / 256)));
   maxR *= 1.0000001;
   const probe = inp.probe;
   // Probe points do not depend on the pose: compute each once.
@@ -254,7 +256,15 @@ export function checkTrackRoll(inp: TrackRollInput): RollCheck {
     return out;
   };
   const probeGrid = probe.kind === "track" ? paramGrid(U, inp.track.breaks, 48) : paramGrid(probe.V, probe.breaks, 48);
-  const deep = deepest(poses.map((q) => q.u), poses, (u) => poseAt(u, 0), probeGrid, depth, copies, deadline);
+  const deep = deepest(
+    poses.map((q) => q.u),
+    poses,
+    (u) => poseAt(u, 0),
+    probeGrid,
+    depth,
+    copies,
+    deadline,
+  );
   const interference: Interference =
     deep.depth > INTERFERENCE_FLOOR * inp.size
       ? { depth: deep.depth, at: world(deep.pose, deep.v, deep.copy), when: deep.pose.ax }
@@ -369,7 +379,15 @@ export function checkPairRoll(inp: PairRollInput): RollCheck {
   // Every lobe of the partner is tested at every pose of a driver sector; the sectors are alike.
   const lobes = Array.from({ length: Math.max(1, Math.round(TAU / T2)) }, (_, j) => j);
   const probeGrid = paramGrid(inp.partner.V, inp.partner.breaks, 48);
-  const deep = deepest(poses.map((q) => q.v), poses, (v) => poseAt(v, 0), probeGrid, depth, () => lobes, deadline);
+  const deep = deepest(
+    poses.map((q) => q.v),
+    poses,
+    (v) => poseAt(v, 0),
+    probeGrid,
+    depth,
+    () => lobes,
+    deadline,
+  );
   const interference: Interference =
     deep.depth > INTERFERENCE_FLOOR * inp.size
       ? { depth: deep.depth, at: world(deep.pose, deep.v, deep.copy), when: deep.pose.a1 }

@@ -50,7 +50,11 @@ export function sampleCurve(
     deadline.check();
     const m = 0.5 * (a + b);
     const pm = c(m);
-    const err = Math.max(distToChord(pm, pa, pb), distToChord(c(0.5 * (a + m)), pa, pb), distToChord(c(0.5 * (m + b)), pa, pb));
+    const err = Math.max(
+      distToChord(pm, pa, pb),
+      distToChord(c(0.5 * (a + m)), pa, pb),
+      distToChord(c(0.5 * (m + b)), pa, pb),
+    );
     if (err > tol && depth < 40 && m > a && m < b) {
       // The sagitta grows as κL²/8, so cut into the number of parts that brings it under the
       // tolerance, instead of halving blindly.
@@ -66,7 +70,11 @@ export function sampleCurve(
       }
     } else {
       if (--budget.left < 0)
-        throw new EngineError("too-fine", `The tolerance ${tol} needs more than ${MAX_OUTPUT_POINTS} output points; use a coarser tolerance.`, "tolerance");
+        throw new EngineError(
+          "too-fine",
+          `The tolerance ${tol} needs more than ${MAX_OUTPUT_POINTS} output points; use a coarser tolerance.`,
+          "tolerance",
+        );
       u.push(b);
       pts.push(pb);
     }

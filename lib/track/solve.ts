@@ -48,7 +48,10 @@ interface Stages {
 const fmt = (v: number) => Number(v.toPrecision(4)).toString();
 
 /** Rotates body points by δ (counter-clockwise). */
-const rot = (p: Pt, d: number): Pt => [p[0] * Math.cos(d) - p[1] * Math.sin(d), p[0] * Math.sin(d) + p[1] * Math.cos(d)];
+const rot = (p: Pt, d: number): Pt => [
+  p[0] * Math.cos(d) - p[1] * Math.sin(d),
+  p[0] * Math.sin(d) + p[1] * Math.cos(d),
+];
 
 /** A closed outline from one pattern repeated `copies` times, each turned by `step` radians. */
 function replicate(pattern: Pt[], copies: number, step: number): Pt[] {
@@ -67,18 +70,37 @@ function concat(parts: Pt[][]): Pt[] {
 
 function wheelOutline(wheel: Wheel, ctx: Ctx): Pt[] {
   const breaks = wheel.pieces.map((p) => p.a).filter((a) => a > 0);
-  return sampleCurve((t) => {
-    const r = wheel.r(t);
-    const [x, y] = ray(t);
-    return [r * x, r * y];
-  }, 0, TAU, breaks, ctx.tol, { deadline: ctx.deadline, budget: ctx.budget }).pts;
+  return sampleCurve(
+    (t) => {
+      const r = wheel.r(t);
+      const [x, y] = ray(t);
+      return [r * x, r * y];
+    },
+    0,
+    TAU,
+    breaks,
+    ctx.tol,
+    { deadline: ctx.deadline, budget: ctx.budget },
+  ).pts;
 }
 
-function warnings(check: Check, fig: Figures, size: number, units: string, hasCorners: boolean, isPair: boolean): Warning[] {
+function warnings(
+  check: Check,
+  fig: Figures,
+  size: number,
+  units: string,
+  hasCorners: boolean,
+  isPair: boolean,
+): Warning[] {
   const out: Warning[] = [];
   const i = check.interference;
   if (i.depth > 0) {
-    const where = i.when === null ? "" : isPair ? ` when the driver has turned ${fmt(i.when)} rad` : ` with the axle at x = ${fmt(i.when)} ${units}`;
+    const where =
+      i.when === null
+        ? ""
+        : isPair
+          ? ` when the driver has turned ${fmt(i.when)} rad`
+          : ` with the axle at x = ${fmt(i.when)} ${units}`;
     out.push({
       code: "interference",
       message: `The ${isPair ? "wheels overlap" : "wheel cuts into the track"} by up to ${fmt(i.depth)} ${units}${where}, away from the contact point. It cannot roll as designed.`,
@@ -100,7 +122,10 @@ function warnings(check: Check, fig: Figures, size: number, units: string, hasCo
   } else {
     const r = Math.min(fig.radiusA, fig.radiusB);
     if (r < SHARP_FRACTION * size)
-      out.push({ code: "sharp-curvature", message: `A very tight bend: the smallest radius of curvature is ${fmt(r)} ${units}, under ${SHARP_FRACTION * 100}% of the wheel size.` });
+      out.push({
+        code: "sharp-curvature",
+        message: `A very tight bend: the smallest radius of curvature is ${fmt(r)} ${units}, under ${SHARP_FRACTION * 100}% of the wheel size.`,
+      });
   }
   return out;
 }
@@ -110,7 +135,10 @@ function trackForWheelMode(ctx: Ctx, base: Base): Stages {
   const wheel = buildWheel(ctx.spec.wheel!);
   const tfw = solveTrackForWheel(wheel, deadline);
   const { T, period } = tfw;
-  const trackS = sampleCurve((t) => [tfw.x.value(t), -wheel.r(t)], 0, T, tfw.breaks, tol, { deadline, budget: ctx.budget });
+  const trackS = sampleCurve((t) => [tfw.x.value(t), -wheel.r(t)], 0, T, tfw.breaks, tol, {
+    deadline,
+    budget: ctx.budget,
+  });
   const wheelPts = wheelOutline(wheel, ctx);
   const geometry: SolvedGeometry = {
     ...base,
@@ -134,10 +162,15 @@ function trackForWheelMode(ctx: Ctx, base: Base): Stages {
     });
     const hasCorners = wheel.corners.length > 0;
     const fig = wheelAndRoadFigures(piecewise(wheel.r, 0, T, tfw.breaks, 1), hasCorners);
-    const c = makeCheck(roll, { max: fig.friction.value, at: tfw.x.value(fig.friction.at) }, { wheel: fig.radiusA, track: fig.radiusB }, {
-      min: fig.contact.value,
-      at: tfw.x.value(fig.contact.at),
-    });
+    const c = makeCheck(
+      roll,
+      { max: fig.friction.value, at: tfw.x.value(fig.friction.at) },
+      { wheel: fig.radiusA, track: fig.radiusB },
+      {
+        min: fig.contact.value,
+        at: tfw.x.value(fig.contact.at),
+      },
+    );
     return { check: c, warnings: warnings(c, fig, wheel.rMax, ctx.spec.units, hasCorners, false) };
   };
   return { geometry, check };
@@ -219,7 +252,9 @@ function wheelForTrackMode(ctx: Ctx, base: Base): Stages {
   const wf = wheelFromTrack(track, h, k, 1, deadline);
   const trackS = trackSamples(track, ctx);
   const pattern = concat(
-    track.pieces.map((p, i) => sampleCurve((s) => wf.point(i, s), p.s0, p.s1, [], tol, { deadline, budget: ctx.budget }).pts),
+    track.pieces.map(
+      (p, i) => sampleCurve((s) => wf.point(i, s), p.s0, p.s1, [], tol, { deadline, budget: ctx.budget }).pts,
+    ),
   );
   const wheelPts = replicate(pattern, k, TAU / k);
   const rMax = h - track.yMin;
@@ -230,12 +265,16 @@ function wheelForTrackMode(ctx: Ctx, base: Base): Stages {
     axleHeight: h,
     wheel: { points: wheelPts, rMin: h - track.yMax, rMax, symmetry: k },
     track: { points: concat(trackS.map((s) => s.pts)) },
-    motion: concat(
-      trackS.map((s, i) => s.u.map((u): Pt => [track.pieces[i].x(u), wf.thetaOf(i, u)])),
-    ).map(([x, angle]) => ({ x, angle })),
+    motion: concat(trackS.map((s, i) => s.u.map((u): Pt => [track.pieces[i].x(u), wf.thetaOf(i, u)]))).map(
+      ([x, angle]) => ({ x, angle }),
+    ),
   };
   const options = (deadline: Deadline): SolveOption[] =>
-    [...heightOptions(track, 1, deadline)].map(([kk, hh]) => ({ periodsPerTurn: kk, axleHeight: hh, rMax: hh - track.yMin }));
+    [...heightOptions(track, 1, deadline)].map(([kk, hh]) => ({
+      periodsPerTurn: kk,
+      axleHeight: hh,
+      rMax: hh - track.yMin,
+    }));
   const check = (deadline: Deadline): CheckResult => {
     const inner = track.breaksX.filter((x) => x > 0 && x < P);
     const tp = trackParam(track);
@@ -249,18 +288,33 @@ function wheelForTrackMode(ctx: Ctx, base: Base): Stages {
     const roll = checkTrackRoll({
       wheel: curveOf((v) => wf.point(...tp.at(v)), tp.V, tp.breaks),
       T: TAU / k,
-      track: curveOf((v) => {
-        const [i, s] = tp.at(v);
-        return [track.pieces[i].x(s), track.pieces[i].y(s)];
-      }, tp.V, tp.breaks),
+      track: curveOf(
+        (v) => {
+          const [i, s] = tp.at(v);
+          return [track.pieces[i].x(s), track.pieces[i].y(s)];
+        },
+        tp.V,
+        tp.breaks,
+      ),
       H: h,
       size: h - track.yMin,
-      probe: { kind: "wheel", curve: wheelCurve, V: k * tp.V, breaks: wheelBreaks.filter((b) => b > 0), trackY: track.yAt },
+      probe: {
+        kind: "wheel",
+        curve: wheelCurve,
+        V: k * tp.V,
+        breaks: wheelBreaks.filter((b) => b > 0),
+        trackY: track.yAt,
+      },
       deadline,
     });
     const kinks = trackKinks(track);
     const fig = trackAndWheelFigures(piecewise(track.yAt, 0, P, inner, P), h, 1, kinks);
-    const c = makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusB, track: fig.radiusA }, { min: fig.contact.value, at: fig.contact.at });
+    const c = makeCheck(
+      roll,
+      { max: fig.friction.value, at: fig.friction.at },
+      { wheel: fig.radiusB, track: fig.radiusA },
+      { min: fig.contact.value, at: fig.contact.at },
+    );
     return { check: c, warnings: warnings(c, fig, rMax, ctx.spec.units, kinks, false) };
   };
   return { geometry, options, check };
@@ -306,7 +360,12 @@ function partnerMode(ctx: Ctx, base: Base): Stages {
     const hasCorners = wheel.corners.length > 0;
     const fig = pairFigures(piecewise(wheel.r, 0, T1, breaks, 1), a, hasCorners);
     const c: Check = {
-      ...makeCheck(roll, { max: fig.friction.value, at: fig.friction.at }, { wheel: fig.radiusA, partner: fig.radiusB }, { min: fig.contact.value, at: fig.contact.at }),
+      ...makeCheck(
+        roll,
+        { max: fig.friction.value, at: fig.friction.at },
+        { wheel: fig.radiusA, partner: fig.radiusB },
+        { min: fig.contact.value, at: fig.contact.at },
+      ),
       speedRatio: { min: wheel.rMin / (a - wheel.rMin), max: wheel.rMax / (a - wheel.rMax) },
     };
     return { check: c, warnings: warnings(c, fig, a - wheel.rMin, ctx.spec.units, hasCorners, true) };
@@ -327,7 +386,11 @@ function twinMode(ctx: Ctx, base: Base): Stages {
   const a = h1 - h2;
   const trackS = trackSamples(track, ctx);
   const patternOf = (w: typeof top) =>
-    concat(track.pieces.map((p, i) => sampleCurve((s) => w.point(i, s), p.s0, p.s1, [], tol, { deadline, budget: ctx.budget }).pts));
+    concat(
+      track.pieces.map(
+        (p, i) => sampleCurve((s) => w.point(i, s), p.s0, p.s1, [], tol, { deadline, budget: ctx.budget }).pts,
+      ),
+    );
   const rMax = h1 - track.yMin;
   const geometry: SolvedGeometry = {
     ...base,
@@ -351,7 +414,8 @@ function twinMode(ctx: Ctx, base: Base): Stages {
     const out: SolveOption[] = [];
     for (const [kk, hh] of up) {
       const lo = down.get(kk);
-      if (lo !== undefined) out.push({ periodsPerTurn: kk, centreDistance: hh - lo, axleHeight: hh, rMax: hh - track.yMin });
+      if (lo !== undefined)
+        out.push({ periodsPerTurn: kk, centreDistance: hh - lo, axleHeight: hh, rMax: hh - track.yMin });
     }
     return out;
   };
@@ -384,7 +448,19 @@ function twinMode(ctx: Ctx, base: Base): Stages {
       speedRatio: { min: (h1 - track.yMax) / (track.yMax - h2), max: (h1 - track.yMin) / (track.yMin - h2) },
       symmetryError: sym.error,
     };
-    const warn = warnings(c, { friction: figTop.friction, contact, radiusA: figTop.radiusA, radiusB: Math.min(figTop.radiusB, figBottom.radiusB) }, rMax, ctx.spec.units, kinks, true);
+    const warn = warnings(
+      c,
+      {
+        friction: figTop.friction,
+        contact,
+        radiusA: figTop.radiusA,
+        radiusB: Math.min(figTop.radiusB, figBottom.radiusB),
+      },
+      rMax,
+      ctx.spec.units,
+      kinks,
+      true,
+    );
     if (sym.error > 1e-9 * rMax)
       warn.push({
         code: "not-point-symmetric",
@@ -430,7 +506,9 @@ export function solve(input: unknown, opts: SolveOptions = {}): SolvedGeometry |
   // One time limit for every stage.
   const deadline = new Deadline(opts.deadlineMs);
   const stages = stagesOf(input, deadline);
-  const geometry: SolvedGeometry = stages.options ? { ...stages.geometry, options: stages.options(deadline) } : stages.geometry;
+  const geometry: SolvedGeometry = stages.options
+    ? { ...stages.geometry, options: stages.options(deadline) }
+    : stages.geometry;
   if (opts.check === false) return geometry;
   return { ...geometry, ...stages.check(deadline) };
 }

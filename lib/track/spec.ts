@@ -45,7 +45,9 @@ const ellipse = z
     semiMinor: len,
     axle: z.union([z.literal("focus"), z.literal("centre"), xy]).default("focus"),
   })
-  .refine((w) => w.semiMajor >= w.semiMinor, { message: "The ellipse's semi-major axis must be at least as long as its semi-minor axis." });
+  .refine((w) => w.semiMajor >= w.semiMinor, {
+    message: "The ellipse's semi-major axis must be at least as long as its semi-minor axis.",
+  });
 
 const circle = z.strictObject({
   kind: z.literal("circle"),
@@ -92,12 +94,22 @@ export const designSpecSchema = z
     const mode = MODE_NAMES[s.mode];
     if (needsWheel && !s.wheel) ctx.addIssue({ code: "custom", path: ["wheel"], message: `${mode} needs a wheel.` });
     if (!needsWheel && !s.track) ctx.addIssue({ code: "custom", path: ["track"], message: `${mode} needs a track.` });
-    if (needsWheel && s.track) ctx.addIssue({ code: "custom", path: ["track"], message: `${mode} starts from a wheel, not a track.` });
-    if (!needsWheel && s.wheel) ctx.addIssue({ code: "custom", path: ["wheel"], message: `${mode} starts from a track, not a wheel.` });
+    if (needsWheel && s.track)
+      ctx.addIssue({ code: "custom", path: ["track"], message: `${mode} starts from a wheel, not a track.` });
+    if (!needsWheel && s.wheel)
+      ctx.addIssue({ code: "custom", path: ["wheel"], message: `${mode} starts from a track, not a wheel.` });
     if (s.mode === "partner-wheel" && s.lobes === undefined)
-      ctx.addIssue({ code: "custom", path: ["lobes"], message: "A partner wheel needs its number of lobes (a whole number from 1)." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["lobes"],
+        message: "A partner wheel needs its number of lobes (a whole number from 1).",
+      });
     if ((s.mode === "wheel-for-track" || s.mode === "twin-wheels") && s.periodsPerTurn === undefined)
-      ctx.addIssue({ code: "custom", path: ["periodsPerTurn"], message: `${mode} needs the number of periods per turn (a whole number from 1).` });
+      ctx.addIssue({
+        code: "custom",
+        path: ["periodsPerTurn"],
+        message: `${mode} needs the number of periods per turn (a whole number from 1).`,
+      });
   })
   .transform((s) => ({ ...s, tolerance: s.tolerance ?? (s.units === "in" ? 0.0005 : 0.01) }));
 
@@ -111,7 +123,10 @@ export function parseSpec(json: unknown): DesignSpec {
   const r = designSpecSchema.safeParse(json);
   if (r.success) return r.data;
   const issue = r.error.issues[0];
-  const where = issue.path.map((p) => (typeof p === "number" ? `[${p}]` : `.${String(p)}`)).join("").replace(/^\./, "");
+  const where = issue.path
+    .map((p) => (typeof p === "number" ? `[${p}]` : `.${String(p)}`))
+    .join("")
+    .replace(/^\./, "");
   throw new EngineError("invalid-spec", `${where ? `${where}: ` : ""}${issue.message}`, where || undefined);
 }
 
@@ -125,7 +140,9 @@ function canonical(v: unknown): string {
   if (Array.isArray(v)) return `[${v.map(canonical).join(",")}]`;
   if (typeof v === "object") {
     const o = v as Record<string, unknown>;
-    const keys = Object.keys(o).filter((k) => o[k] !== undefined).sort();
+    const keys = Object.keys(o)
+      .filter((k) => o[k] !== undefined)
+      .sort();
     return `{${keys.map((k) => `${JSON.stringify(k)}:${canonical(o[k])}`).join(",")}}`;
   }
   throw new EngineError("invalid-spec", `A spec cannot hold a ${typeof v}.`);

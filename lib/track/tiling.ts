@@ -25,8 +25,10 @@ export interface TileResult {
 }
 
 export function tileRun({ runLength: L, period: P, wheelSize }: TileInput): TileResult {
-  if (!(L > 0) || !Number.isFinite(L)) throw new EngineError("invalid-spec", "The run length must be a positive number.", "runLength");
-  if (!(P > 0) || !Number.isFinite(P)) throw new EngineError("invalid-spec", "The period must be a positive number.", "period");
+  if (!(L > 0) || !Number.isFinite(L))
+    throw new EngineError("invalid-spec", "The run length must be a positive number.", "runLength");
+  if (!(P > 0) || !Number.isFinite(P))
+    throw new EngineError("invalid-spec", "The period must be a positive number.", "period");
   // A hair of slack so that L = N·P computed in floating point is not read as N − 1 periods.
   const N = Math.floor(L / P + 1e-12);
   const residual = Math.max(0, L - N * P);
@@ -39,6 +41,12 @@ export function tileRun({ runLength: L, period: P, wheelSize }: TileInput): Tile
     residual,
     flatRunOut: { periods: N, runOut: residual, eachEnd: residual / 2 },
     halfPeriod: { periods: halves / 2, residual: halfResidual, eachEnd: halfResidual / 2 },
-    scaled: { periods: Ns, scale, period: P * scale, wheelSize: wheelSize === undefined ? undefined : wheelSize * scale, residual: 0 },
+    scaled: {
+      periods: Ns,
+      scale,
+      period: P * scale,
+      wheelSize: wheelSize === undefined ? undefined : wheelSize * scale,
+      residual: 0,
+    },
   };
 }

@@ -43,7 +43,14 @@ function segment(x0: number, y0: number, x1: number, y1: number): TrackPiece {
 }
 
 /** Inverts an increasing x(s) on [s0, s1] by Newton's method inside a bisection bracket. */
-function invert(x: (s: number) => number, dx: (s: number) => number, s0: number, s1: number, target: number, guess: number): number {
+function invert(
+  x: (s: number) => number,
+  dx: (s: number) => number,
+  s0: number,
+  s1: number,
+  target: number,
+  guess: number,
+): number {
   let a = s0;
   let b = s1;
   let s = Math.min(Math.max(guess, a), b);
@@ -55,7 +62,8 @@ function invert(x: (s: number) => number, dx: (s: number) => number, s0: number,
     const d = dx(s);
     let next = d > 0 ? s - g / d : 0.5 * (a + b);
     if (!(next > a && next < b)) next = 0.5 * (a + b);
-    if (Math.abs(next - s) <= 1e-16 * Math.max(1, Math.abs(s)) || b - a <= 1e-16 * Math.max(1, Math.abs(s))) return next;
+    if (Math.abs(next - s) <= 1e-16 * Math.max(1, Math.abs(s)) || b - a <= 1e-16 * Math.max(1, Math.abs(s)))
+      return next;
     s = next;
   }
   return s;
@@ -72,7 +80,15 @@ function cycloidPiece(R: number): TrackPiece {
     y: (p) => -R * (1 - Math.cos(p)),
     dx,
     // Near the cusp x ≈ R p³/6, so start from the cube root.
-    sOf: (X) => invert(x, dx, 0, 2 * Math.PI, X, X < Math.PI * R ? Math.cbrt((6 * X) / R) : 2 * Math.PI - Math.cbrt((6 * (2 * Math.PI * R - X)) / R)),
+    sOf: (X) =>
+      invert(
+        x,
+        dx,
+        0,
+        2 * Math.PI,
+        X,
+        X < Math.PI * R ? Math.cbrt((6 * X) / R) : 2 * Math.PI - Math.cbrt((6 * (2 * Math.PI * R - X)) / R),
+      ),
   };
 }
 
@@ -121,11 +137,20 @@ export function buildTrack(spec: TrackSpec): Track {
       for (let i = 0; i <= FUNCTION_CHECK_POINTS; i++) {
         const x = (P * i) / FUNCTION_CHECK_POINTS;
         const v = f(x);
-        if (!Number.isFinite(v)) throw new EngineError("bad-formula", `y is not a finite number at x = ${x.toPrecision(6)} (y = ${v}).`, where);
+        if (!Number.isFinite(v))
+          throw new EngineError(
+            "bad-formula",
+            `y is not a finite number at x = ${x.toPrecision(6)} (y = ${v}).`,
+            where,
+          );
         span = Math.max(span, Math.abs(v));
       }
       if (Math.abs(f(P) - f(0)) > 1e-9 * Math.max(span, P))
-        throw new EngineError("bad-formula", `The track is not periodic: y(0) = ${f(0).toPrecision(8)} but y(${P}) = ${f(P).toPrecision(8)}.`, where);
+        throw new EngineError(
+          "bad-formula",
+          `The track is not periodic: y(0) = ${f(0).toPrecision(8)} but y(${P}) = ${f(P).toPrecision(8)}.`,
+          where,
+        );
       return makeTrack([graph(f, 0, P)], P, []);
     }
     case "profile": {
@@ -133,12 +158,20 @@ export function buildTrack(spec: TrackSpec): Track {
       const x0 = pts[0][0];
       for (let i = 1; i < pts.length; i++)
         if (!(pts[i][0] > pts[i - 1][0]))
-          throw new EngineError("invalid-track", `The profile must run left to right: point ${i} has x = ${pts[i][0]}, not more than the point before.`, `track.points[${i}]`);
+          throw new EngineError(
+            "invalid-track",
+            `The profile must run left to right: point ${i} has x = ${pts[i][0]}, not more than the point before.`,
+            `track.points[${i}]`,
+          );
       const P = pts[pts.length - 1][0] - x0;
       const first = pts[0][1];
       const last = pts[pts.length - 1][1];
       if (Math.abs(last - first) > 1e-6 * P)
-        throw new EngineError("invalid-track", `One period must end at the height it starts: y = ${first} at the first point but ${last} at the last.`, `track.points[${pts.length - 1}]`);
+        throw new EngineError(
+          "invalid-track",
+          `One period must end at the height it starts: y = ${first} at the first point but ${last} at the last.`,
+          `track.points[${pts.length - 1}]`,
+        );
       const pieces: TrackPiece[] = [];
       const breaks: number[] = [];
       for (let i = 0; i + 1 < pts.length; i++) {

@@ -22,7 +22,8 @@ export interface SymmetryReport {
 export function pointSymmetry(track: Track, deadline: Deadline): SymmetryReport {
   const P = track.period;
   let area = 0;
-  for (const p of track.pieces) area += integrate((s) => p.y(s) * p.dx(s), p.s0, p.s1, [], { rel: 1e-13, deadline }).value;
+  for (const p of track.pieces)
+    area += integrate((s) => p.y(s) * p.dx(s), p.s0, p.s1, [], { rel: 1e-13, deadline }).value;
   const mid = area / P;
   const U = 96;
   const D = (x0: number) => {

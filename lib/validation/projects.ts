@@ -1,7 +1,11 @@
 import { z } from "zod";
 import { MEMBER_ROLES, PROJECT_STATUSES } from "@/db/schema";
 
-const name = z.string({ error: "Enter a project name." }).trim().min(1, { error: "Enter a project name." }).max(160, { error: "A project name has at most 160 characters." });
+const name = z
+  .string({ error: "Enter a project name." })
+  .trim()
+  .min(1, { error: "Enter a project name." })
+  .max(160, { error: "A project name has at most 160 characters." });
 const site = z.string().trim().max(200, { error: "A site has at most 200 characters." });
 const clientOrganisation = z.string().trim().max(160, { error: "An organisation name has at most 160 characters." });
 
@@ -12,7 +16,12 @@ export const newProjectSchema = z.object({
 });
 
 export const projectUpdateSchema = z
-  .object({ name, site, clientOrganisation, status: z.enum(PROJECT_STATUSES, { error: "Choose one of the statuses." }) })
+  .object({
+    name,
+    site,
+    clientOrganisation,
+    status: z.enum(PROJECT_STATUSES, { error: "Choose one of the statuses." }),
+  })
   .partial()
   .refine((v) => Object.keys(v).length > 0, { error: "Nothing to change." });
 

@@ -21,7 +21,7 @@ export const depositSchema = z.strictObject(
       .max(MAX_DEPOSIT, { error: `The deposit is at most ${MAX_DEPOSIT.toLocaleString("en-GB")}.` }),
     currency: z.enum(CURRENCY_CODES, { error: `The currency must be one of ${CURRENCY_CODES.join(", ")}.` }),
   },
-  { error: "The deposit must be an object such as { amount: 1500, currency: \"GBP\" }." },
+  { error: 'The deposit must be an object such as { amount: 1500, currency: "GBP" }.' },
 );
 
 export const newReviewSchema = z.strictObject({
@@ -34,7 +34,9 @@ export const newReviewSchema = z.strictObject({
     .min(10, { error: "The run length must be at least 10 mm." })
     .max(100_000, { error: "The run length must be at most 100 000 mm." })
     .optional(),
-  endTreatment: z.enum(END_TREATMENTS, { error: `The end treatment must be one of ${END_TREATMENTS.join(", ")}.` }).optional(),
+  endTreatment: z
+    .enum(END_TREATMENTS, { error: `The end treatment must be one of ${END_TREATMENTS.join(", ")}.` })
+    .optional(),
 });
 
 export const newCommentSchema = z.strictObject({
@@ -46,15 +48,28 @@ export const newCommentSchema = z.strictObject({
 export const decisionSchema = z
   .strictObject({
     decision: z.enum(REVIEW_DECISIONS, { error: `The decision must be "approve" or "request-changes".` }),
-    typedName: z.string({ error: "Type your full name." }).trim().min(1, { error: "Type your full name." }).max(160, { error: "A name has at most 160 characters." }),
-    comment: z.string({ error: "The comment must be text." }).trim().max(4000, { error: "A comment has at most 4000 characters." }).optional(),
+    typedName: z
+      .string({ error: "Type your full name." })
+      .trim()
+      .min(1, { error: "Type your full name." })
+      .max(160, { error: "A name has at most 160 characters." }),
+    comment: z
+      .string({ error: "The comment must be text." })
+      .trim()
+      .max(4000, { error: "A comment has at most 4000 characters." })
+      .optional(),
     /** The form's "I approve revision N for fabrication" tick; optional for API callers. */
     confirm: z.boolean().optional(),
   })
   .superRefine((d, ctx) => {
     if (d.decision === "request-changes" && !d.comment)
-      ctx.addIssue({ code: "custom", path: ["comment"], message: "Say what should change: a comment is needed to request changes." });
-    if (d.confirm === false) ctx.addIssue({ code: "custom", path: ["confirm"], message: "Tick the box to confirm your decision." });
+      ctx.addIssue({
+        code: "custom",
+        path: ["comment"],
+        message: "Say what should change: a comment is needed to request changes.",
+      });
+    if (d.confirm === false)
+      ctx.addIssue({ code: "custom", path: ["confirm"], message: "Tick the box to confirm your decision." });
   });
 
 export type NewReview = z.infer<typeof newReviewSchema>;

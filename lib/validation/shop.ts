@@ -12,7 +12,11 @@ function number(what: string, min: number, max: number, unit: string) {
     .refine((v) => v <= max, { error: `The ${what} must be at most ${max} ${unit}.` });
 }
 
-const name = z.string({ error: "Enter a name." }).trim().min(1, { error: "Enter a name." }).max(120, { error: "A name has at most 120 characters." });
+const name = z
+  .string({ error: "Enter a name." })
+  .trim()
+  .min(1, { error: "Enter a name." })
+  .max(120, { error: "A name has at most 120 characters." });
 const source = z
   .string({ error: "Say where the figures come from." })
   .trim()
@@ -34,7 +38,11 @@ export const materialSchema = z.object({
   // Left empty: the usual figure for wood and metals (as the column's default).
   poisson: z.preprocess(
     (v) => (v === "" || v === undefined || v === null ? DEFAULT_POISSON : v),
-    z.coerce.number({ error: "Enter Poisson's ratio as a number." }).refine((v) => Number.isFinite(v) && v >= 0 && v < 0.5, { error: "Poisson's ratio must be from 0 to under 0.5." }),
+    z.coerce
+      .number({ error: "Enter Poisson's ratio as a number." })
+      .refine((v) => Number.isFinite(v) && v >= 0 && v < 0.5, {
+        error: "Poisson's ratio must be from 0 to under 0.5.",
+      }),
   ),
   allowableMpa: optionalNumber("allowable contact stress", 0, 10_000),
   frictionStatic: number("static friction coefficient", 0, 3, ""),
@@ -63,7 +71,9 @@ export const machineSchema = z
     bedWidthMm: number("bed width", 0, 20_000, "mm"),
     minInsideRadiusMm: z.coerce
       .number({ error: "Enter the smallest inside radius as a number." })
-      .refine((v) => Number.isFinite(v) && v >= 0 && v <= 100, { error: "The smallest inside radius must be between 0 and 100 mm." }),
+      .refine((v) => Number.isFinite(v) && v >= 0 && v <= 100, {
+        error: "The smallest inside radius must be between 0 and 100 mm.",
+      }),
     source,
     sourceKind,
   })

@@ -7,7 +7,11 @@ export const userRoleField = z.enum(USER_ROLES, { error: "Choose one of the role
 
 export const newUserSchema = z.object({
   email: emailField,
-  name: z.string({ error: "Enter a name." }).trim().min(1, { error: "Enter a name." }).max(120, { error: "A name has at most 120 characters." }),
+  name: z
+    .string({ error: "Enter a name." })
+    .trim()
+    .min(1, { error: "Enter a name." })
+    .max(120, { error: "A name has at most 120 characters." }),
   role: userRoleField,
   password: z
     .string({ error: "Enter a first password." })
@@ -18,4 +22,7 @@ export const newUserSchema = z.object({
 export const userIdField = z.coerce.number({ error: "No such user." }).int().positive({ error: "No such user." });
 
 export const changeRoleSchema = z.object({ userId: userIdField, role: userRoleField });
-export const setActiveSchema = z.object({ userId: userIdField, active: z.enum(["true", "false"]).transform((v) => v === "true") });
+export const setActiveSchema = z.object({
+  userId: userIdField,
+  active: z.enum(["true", "false"]).transform((v) => v === "true"),
+});

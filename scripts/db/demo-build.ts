@@ -19,7 +19,8 @@ import { PHOTO_EXTENSION, preparePhoto } from "../../lib/photos/prepare";
 import { solve } from "../../lib/track";
 
 type Db = MySql2Database<typeof schema>;
-const { cutPlans, materials, stockSheets, machines, buildLogEntries, buildLogPhotos, revisions, designs, signOffs } = schema;
+const { cutPlans, materials, stockSheets, machines, buildLogEntries, buildLogPhotos, revisions, designs, signOffs } =
+  schema;
 
 export interface DemoBuild {
   material: string;
@@ -34,7 +35,10 @@ function store(): S3Client {
     endpoint: process.env.S3_ENDPOINT,
     region: process.env.S3_REGION ?? "us-east-1",
     forcePathStyle: true,
-    credentials: { accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "", secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "" },
+    credentials: {
+      accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "",
+      secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "",
+    },
   });
 }
 
@@ -58,11 +62,30 @@ function demoPicture(caption: string): string {
 }
 
 /** The trike run's cut plan and build log, unless the revision has a plan already. */
-export async function seedDemoBuild(db: Db, projectId: number, designName: string, projectName: string, demo: DemoBuild, userIds: Map<string, number>): Promise<number> {
-  const [design] = await db.select().from(designs).where(and(eq(designs.projectId, projectId), eq(designs.name, designName))).limit(1);
+export async function seedDemoBuild(
+  db: Db,
+  projectId: number,
+  designName: string,
+  projectName: string,
+  demo: DemoBuild,
+  userIds: Map<string, number>,
+): Promise<number> {
+  const [design] = await db
+    .select()
+    .from(designs)
+    .where(and(eq(designs.projectId, projectId), eq(designs.name, designName)))
+    .limit(1);
   if (!design) return 0;
-  const [revision] = await db.select().from(revisions).where(and(eq(revisions.designId, design.id), eq(revisions.number, 1))).limit(1);
-  if (!revision || (await db.select({ id: cutPlans.id }).from(cutPlans).where(eq(cutPlans.revisionId, revision.id)).limit(1)).length) return 0;
+  const [revision] = await db
+    .select()
+    .from(revisions)
+    .where(and(eq(revisions.designId, design.id), eq(revisions.number, 1)))
+    .limit(1);
+  if (
+    !revision ||
+    (await db.select({ id: cutPlans.id }).from(cutPlans).where(eq(cutPlans.revisionId, revision.id)).limit(1)).length
+  )
+    return 0;
   const [material] = await db.select().from(materials).where(eq(materials.name, demo.material));
   const [sheet] = await db.select().from(stockSheets).where(eq(stockSheets.name, demo.sheet));
   const [machine] = await db.select().from(machines).where(eq(machines.name, demo.machine));
@@ -70,13 +93,27 @@ export async function seedDemoBuild(db: Db, projectId: number, designName: strin
   const settings = composeSettings(choice, { material, sheet, machine }, projectName);
   const plan = buildCutParts(revision.spec, solve(revision.spec), settings);
   const s = plan.settings;
-  const nest = shelfLayout({ items: await nestItemsFor(plan.parts, s), sheet: { width: s.sheet.length, height: s.sheet.width }, margin: s.margin, spacing: s.spacing });
-  const [approval] = await db.select().from(signOffs).where(and(eq(signOffs.revisionId, revision.id), eq(signOffs.decision, "approve"))).limit(1);
-  const { summary, nest: stored } = summariseCutPlan(plan, nest, { material: material.name, sheet: sheet.name, machine: machine.name }, {
-    purpose: approval ? "production" : "review",
-    approvalReference: approval ? approvalReference(approval) : null,
-    unapprovedReason: null,
+  const nest = shelfLayout({
+    items: await nestItemsFor(plan.parts, s),
+    sheet: { width: s.sheet.length, height: s.sheet.width },
+    margin: s.margin,
+    spacing: s.spacing,
   });
+  const [approval] = await db
+    .select()
+    .from(signOffs)
+    .where(and(eq(signOffs.revisionId, revision.id), eq(signOffs.decision, "approve")))
+    .limit(1);
+  const { summary, nest: stored } = summariseCutPlan(
+    plan,
+    nest,
+    { material: material.name, sheet: sheet.name, machine: machine.name },
+    {
+      purpose: approval ? "production" : "review",
+      approvalReference: approval ? approvalReference(approval) : null,
+      unapprovedReason: null,
+    },
+  );
   const fabricatorId = userIds.get("fabricator@example.test")!;
   const planId = await db.transaction(async (tx) => {
     const [res] = await tx.insert(cutPlans).values({
@@ -106,19 +143,51 @@ export async function seedDemoBuild(db: Db, projectId: number, designName: strin
   const bucket = process.env.S3_BUCKET ?? "axlewright";
   for (const entry of demo.log) {
     const authorId = userIds.get(entry.by)!;
-    const photo = entry.photo ? await preparePhoto(await sharp(Buffer.from(demoPicture(entry.photo))).jpeg({ quality: 82 }).toBuffer(), `${entry.photo}.jpg`) : null;
-    const keys = photo ? { object: `projects/${projectId}/photos/${randomUUID()}.${PHOTO_EXTENSION[photo.contentType]}`, thumb: "" } : null;
+    const photo = entry.photo
+      ? await preparePhoto(
+          await sharp(Buffer.from(demoPicture(entry.photo)))
+            .jpeg({ quality: 82 })
+            .toBuffer(),
+          `${entry.photo}.jpg`,
+        )
+      : null;
+    const keys = photo
+      ? { object: `projects/${projectId}/photos/${randomUUID()}.${PHOTO_EXTENSION[photo.contentType]}`, thumb: "" }
+      : null;
     if (photo && keys) {
       keys.thumb = keys.object.replace(/\.[a-z]+$/, "-thumb.webp");
-      await s3.send(new PutObjectCommand({ Bucket: bucket, Key: keys.object, Body: photo.data, ContentType: photo.contentType }));
-      await s3.send(new PutObjectCommand({ Bucket: bucket, Key: keys.thumb, Body: photo.thumb, ContentType: photo.thumbType }));
+      await s3.send(
+        new PutObjectCommand({ Bucket: bucket, Key: keys.object, Body: photo.data, ContentType: photo.contentType }),
+      );
+      await s3.send(
+        new PutObjectCommand({ Bucket: bucket, Key: keys.thumb, Body: photo.thumb, ContentType: photo.thumbType }),
+      );
     }
     await db.transaction(async (tx) => {
-      const [res] = await tx.insert(buildLogEntries).values({ projectId, kind: entry.kind, text: entry.text, parts: entry.parts, authorId, createdAt: new Date(entry.at), cutPlanId: entry.kind === "installed" ? planId : null, detail: entry.kind === "installed" && entry.parts.length === 1 ? { item: entry.parts[0], done: true } : null });
+      const [res] = await tx.insert(buildLogEntries).values({
+        projectId,
+        kind: entry.kind,
+        text: entry.text,
+        parts: entry.parts,
+        authorId,
+        createdAt: new Date(entry.at),
+        cutPlanId: entry.kind === "installed" ? planId : null,
+        detail: entry.kind === "installed" && entry.parts.length === 1 ? { item: entry.parts[0], done: true } : null,
+      });
       if (photo && keys)
         await tx.insert(buildLogPhotos).values({
-          entryId: res.insertId, projectId, objectKey: keys.object, thumbKey: keys.thumb, contentType: photo.contentType, bytes: photo.data.length, thumbBytes: photo.thumb.length,
-          width: photo.width, height: photo.height, originalName: photo.name, uploadedById: authorId, createdAt: new Date(entry.at),
+          entryId: res.insertId,
+          projectId,
+          objectKey: keys.object,
+          thumbKey: keys.thumb,
+          contentType: photo.contentType,
+          bytes: photo.data.length,
+          thumbBytes: photo.thumb.length,
+          width: photo.width,
+          height: photo.height,
+          originalName: photo.name,
+          uploadedById: authorId,
+          createdAt: new Date(entry.at),
         });
     });
   }

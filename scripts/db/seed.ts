@@ -22,7 +22,22 @@ function demoLoads(d: { loads?: unknown }): Record<string, unknown> | null {
   return d.loads === undefined ? null : (loadsSettingsSchema.parse(d.loads) as unknown as Record<string, unknown>);
 }
 
-const { organisations, users, projects, projectMembers, designs, revisions, materials, stockSheets, machines, reviews, reviewComments, signOffs, deposits, paymentEvents } = schema;
+const {
+  organisations,
+  users,
+  projects,
+  projectMembers,
+  designs,
+  revisions,
+  materials,
+  stockSheets,
+  machines,
+  reviews,
+  reviewComments,
+  signOffs,
+  deposits,
+  paymentEvents,
+} = schema;
 type SourceKind = (typeof schema.SOURCE_KINDS)[number];
 let added = 0;
 
@@ -38,7 +53,14 @@ interface DemoReview {
   endTreatment: schema.EndTreatment;
   deposit?: { amount: number; currency: Currency; paidAt?: string };
   comments: { by: string; at: number | null; text: string; createdAt: string }[];
-  decision?: { by: string; decision: schema.ReviewDecision; typedName: string; signedAt: string; address: string; userAgent: string };
+  decision?: {
+    by: string;
+    decision: schema.ReviewDecision;
+    typedName: string;
+    signedAt: string;
+    address: string;
+    userAgent: string;
+  };
 }
 
 /**
@@ -47,30 +69,62 @@ interface DemoReview {
  * when the revision has no review yet, so a re-run adds nothing.
  */
 async function seedReview(projectId: number, designId: number, r: DemoReview, userIds: Map<string, number>) {
-  const [revision] = await db.select().from(revisions).where(and(eq(revisions.designId, designId), eq(revisions.number, 1))).limit(1);
-  if (!revision || (await idOf(db.select({ id: reviews.id }).from(reviews).where(eq(reviews.revisionId, revision.id))))) return;
+  const [revision] = await db
+    .select()
+    .from(revisions)
+    .where(and(eq(revisions.designId, designId), eq(revisions.number, 1)))
+    .limit(1);
+  if (!revision || (await idOf(db.select({ id: reviews.id }).from(reviews).where(eq(reviews.revisionId, revision.id)))))
+    return;
   await db.transaction(async (tx) => {
     const [res] = await tx.insert(reviews).values({
-      revisionId: revision.id, projectId, message: r.message, runLengthMm: r.runLength, endTreatment: r.endTreatment, requestedById: userIds.get(r.sentBy), createdAt: new Date(r.sentAt),
+      revisionId: revision.id,
+      projectId,
+      message: r.message,
+      runLengthMm: r.runLength,
+      endTreatment: r.endTreatment,
+      requestedById: userIds.get(r.sentBy),
+      createdAt: new Date(r.sentAt),
     });
     const reviewId = res.insertId;
-    for (const c of r.comments) await tx.insert(reviewComments).values({ reviewId, authorId: userIds.get(c.by)!, text: c.text, at: c.at, createdAt: new Date(c.createdAt) });
+    for (const c of r.comments)
+      await tx
+        .insert(reviewComments)
+        .values({ reviewId, authorId: userIds.get(c.by)!, text: c.text, at: c.at, createdAt: new Date(c.createdAt) });
     let depositId: number | undefined;
     if (r.deposit) {
       const paid = r.decision?.decision === "approve" && r.deposit.paidAt;
       const [dep] = await tx.insert(deposits).values({
-        reviewId, projectId, amountMinor: toMinor(r.deposit.amount, r.deposit.currency)!, currency: r.deposit.currency,
+        reviewId,
+        projectId,
+        amountMinor: toMinor(r.deposit.amount, r.deposit.currency)!,
+        currency: r.deposit.currency,
         status: paid ? "paid" : r.decision?.decision === "approve" ? "due" : "on-approval",
-        checkoutSessionId: paid ? `cs_demo_seed_${reviewId}` : null, paidAt: paid ? new Date(r.deposit.paidAt!) : null,
+        checkoutSessionId: paid ? `cs_demo_seed_${reviewId}` : null,
+        paidAt: paid ? new Date(r.deposit.paidAt!) : null,
       });
       depositId = dep.insertId;
-      if (paid) await tx.insert(paymentEvents).values({ eventId: `evt_demo_seed_${reviewId}`, type: "checkout.session.completed", depositId, receivedAt: new Date(r.deposit.paidAt!) });
+      if (paid)
+        await tx.insert(paymentEvents).values({
+          eventId: `evt_demo_seed_${reviewId}`,
+          type: "checkout.session.completed",
+          depositId,
+          receivedAt: new Date(r.deposit.paidAt!),
+        });
     }
     if (r.decision) {
       // The hash is recomputed from the stored spec, as the decision route does.
       await tx.insert(signOffs).values({
-        reviewId, revisionId: revision.id, specHash: specHash(revision.spec), engineVersion: ENGINE_VERSION, decision: r.decision.decision, typedName: r.decision.typedName,
-        userId: userIds.get(r.decision.by)!, signedAt: new Date(r.decision.signedAt), address: r.decision.address, userAgent: r.decision.userAgent,
+        reviewId,
+        revisionId: revision.id,
+        specHash: specHash(revision.spec),
+        engineVersion: ENGINE_VERSION,
+        decision: r.decision.decision,
+        typedName: r.decision.typedName,
+        userId: userIds.get(r.decision.by)!,
+        signedAt: new Date(r.decision.signedAt),
+        address: r.decision.address,
+        userAgent: r.decision.userAgent,
       });
     }
   });
@@ -80,9 +134,13 @@ async function seedReview(projectId: number, designId: number, r: DemoReview, us
 try {
   const orgIds = new Map<string, number>();
   for (const org of demo.organisations) {
-    let id = await idOf(db.select({ id: organisations.id }).from(organisations).where(eq(organisations.name, org.name)));
+    let id = await idOf(
+      db.select({ id: organisations.id }).from(organisations).where(eq(organisations.name, org.name)),
+    );
     if (id === undefined) {
-      const [res] = await db.insert(organisations).values({ name: org.name, kind: org.kind as "shop" | "client" | "installer" });
+      const [res] = await db
+        .insert(organisations)
+        .values({ name: org.name, kind: org.kind as "shop" | "client" | "installer" });
       id = res.insertId;
       added++;
     }
@@ -95,7 +153,11 @@ try {
     let id = await idOf(db.select({ id: users.id }).from(users).where(eq(users.email, u.email)));
     if (id === undefined) {
       const [res] = await db.insert(users).values({
-        email: u.email, name: u.name, role: u.role as schema.UserRole, passwordHash, organisationId: orgIds.get(u.organisation),
+        email: u.email,
+        name: u.name,
+        role: u.role as schema.UserRole,
+        passwordHash,
+        organisationId: orgIds.get(u.organisation),
       });
       id = res.insertId;
       added++;
@@ -107,22 +169,30 @@ try {
   for (const m of library.materials) {
     let id = await idOf(db.select({ id: materials.id }).from(materials).where(eq(materials.name, m.name)));
     if (id === undefined) {
-      const [res] = await db.insert(materials).values({ ...m, kind: m.kind as schema.MaterialKind, sourceKind: m.sourceKind as SourceKind });
+      const [res] = await db
+        .insert(materials)
+        .values({ ...m, kind: m.kind as schema.MaterialKind, sourceKind: m.sourceKind as SourceKind });
       id = res.insertId;
       added++;
     }
     materialIds.set(m.name, id);
   }
   for (const { material, ...sheet } of library.stockSheets) {
-    if (await idOf(db.select({ id: stockSheets.id }).from(stockSheets).where(eq(stockSheets.name, sheet.name)))) continue;
+    if (await idOf(db.select({ id: stockSheets.id }).from(stockSheets).where(eq(stockSheets.name, sheet.name))))
+      continue;
     await db.insert(stockSheets).values({
-      ...sheet, materialId: materialIds.get(material)!, grain: sheet.grain as (typeof schema.GRAIN_DIRECTIONS)[number], sourceKind: sheet.sourceKind as SourceKind,
+      ...sheet,
+      materialId: materialIds.get(material)!,
+      grain: sheet.grain as (typeof schema.GRAIN_DIRECTIONS)[number],
+      sourceKind: sheet.sourceKind as SourceKind,
     });
     added++;
   }
   for (const machine of library.machines) {
     if (await idOf(db.select({ id: machines.id }).from(machines).where(eq(machines.name, machine.name)))) continue;
-    await db.insert(machines).values({ ...machine, kind: machine.kind as schema.MachineKind, sourceKind: machine.sourceKind as SourceKind });
+    await db
+      .insert(machines)
+      .values({ ...machine, kind: machine.kind as schema.MachineKind, sourceKind: machine.sourceKind as SourceKind });
     added++;
   }
 
@@ -132,7 +202,11 @@ try {
     let id = await idOf(db.select({ id: projects.id }).from(projects).where(eq(projects.name, p.name)));
     if (id === undefined) {
       const [res] = await db.insert(projects).values({
-        name: p.name, site: p.site, status: p.status as schema.ProjectStatus, clientOrganisationId: orgIds.get(p.client), createdById: adminId,
+        name: p.name,
+        site: p.site,
+        status: p.status as schema.ProjectStatus,
+        clientOrganisationId: orgIds.get(p.client),
+        createdById: adminId,
       });
       id = res.insertId;
       added++;
@@ -140,25 +214,47 @@ try {
     for (const m of p.members) {
       const userId = userIds.get(m.email)!;
       const existing = await idOf(
-        db.select({ id: projectMembers.id }).from(projectMembers).where(and(eq(projectMembers.projectId, id), eq(projectMembers.userId, userId))),
+        db
+          .select({ id: projectMembers.id })
+          .from(projectMembers)
+          .where(and(eq(projectMembers.projectId, id), eq(projectMembers.userId, userId))),
       );
       if (existing === undefined) {
-        await db.insert(projectMembers).values({ projectId: id, userId, role: m.role as schema.MemberRole, addedById: adminId });
+        await db
+          .insert(projectMembers)
+          .values({ projectId: id, userId, role: m.role as schema.MemberRole, addedById: adminId });
         added++;
       }
     }
     for (const d of p.designs ?? []) {
-      let designId = await idOf(db.select({ id: designs.id }).from(designs).where(and(eq(designs.projectId, id), eq(designs.name, d.name))));
+      let designId = await idOf(
+        db
+          .select({ id: designs.id })
+          .from(designs)
+          .where(and(eq(designs.projectId, id), eq(designs.name, d.name))),
+      );
       if (designId === undefined) {
         // The same path as saving in the studio: the engine's schema, its solve, its canonical hash.
         const spec = parseSpec(d.spec);
         const [res] = await db.insert(designs).values({
-          projectId: id, name: d.name, mode: spec.mode, draft: spec as unknown as Record<string, unknown>, loads: demoLoads(d), createdById: fabricatorId,
+          projectId: id,
+          name: d.name,
+          mode: spec.mode,
+          draft: spec as unknown as Record<string, unknown>,
+          loads: demoLoads(d),
+          createdById: fabricatorId,
         });
         designId = res.insertId;
         await db.insert(revisions).values({
-          designId, number: 1, spec: spec as unknown as Record<string, unknown>, specHash: specHash(spec),
-          engineVersion: ENGINE_VERSION, summary: summarise(solve(spec)) as unknown as Record<string, unknown>, loads: demoLoads(d), note: d.note, createdById: fabricatorId,
+          designId,
+          number: 1,
+          spec: spec as unknown as Record<string, unknown>,
+          specHash: specHash(spec),
+          engineVersion: ENGINE_VERSION,
+          summary: summarise(solve(spec)) as unknown as Record<string, unknown>,
+          loads: demoLoads(d),
+          note: d.note,
+          createdById: fabricatorId,
         });
         added += 2;
       }

@@ -11,7 +11,13 @@ if (!directory) {
   process.exit(1);
 }
 
-const server = new S3rver({ port, address: "127.0.0.1", directory, silent: true, configureBuckets: [{ name: bucket }] });
+const server = new S3rver({
+  port,
+  address: "127.0.0.1",
+  directory,
+  silent: true,
+  configureBuckets: [{ name: bucket }],
+});
 await server.run();
 
 const stop = () => server.close().then(() => process.exit(0));

@@ -64,7 +64,8 @@ function createSession(form) {
   const item = form.line_items?.[0];
   const price = item?.price_data;
   const amount = Number(price?.unit_amount) * Number(item?.quantity ?? 1);
-  if (!price || !Number.isInteger(amount) || amount <= 0) return { error: "line_items[0][price_data][unit_amount] must be a positive whole number." };
+  if (!price || !Number.isInteger(amount) || amount <= 0)
+    return { error: "line_items[0][price_data][unit_amount] must be a positive whole number." };
   if (!form.success_url || !form.cancel_url) return { error: "success_url and cancel_url are required." };
   const sessionId = id("cs");
   const session = {
@@ -100,7 +101,11 @@ async function deliver(event) {
   const payload = JSON.stringify(event);
   for (let attempt = 0; attempt < 3; attempt++) {
     try {
-      const res = await fetch(webhookUrl, { method: "POST", headers: { "content-type": "application/json", "stripe-signature": signature(payload, webhookSecret) }, body: payload });
+      const res = await fetch(webhookUrl, {
+        method: "POST",
+        headers: { "content-type": "application/json", "stripe-signature": signature(payload, webhookSecret) },
+        body: payload,
+      });
       return res.status;
     } catch {
       await new Promise((r) => setTimeout(r, 300 * (attempt + 1)));
@@ -109,10 +114,13 @@ async function deliver(event) {
   return 0;
 }
 
-const escape = (s) => String(s).replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]);
+const escape = (s) =>
+  String(s).replace(/[&<>"']/g, (c) => ({ "&": "&amp;", "<": "&lt;", ">": "&gt;", '"': "&quot;", "'": "&#39;" })[c]);
 
 function payPage(s) {
-  const amount = new Intl.NumberFormat("en-GB", { style: "currency", currency: s.currency.toUpperCase() }).format(s.amount_total / (s.currency === "jpy" ? 1 : 100));
+  const amount = new Intl.NumberFormat("en-GB", { style: "currency", currency: s.currency.toUpperCase() }).format(
+    s.amount_total / (s.currency === "jpy" ? 1 : 100),
+  );
   const done = s.status !== "open";
   return `<!doctype html><html lang="en"><head><meta charset="utf-8"><meta name="viewport" content="width=device-width, initial-scale=1"><title>Local test payment</title>
 <style>body{font-family:system-ui,sans-serif;background:#eef1f4;color:#222;margin:0;padding:24px}main{max-width:420px;margin:auto;background:#fff;border:1px solid #ccd;border-radius:6px;padding:20px}
@@ -127,7 +135,8 @@ const server = http.createServer(async (req, res) => {
   const url = new URL(req.url ?? "/", `http://127.0.0.1:${port}`);
   try {
     if (url.pathname.startsWith("/v1/")) {
-      if (!secretKey || req.headers.authorization !== `Bearer ${secretKey}`) return stripeError(res, 401, "Invalid API Key provided.", "authentication_error");
+      if (!secretKey || req.headers.authorization !== `Bearer ${secretKey}`)
+        return stripeError(res, 401, "Invalid API Key provided.", "authentication_error");
       if (req.method === "POST" && url.pathname === "/v1/checkout/sessions") {
         const made = createSession(parseForm(await readBody(req)));
         return made.error ? stripeError(res, 400, made.error) : send(res, 200, made.session);
@@ -158,7 +167,15 @@ const server = http.createServer(async (req, res) => {
         if (s.status === "open") {
           s.status = "complete";
           s.payment_status = "paid";
-          await deliver({ id: id("evt"), object: "event", type: "checkout.session.completed", api_version: "2025-01-27", created: now(), livemode: false, data: { object: s } });
+          await deliver({
+            id: id("evt"),
+            object: "event",
+            type: "checkout.session.completed",
+            api_version: "2025-01-27",
+            created: now(),
+            livemode: false,
+            data: { object: s },
+          });
         }
         res.writeHead(303, { location: s.success_url.replace("{CHECKOUT_SESSION_ID}", s.id) });
         return res.end();
@@ -173,7 +190,9 @@ const server = http.createServer(async (req, res) => {
     res.writeHead(404);
     res.end();
   } catch (error) {
-    send(res, 400, { error: { type: "invalid_request_error", message: error instanceof Error ? error.message : "bad request" } });
+    send(res, 400, {
+      error: { type: "invalid_request_error", message: error instanceof Error ? error.message : "bad request" },
+    });
   }
 });
 

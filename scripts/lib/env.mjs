@@ -21,7 +21,11 @@ function readEnvFile() {
 function persistentSecrets() {
   const saved = readEnvFile();
   let changed = false;
-  const make = { AUTH_SECRET: () => randomBytes(32).toString("base64url"), DB_PASSWORD: () => randomBytes(32).toString("base64url"), ...paymentSecrets() };
+  const make = {
+    AUTH_SECRET: () => randomBytes(32).toString("base64url"),
+    DB_PASSWORD: () => randomBytes(32).toString("base64url"),
+    ...paymentSecrets(),
+  };
   for (const [key, value] of Object.entries(make)) {
     if (!saved[key]) {
       saved[key] = typeof value === "function" ? value() : value;
@@ -29,7 +33,9 @@ function persistentSecrets() {
     }
   }
   if (changed) {
-    const body = Object.entries(saved).map(([k, v]) => `${k}=${v}`).join("\n");
+    const body = Object.entries(saved)
+      .map(([k, v]) => `${k}=${v}`)
+      .join("\n");
     writeFileSync(envFile, `# Made by npm start on first run; kept out of git.\n${body}\n`, { mode: 0o600 });
   }
   return saved;
@@ -37,12 +43,28 @@ function persistentSecrets() {
 
 /** Made-up keys for the local payment service: a secret API key and the webhook endpoint's signing secret. */
 function paymentSecrets() {
-  return { STRIPE_SECRET_KEY: `sk_test_${randomBytes(24).toString("hex")}`, STRIPE_WEBHOOK_SECRET: `whsec_${randomBytes(24).toString("hex")}` };
+  return {
+    STRIPE_SECRET_KEY: `sk_test_${randomBytes(24).toString("hex")}`,
+    STRIPE_WEBHOOK_SECRET: `whsec_${randomBytes(24).toString("hex")}`,
+  };
 }
 
 const num = (value, fallback) => (value ? Number(value) : fallback);
 
-function appEnv({ dbPort, database, password, appPort, smtpPort, mailHttpPort, paymentPort, payment, s3Port, s3DataDir, authSecret, dataDir }) {
+function appEnv({
+  dbPort,
+  database,
+  password,
+  appPort,
+  smtpPort,
+  mailHttpPort,
+  paymentPort,
+  payment,
+  s3Port,
+  s3DataDir,
+  authSecret,
+  dataDir,
+}) {
   return {
     dataDir,
     dbPort,
@@ -99,7 +121,10 @@ export function demoSettings() {
     paymentPort: num(e.PAYMENT_SERVICE_PORT, 2527),
     s3Port: num(e.S3_PORT, 2528),
     s3DataDir: path.join(root, ".data/objects"),
-    payment: { STRIPE_SECRET_KEY: e.STRIPE_SECRET_KEY || saved.STRIPE_SECRET_KEY, STRIPE_WEBHOOK_SECRET: e.STRIPE_WEBHOOK_SECRET || saved.STRIPE_WEBHOOK_SECRET },
+    payment: {
+      STRIPE_SECRET_KEY: e.STRIPE_SECRET_KEY || saved.STRIPE_SECRET_KEY,
+      STRIPE_WEBHOOK_SECRET: e.STRIPE_WEBHOOK_SECRET || saved.STRIPE_WEBHOOK_SECRET,
+    },
     authSecret: e.AUTH_SECRET || saved.AUTH_SECRET,
   });
 }

@@ -58,7 +58,9 @@ export function ensureDebianPackages(packages) {
   if (missing.length === 0) return;
   const names = missing.map((p) => p.name);
   if (!isRoot) {
-    fail(`missing Debian packages: ${names.join(", ")}.\nInstall them with:  sudo apt-get install --no-install-recommends ${names.join(" ")}`);
+    fail(
+      `missing Debian packages: ${names.join(", ")}.\nInstall them with:  sudo apt-get install --no-install-recommends ${names.join(" ")}`,
+    );
   }
   log(`installing Debian packages: ${names.join(", ")}…`);
   const env = { ...process.env, DEBIAN_FRONTEND: "noninteractive" };
@@ -70,7 +72,10 @@ export function ensureDebianPackages(packages) {
 }
 
 export const debian = {
-  mariadb: { name: "mariadb-server", present: () => !!findExecutable("mariadbd") && !!findExecutable("mariadb-install-db") },
+  mariadb: {
+    name: "mariadb-server",
+    present: () => !!findExecutable("mariadbd") && !!findExecutable("mariadb-install-db"),
+  },
   chromium: { name: "chromium", present: () => existsSync("/usr/bin/chromium") },
   mpmath: { name: "python3-mpmath", present: () => pythonHas("mpmath") },
   scipy: { name: "python3-scipy", present: () => pythonHas("scipy") },
@@ -104,7 +109,10 @@ export async function waitFor(what, check, { timeoutMs = 60_000, intervalMs = 25
 function canConnect(port) {
   return new Promise((resolve) => {
     const socket = net.connect(port, "127.0.0.1");
-    socket.once("connect", () => { socket.destroy(); resolve(true); });
+    socket.once("connect", () => {
+      socket.destroy();
+      resolve(true);
+    });
     socket.once("error", () => resolve(false));
   });
 }
@@ -139,7 +147,11 @@ export async function waitForStopped(timeoutMs = 30_000) {
   const children = started.map((s) => s.child);
   stopAll();
   await Promise.race([
-    Promise.all(children.map((c) => (c.exitCode !== null || c.signalCode !== null ? null : new Promise((r) => c.once("exit", r))))),
+    Promise.all(
+      children.map((c) =>
+        c.exitCode !== null || c.signalCode !== null ? null : new Promise((r) => c.once("exit", r)),
+      ),
+    ),
     new Promise((r) => setTimeout(r, timeoutMs)),
   ]);
 }
@@ -166,13 +178,21 @@ export async function startMariaDb({ dataDir, port, fresh = false }) {
     log(`creating the database folder ${path.relative(root, dataDir)}…`);
     const init = spawnSync(
       findExecutable("mariadb-install-db"),
-      ["--no-defaults", `--datadir=${dataDir}`, "--auth-root-authentication-method=socket", "--skip-test-db", ...userArgs],
+      [
+        "--no-defaults",
+        `--datadir=${dataDir}`,
+        "--auth-root-authentication-method=socket",
+        "--skip-test-db",
+        ...userArgs,
+      ],
       { cwd: root, encoding: "utf8" },
     );
     if (init.status !== 0) fail(`mariadb-install-db failed:\n${init.stdout}\n${init.stderr}`);
   }
   if (!(await portIsFree(port))) {
-    fail(`port ${port} on 127.0.0.1 is already taken. Stop what holds it, or choose another port (AXLEWRIGHT_DB_PORT / AXLEWRIGHT_TEST_DB_PORT).`);
+    fail(
+      `port ${port} on 127.0.0.1 is already taken. Stop what holds it, or choose another port (AXLEWRIGHT_DB_PORT / AXLEWRIGHT_TEST_DB_PORT).`,
+    );
   }
   log(`starting MariaDB on 127.0.0.1:${port}…`);
   startProcess(
@@ -202,10 +222,14 @@ export async function startMariaDb({ dataDir, port, fresh = false }) {
   return {
     socket,
     sql(statements) {
-      const result = spawnSync(findExecutable("mariadb") ?? "mysql", [`--socket=${socket}`, `--user=${adminUser}`, "--batch"], {
-        input: statements,
-        encoding: "utf8",
-      });
+      const result = spawnSync(
+        findExecutable("mariadb") ?? "mysql",
+        [`--socket=${socket}`, `--user=${adminUser}`, "--batch"],
+        {
+          input: statements,
+          encoding: "utf8",
+        },
+      );
       if (result.status !== 0) throw new Error(`SQL failed: ${result.stderr}`);
       return result.stdout;
     },
@@ -270,7 +294,9 @@ export async function startObjectStore(env, { fresh = false } = {}) {
     onUnexpectedExit: (code) => fail(`the local object store exited (code ${code})`),
   });
   await waitFor("the local object store", () => canConnect(port));
-  log(`object store (local fake): http://127.0.0.1:${port}, bucket ${env.S3_BUCKET}, data in ${path.relative(root, env.S3_DATA_DIR)}`);
+  log(
+    `object store (local fake): http://127.0.0.1:${port}, bucket ${env.S3_BUCKET}, data in ${path.relative(root, env.S3_DATA_DIR)}`,
+  );
 }
 
 function newestMtime(entries) {
@@ -289,31 +315,57 @@ function newestMtime(entries) {
 /** `next build` into distDir unless that build is newer than every source it depends on. */
 export function buildApp(env, distDir) {
   const buildId = path.join(root, distDir, "BUILD_ID");
-  const sources = ["app", "components", "lib", "db", "public", "fonts", "auth.ts", "auth.config.ts", "proxy.ts",
-    "package-lock.json", "next.config.mjs", "tailwind.config.ts", "postcss.config.mjs", "tsconfig.json"];
+  const sources = [
+    "app",
+    "components",
+    "lib",
+    "db",
+    "public",
+    "fonts",
+    "auth.ts",
+    "auth.config.ts",
+    "proxy.ts",
+    "package-lock.json",
+    "next.config.mjs",
+    "tailwind.config.ts",
+    "postcss.config.mjs",
+    "tsconfig.json",
+  ];
   if (existsSync(buildId) && statSync(buildId).mtimeMs > newestMtime(sources)) {
     log(`the build in ${distDir} is up to date`);
     return;
   }
   log(`building the app (next build → ${distDir})…`);
-  run(path.join(root, "node_modules/.bin/next"), ["build"], { env: { ...env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: "1" } });
+  run(path.join(root, "node_modules/.bin/next"), ["build"], {
+    env: { ...env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: "1" },
+  });
 }
 
 export async function startApp(env, port, { dev = false } = {}) {
-  if (!(await portIsFree(port))) fail(`port ${port} on 127.0.0.1 is taken (the app wants it). Set PORT to use another.`);
+  if (!(await portIsFree(port)))
+    fail(`port ${port} on 127.0.0.1 is taken (the app wants it). Set PORT to use another.`);
   // Run next's own entry with node, so the pid we hold is the server itself.
-  startProcess("app", process.execPath, [path.join(root, "node_modules/next/dist/bin/next"), dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(port)], {
-    env,
-    onUnexpectedExit: (code) => fail(`the app exited (code ${code})`),
-  });
-  await waitFor("the app", async () => {
-    try {
-      const res = await fetch(`http://127.0.0.1:${port}/api/health`);
-      return res.ok;
-    } catch {
-      return false;
-    }
-  }, { timeoutMs: dev ? 300_000 : 120_000 });
+  startProcess(
+    "app",
+    process.execPath,
+    [path.join(root, "node_modules/next/dist/bin/next"), dev ? "dev" : "start", "-H", "127.0.0.1", "-p", String(port)],
+    {
+      env,
+      onUnexpectedExit: (code) => fail(`the app exited (code ${code})`),
+    },
+  );
+  await waitFor(
+    "the app",
+    async () => {
+      try {
+        const res = await fetch(`http://127.0.0.1:${port}/api/health`);
+        return res.ok;
+      } catch {
+        return false;
+      }
+    },
+    { timeoutMs: dev ? 300_000 : 120_000 },
+  );
 }
 
 export function readJson(file) {

@@ -56,7 +56,10 @@ describe("people and members, as the admin", () => {
 
     // Deactivate; their sign-in is then refused.
     await page.goto(`${baseUrl}/admin/users`);
-    await page.getByTestId(`user-${email}`).getByRole("button", { name: `Deactivate ${name}` }).click();
+    await page
+      .getByTestId(`user-${email}`)
+      .getByRole("button", { name: `Deactivate ${name}` })
+      .click();
     await page.getByTestId(`user-${email}`).getByText("deactivated").waitFor();
     await page.screenshot({ path: screenshotPath("admin-people"), fullPage: true });
     await context.close();
@@ -73,6 +76,8 @@ describe("people and members, as the admin", () => {
   it("mails the new person through the local mail sink", async () => {
     const res = await fetch(`http://127.0.0.1:${process.env.MAIL_SINK_HTTP_PORT}/messages`);
     const messages = (await res.json()) as { to: string[]; subject: string }[];
-    expect(messages.some((m) => m.subject === "Your Axlewright account" && m.to.some((t) => t.startsWith("crew.")))).toBe(true);
+    expect(
+      messages.some((m) => m.subject === "Your Axlewright account" && m.to.some((t) => t.startsWith("crew."))),
+    ).toBe(true);
   });
 });

@@ -22,10 +22,15 @@ describe("the installer's assembly sheet", () => {
     const { context, page } = await signedIn(browser, "installer@example.test");
     const sheet = new AssemblyPage(page);
     await sheet.openFromProject("Square-wheel trike run");
-    expect(await page.getByTestId("sheet-approval").innerText()).toMatch(/^[0-9a-f]{12}\/\d{4}-\d{2}-\d{2} by Ada Penrose/);
+    expect(await page.getByTestId("sheet-approval").innerText()).toMatch(
+      /^[0-9a-f]{12}\/\d{4}-\d{2}-\d{2} by Ada Penrose/,
+    );
     await page.screenshot({ path: screenshotPath("assembly-sheet"), fullPage: true });
 
-    for (const [name, size] of [["A4", /59[45]\.\d* x 841\.\d* pts \(A4\)/], ["US Letter", /612 x 792 pts \(letter\)/]] as const) {
+    for (const [name, size] of [
+      ["A4", /59[45]\.\d* x 841\.\d* pts \(A4\)/],
+      ["US Letter", /612 x 792 pts \(letter\)/],
+    ] as const) {
       await sheet.choosePaper(name);
       await page.emulateMedia({ media: "print" });
       // preferCSSPageSize: the page's own @page size, as the browser's print dialog would use it.
@@ -36,7 +41,8 @@ describe("the installer's assembly sheet", () => {
       // Read back by Debian's poppler-utils (Chromium writes A4 as 594.96 × 841.92 pt, its whole-pixel rounding of ISO 216's 210 × 297 mm).
       expect(execFileSync("/usr/bin/pdfinfo", [file], { encoding: "utf8" })).toMatch(size);
       const text = execFileSync("/usr/bin/pdftotext", ["-layout", file, "-"], { encoding: "utf8" });
-      for (const words of ["Layout plan", "Level and position", "Installer's sign-off", "T01", "±"]) expect(text).toContain(words);
+      for (const words of ["Layout plan", "Level and position", "Installer's sign-off", "T01", "±"])
+        expect(text).toContain(words);
       // Screen-only controls do not print.
       expect(text).not.toContain("Download PDF");
     }
@@ -47,7 +53,8 @@ describe("the installer's assembly sheet", () => {
     expect(await sheet.installedCount()).toMatch(new RegExp(`^${start + 2} of \\d+$`));
     await sheet.openLog();
     const log = page.getByTestId("log-list");
-    for (const part of ["T02", "T03"]) expect(await log.getByText(`Installed part ${part}.`).count()).toBeGreaterThanOrEqual(1);
+    for (const part of ["T02", "T03"])
+      expect(await log.getByText(`Installed part ${part}.`).count()).toBeGreaterThanOrEqual(1);
     await page.screenshot({ path: screenshotPath("build-log"), fullPage: true });
     await context.close();
   });

@@ -49,7 +49,10 @@ describe("the demo job's cut plan", () => {
     // Named by its number within the revision, never the database id.
     const saved = (await cut.save()).match(/^Saved as cut plan (\d+) of (R\d+)/);
     expect(saved).not.toBeNull();
-    await page.getByTestId("stored-plan").filter({ hasText: `Cut plan ${saved![1]} of ${saved![2]}, saved` }).waitFor();
+    await page
+      .getByTestId("stored-plan")
+      .filter({ hasText: `Cut plan ${saved![1]} of ${saved![2]}, saved` })
+      .waitFor();
     await page.screenshot({ path: screenshotPath("cut-plan-demo"), fullPage: true });
 
     const [download] = await Promise.all([page.waitForEvent("download"), page.getByTestId("download-zip").click()]);
@@ -58,7 +61,8 @@ describe("the demo job's cut plan", () => {
     expect(download.suggestedFilename()).toMatch(/\.zip$/);
     // Listed by Info-ZIP's unzip, an independent reader of the format.
     const listing = execFileSync("unzip", ["-Z1", file], { encoding: "utf8" });
-    for (const name of [/README\.txt/, /bom\.csv/, /sheet-1-mm\.dxf/, /sheet-1-preview\.png/]) expect(listing).toMatch(name);
+    for (const name of [/README\.txt/, /bom\.csv/, /sheet-1-mm\.dxf/, /sheet-1-preview\.png/])
+      expect(listing).toMatch(name);
     await context.close();
   });
 

@@ -35,7 +35,11 @@ describe("load-path cautions in the studio", () => {
       expect(grip.text).toMatch(/μ needed 1\.5 with traction H\/V = 0\.2/); // tan(45° + atan 0.2), docs/safety.md T7
       expect(grip.text).toContain("(0.8)");
       // The caution is linked to its place: "show" stops the roll at the corner and marks it.
-      await page.getByTestId("loads-caution").filter({ hasText: "more grip" }).getByRole("button", { name: /Show where/ }).click();
+      await page
+        .getByTestId("loads-caution")
+        .filter({ hasText: "more grip" })
+        .getByRole("button", { name: /Show where/ })
+        .click();
       await page.getByRole("button", { name: "Clear the mark" }).waitFor();
       await page.screenshot({ path: screenshotPath("loads-square-warning"), fullPage: true });
 
@@ -43,8 +47,16 @@ describe("load-path cautions in the studio", () => {
       const label = (await fix.getAttribute("aria-label"))!;
       const sides = Number(/with (\d+) sides/.exec(label)![1]);
       // The module itself agrees the suggested design passes (worked here, outside the browser).
-      const settings = await page.evaluate((id) => JSON.parse(localStorage.getItem(`axlewright:loads:${id}`) ?? "null"), studio.designId());
-      const recheck = checkLoads(loadsInputSchema.parse({ ...settings, spec: { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides, side: 400, cornerRadius: 0 } } }));
+      const settings = await page.evaluate(
+        (id) => JSON.parse(localStorage.getItem(`axlewright:loads:${id}`) ?? "null"),
+        studio.designId(),
+      );
+      const recheck = checkLoads(
+        loadsInputSchema.parse({
+          ...settings,
+          spec: { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides, side: 400, cornerRadius: 0 } },
+        }),
+      );
       expect(recheck.grip.ok).toBe(true);
 
       await fix.click();

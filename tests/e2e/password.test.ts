@@ -32,7 +32,12 @@ async function signInAs(email: string, password: string) {
 
 describe("changing one's own password", () => {
   const tag = Date.now().toString(36);
-  const person = { name: `Wren Alder ${tag}`, email: `wren.${tag}@example.test`, role: "client" as const, password: "welcome-password-2026" };
+  const person = {
+    name: `Wren Alder ${tag}`,
+    email: `wren.${tag}@example.test`,
+    role: "client" as const,
+    password: "welcome-password-2026",
+  };
   const next = "a-new-password-of-mine";
 
   it("refuses a wrong current password, then changes it, ends the other sessions and signs in with the new one", async () => {
@@ -51,7 +56,10 @@ describe("changing one's own password", () => {
     await form.change("not-my-password", next);
     expect(await form.message().innerText()).toBe("That is not your current password.");
     expect(await form.fieldError("Current password")).toBe("That is not your current password.");
-    expect(await here.page.getByLabel("Current password").inputValue(), "a password is never put back in the form").toBe("");
+    expect(
+      await here.page.getByLabel("Current password").inputValue(),
+      "a password is never put back in the form",
+    ).toBe("");
     await here.page.screenshot({ path: screenshotPath("password-wrong-current"), fullPage: true });
 
     await form.change(person.password, next, `${next}-typo`);

@@ -66,7 +66,9 @@ describe("the detector of internal names", () => {
 
 describe.each(WALK)("every page, as $label", (account) => {
   it(`passes the accessibility audit and shows no internal names (${account.pages.length} pages)`, async () => {
-    const { context, page } = account.email ? await signedIn(browser, account.email) : await browser.newContext().then(async (c) => ({ context: c, page: await c.newPage() }));
+    const { context, page } = account.email
+      ? await signedIn(browser, account.email)
+      : await browser.newContext().then(async (c) => ({ context: c, page: await c.newPage() }));
     const problems: string[] = [];
     try {
       for (const p of account.pages) {
@@ -76,9 +78,16 @@ describe.each(WALK)("every page, as $label", (account) => {
           (e: Error) => (problems.push(`${p.path}: did not open as expected: ${e.message.split("\n")[0]}`), false),
         );
         if (!opened) continue;
-        const found = [...describeFindings(p.path, await auditPage(page)), ...describeNames(p.path, await internalNamesOnPage(page))];
+        const found = [
+          ...describeFindings(p.path, await auditPage(page)),
+          ...describeNames(p.path, await internalNamesOnPage(page)),
+        ];
         // A screenshot of each page with a finding, and of the few the walk names to look at.
-        if (found.length > 0 || p.screenshot) await page.screenshot({ path: screenshotPath(`readable-${(account.email ?? "visitor").split("@")[0]}-${p.name}`), fullPage: found.length > 0 });
+        if (found.length > 0 || p.screenshot)
+          await page.screenshot({
+            path: screenshotPath(`readable-${(account.email ?? "visitor").split("@")[0]}-${p.name}`),
+            fullPage: found.length > 0,
+          });
         problems.push(...found);
       }
     } finally {
@@ -95,7 +104,12 @@ describe("the e-mails the app sent", () => {
     const admin = await signedIn(browser, "admin@example.test");
     const people = new PeoplePage(admin.page);
     await people.open();
-    await people.addPerson({ name: `Ivo Marsh ${tag}`, email: `ivo.${tag}@example.test`, role: "installer", password: "welcome-password-2026" });
+    await people.addPerson({
+      name: `Ivo Marsh ${tag}`,
+      email: `ivo.${tag}@example.test`,
+      role: "installer",
+      password: "welcome-password-2026",
+    });
     await admin.context.close();
 
     let messages = await sunkMessages();
@@ -103,14 +117,26 @@ describe("the e-mails the app sent", () => {
       await new Promise((r) => setTimeout(r, 150));
       messages = await sunkMessages();
     }
-    expect(messages.some((m) => m.to.includes(`ivo.${tag}@example.test`)), "the welcome e-mail arrived").toBe(true);
+    expect(
+      messages.some((m) => m.to.includes(`ivo.${tag}@example.test`)),
+      "the welcome e-mail arrived",
+    ).toBe(true);
     const problems: string[] = [];
     for (const m of messages) {
       const subject = subjectOf(m);
       const texts = mimeParts(m.raw)
         .filter((p) => /^text\/(plain|html)/i.test(p.headers["content-type"] ?? "text/plain"))
-        .map((p) => (/^text\/html/i.test(p.headers["content-type"] ?? "") ? htmlText(p.body.toString("utf8")) : p.body.toString("utf8")));
-      for (const text of [subject, ...texts]) problems.push(...internalNamesIn(text).map((f) => `"${subject}" to ${m.to.join(", ")}: ${f.what} "${f.found}" in "…${f.context}…"`));
+        .map((p) =>
+          /^text\/html/i.test(p.headers["content-type"] ?? "")
+            ? htmlText(p.body.toString("utf8"))
+            : p.body.toString("utf8"),
+        );
+      for (const text of [subject, ...texts])
+        problems.push(
+          ...internalNamesIn(text).map(
+            (f) => `"${subject}" to ${m.to.join(", ")}: ${f.what} "${f.found}" in "…${f.context}…"`,
+          ),
+        );
     }
     expect(problems).toEqual([]);
   });

@@ -91,7 +91,9 @@ describe("the client's review", () => {
     await client.page.screenshot({ path: screenshotPath("review-approved-phone"), fullPage: true });
 
     // The shop hears of it, and the cut-plan page carries the reference.
-    expect((await waitForMail("fabricator@example.test", new RegExp(`Approved: .*${DESIGN} R1`))).length).toBeGreaterThanOrEqual(1);
+    expect(
+      (await waitForMail("fabricator@example.test", new RegExp(`Approved: .*${DESIGN} R1`))).length,
+    ).toBeGreaterThanOrEqual(1);
     await shop.page.goto(`${baseUrl}/projects/1/designs/${designId}/cut`);
     const onCutPage = shop.page.getByTestId("approval-reference");
     await onCutPage.waitFor();

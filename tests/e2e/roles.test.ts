@@ -19,10 +19,38 @@ const SHAPES = "Rolling shapes table";
 const TWINS = "Window twins";
 
 const ROLES = [
-  { email: "admin@example.test", role: "admin", projects: [TRIKE, SHAPES, TWINS], people: true, create: true, manage: true },
-  { email: "fabricator@example.test", role: "fabricator", projects: [TRIKE, SHAPES, TWINS], people: false, create: true, manage: true },
-  { email: "client@example.test", role: "client", projects: [TRIKE, SHAPES], people: false, create: false, manage: false },
-  { email: "installer@example.test", role: "installer", projects: [TRIKE], people: false, create: false, manage: false },
+  {
+    email: "admin@example.test",
+    role: "admin",
+    projects: [TRIKE, SHAPES, TWINS],
+    people: true,
+    create: true,
+    manage: true,
+  },
+  {
+    email: "fabricator@example.test",
+    role: "fabricator",
+    projects: [TRIKE, SHAPES, TWINS],
+    people: false,
+    create: true,
+    manage: true,
+  },
+  {
+    email: "client@example.test",
+    role: "client",
+    projects: [TRIKE, SHAPES],
+    people: false,
+    create: false,
+    manage: false,
+  },
+  {
+    email: "installer@example.test",
+    role: "installer",
+    projects: [TRIKE],
+    people: false,
+    create: false,
+    manage: false,
+  },
   { email: "gallery@example.test", role: "client", projects: [TWINS], people: false, create: false, manage: false },
 ];
 

@@ -37,7 +37,8 @@ async function expectEngineReadouts(studio: StudioPage, result: SolveResult, lab
     for (const label of labels) {
       const shown = shownNumbers(await studio.readout(label));
       const engine = engineFigure(result, label);
-      if (shown.length !== engine.length || shown.some((v, i) => !showsValue(v, engine[i]))) wrong.push(`${label}: shows ${shown.join(", ")}, the engine says ${engine.join(", ")}`);
+      if (shown.length !== engine.length || shown.some((v, i) => !showsValue(v, engine[i])))
+        wrong.push(`${label}: shows ${shown.join(", ")}, the engine says ${engine.join(", ")}`);
     }
     if (!wrong.length) return;
     if (Date.now() > deadline) expect(wrong, "readouts that differ from the engine").toEqual([]);
@@ -157,14 +158,19 @@ describe("the studio, as the fabricator", () => {
     await studio.waitForReadoutChange(text);
     const after = solve(m.changed(presetSpec(m.presetId)));
     await expectEngineReadouts(studio, after, m.readouts);
-    expect(engineFigure(after, m.known[0]), "the change moves the figures").not.toEqual(engineFigure(before, m.known[0]));
+    expect(engineFigure(after, m.known[0]), "the change moves the figures").not.toEqual(
+      engineFigure(before, m.known[0]),
+    );
     expect(await studio.readout(m.known[0])).toBe(m.known[1]);
     await page.getByTestId("unsaved-flag").waitFor();
 
     // The rolling check arrives after the drawing, and it is the engine's check of the changed design.
     await studio.waitForCheck();
     const friction = Number(await page.locator("[data-check=friction] dd").first().innerText());
-    expect(showsValue(friction, after.check.frictionDemand.max, 3), `friction demand ${friction} vs ${after.check.frictionDemand.max}`).toBe(true);
+    expect(
+      showsValue(friction, after.check.frictionDemand.max, 3),
+      `friction demand ${friction} vs ${after.check.frictionDemand.max}`,
+    ).toBe(true);
 
     await expectLevelRoll(page, studio, m.traces);
     await page.screenshot({ path: screenshotPath(`studio-${m.mode}`), fullPage: true });
@@ -216,7 +222,7 @@ describe("the studio, as the fabricator", () => {
     // Hall & Wagon 1992: period 2A·asinh(1) for inradius A = 200 and 150 mm.
     expect((await compare.figure("Period (one hump to the next)"))[0]).toBe("352.549 mm");
     expect((await compare.figure("Period (one hump to the next)"))[1]).toBe("264.412 mm");
-    expect((await compare.figure("Note"))).toEqual(["400 mm side", "300 mm side"]);
+    expect(await compare.figure("Note")).toEqual(["400 mm side", "300 mm side"]);
 
     const overlay = compare.overlay();
     await overlay.waitFor();
@@ -224,7 +230,11 @@ describe("the studio, as the fabricator", () => {
     const box = (await overlay.boundingBox())!;
     expect(box.width).toBeGreaterThan(100);
     expect(box.height).toBeGreaterThan(100);
-    const paths = await overlay.locator("path").evaluateAll((els) => els.map((el) => ({ d: el.getAttribute("d") ?? "", dashed: el.hasAttribute("stroke-dasharray") })));
+    const paths = await overlay
+      .locator("path")
+      .evaluateAll((els) =>
+        els.map((el) => ({ d: el.getAttribute("d") ?? "", dashed: el.hasAttribute("stroke-dasharray") })),
+      );
     expect(paths).toHaveLength(2);
     expect(paths[0].d).not.toBe(paths[1].d);
     expect(paths.map((p) => p.dashed)).toEqual([false, true]);
@@ -239,7 +249,10 @@ describe("the studio, as the fabricator", () => {
     await page.getByTestId("wheel-kind").selectOption("outline");
     const text = await studio.readoutText();
     await page.getByTestId("upload-wheel").setInputFiles(path.join(fixtures, "notched-square.csv"));
-    await page.getByTestId("upload-message").filter({ hasText: /^Read \d+ points from notched-square\.csv/ }).waitFor();
+    await page
+      .getByTestId("upload-message")
+      .filter({ hasText: /^Read \d+ points from notched-square\.csv/ })
+      .waitFor();
     await studio.waitForReadoutChange(text);
     const axleX = page.getByLabel("Axle x (mm)", { exact: true });
     const axleY = page.getByLabel("Axle y (mm)", { exact: true });
@@ -285,7 +298,10 @@ describe("the studio, as the fabricator", () => {
     await studio.axleRefusal().waitFor();
     const refusal = await studio.axleRefusal().innerText();
     // Word for word what the engine says of that axle, asked here in the test.
-    const refused = { ...spec2, wheel: { ...spec2.wheel!, axle: { x: tidy(a1.x + 1), y: tidy(a1.y - 30) } } } as DesignSpecInput;
+    const refused = {
+      ...spec2,
+      wheel: { ...spec2.wheel!, axle: { x: tidy(a1.x + 1), y: tidy(a1.y - 30) } },
+    } as DesignSpecInput;
     expect(refusal).toBe(engineRefusal(refused));
     expect(refusal).toMatch(/^The outline is not star-shaped about the axle/);
     expect(Number(await axleY.inputValue()), "a refused position is not taken").toBe(tidy(a1.y - 20));

@@ -46,7 +46,10 @@ describe("server actions keep nothing from a bad form, and say why", () => {
   it("a malformed e-mail", async () => {
     actAs(adminId);
     const before = [await userCount(), await auditCount()];
-    const state = await createUserAction({}, form({ email: "not-an-address", name: "Someone", role: "client", password: "long-enough-pw" }));
+    const state = await createUserAction(
+      {},
+      form({ email: "not-an-address", name: "Someone", role: "client", password: "long-enough-pw" }),
+    );
     expect(state.ok).toBe(false);
     expect(state.status).toBe(400);
     expect(state.fields?.email).toEqual(["That is not an e-mail address."]);
@@ -58,7 +61,10 @@ describe("server actions keep nothing from a bad form, and say why", () => {
   it("an over-long name", async () => {
     actAs(adminId);
     const before = await userCount();
-    const state = await createUserAction({}, form({ email: `long.${runTag}@example.test`, name: "x".repeat(121), role: "client", password: "long-enough-pw" }));
+    const state = await createUserAction(
+      {},
+      form({ email: `long.${runTag}@example.test`, name: "x".repeat(121), role: "client", password: "long-enough-pw" }),
+    );
     expect(state.status).toBe(400);
     expect(state.fields?.name).toEqual(["A name has at most 120 characters."]);
     expect(await userCount()).toBe(before);
@@ -66,14 +72,20 @@ describe("server actions keep nothing from a bad form, and say why", () => {
 
   it("an e-mail already in use", async () => {
     actAs(adminId);
-    const state = await createUserAction({}, form({ email: "admin@example.test", name: "Copy", role: "client", password: "long-enough-pw" }));
+    const state = await createUserAction(
+      {},
+      form({ email: "admin@example.test", name: "Copy", role: "client", password: "long-enough-pw" }),
+    );
     expect(state.status).toBe(409);
     expect(state.fields?.email).toEqual(["Already in use."]);
   });
 
   it("a short password", async () => {
     actAs(adminId);
-    const state = await createUserAction({}, form({ email: `short.${runTag}@example.test`, name: "Shorty", role: "client", password: "short" }));
+    const state = await createUserAction(
+      {},
+      form({ email: `short.${runTag}@example.test`, name: "Shorty", role: "client", password: "short" }),
+    );
     expect(state.status).toBe(400);
     expect(state.fields?.password?.[0]).toMatch(/at least 10 characters/);
   });
@@ -93,7 +105,10 @@ describe("route handlers answer bad requests with one error shape", () => {
   it("a member id from another project is not found here, and stays where it is", async () => {
     actAs(adminId);
     const before = await auditCount();
-    const res = await memberRoute.DELETE(new Request("http://t/x", { method: "DELETE" }), ctx({ id: String(projectId), memberId: String(otherMemberId) }));
+    const res = await memberRoute.DELETE(
+      new Request("http://t/x", { method: "DELETE" }),
+      ctx({ id: String(projectId), memberId: String(otherMemberId) }),
+    );
     expect(res.status).toBe(404);
     expect(await res.json()).toEqual({ status: 404, message: "That person is not a member of this project." });
     expect(await membershipExists(otherMemberId)).toBe(true);
@@ -119,14 +134,20 @@ describe("route handlers answer bad requests with one error shape", () => {
   it("a body over the size limit", async () => {
     actAs(adminId);
     const before = (await db.select({ n: count() }).from(projects))[0].n;
-    const res = await projectsRoute.POST(new Request("http://t/x", { method: "POST", body: JSON.stringify({ name: "x".repeat(70_000) }) }), ctx({}));
+    const res = await projectsRoute.POST(
+      new Request("http://t/x", { method: "POST", body: JSON.stringify({ name: "x".repeat(70_000) }) }),
+      ctx({}),
+    );
     expect(res.status).toBe(413);
     expect((await db.select({ n: count() }).from(projects))[0].n).toBe(before);
   });
 
   it("an over-long project name names the field", async () => {
     actAs(adminId);
-    const res = await projectsRoute.POST(new Request("http://t/x", { method: "POST", body: JSON.stringify({ name: "x".repeat(161) }) }), ctx({}));
+    const res = await projectsRoute.POST(
+      new Request("http://t/x", { method: "POST", body: JSON.stringify({ name: "x".repeat(161) }) }),
+      ctx({}),
+    );
     expect(res.status).toBe(400);
     const body = await res.json();
     expect(body.status).toBe(400);
@@ -135,7 +156,10 @@ describe("route handlers answer bad requests with one error shape", () => {
 
   it("a status that does not exist", async () => {
     actAs(adminId);
-    const res = await projectRoute.PATCH(new Request("http://t/x", { method: "PATCH", body: JSON.stringify({ status: "finished" }) }), ctx({ id: String(projectId) }));
+    const res = await projectRoute.PATCH(
+      new Request("http://t/x", { method: "PATCH", body: JSON.stringify({ status: "finished" }) }),
+      ctx({ id: String(projectId) }),
+    );
     expect(res.status).toBe(400);
     expect((await res.json()).fields.status).toEqual(["Choose one of the statuses."]);
   });

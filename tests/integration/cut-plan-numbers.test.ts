@@ -22,7 +22,11 @@ let choice: PlanChoice;
 let nest: Awaited<ReturnType<typeof validNest>>["nest"];
 
 const json = (method: string, body?: unknown) =>
-  new Request("http://test.local/api", { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+  new Request("http://test.local/api", {
+    method,
+    headers: { "content-type": "application/json" },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
 const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
 
 async function save(revisionId: number): Promise<{ id: number; number: number }> {
@@ -35,7 +39,9 @@ async function save(revisionId: number): Promise<{ id: number; number: number }>
 beforeAll(async () => {
   fabricator = (await makeUser("fabricator", "numbers-fabricator")).id;
   projectId = await makeProject("Cut plan numbers", [{ userId: fabricator, role: "fabricator" }]);
-  const [d] = await db.insert(designs).values({ projectId, name: "Numbered track", mode: "track-for-wheel", draft: SQUARE });
+  const [d] = await db
+    .insert(designs)
+    .values({ projectId, name: "Numbered track", mode: "track-for-wheel", draft: SQUARE });
   const actor = { id: fabricator, role: "fabricator" as const, name: "f", email: "f@example.test", active: true };
   revision.r1 = (await saveRevision(actor as never, d.insertId, projectId, { spec: SQUARE, note: "" })).id;
   revision.r2 = (await saveRevision(actor as never, d.insertId, projectId, { spec: SQUARE, note: "again" })).id;
@@ -60,16 +66,30 @@ describe("cut plan numbers", () => {
   });
 
   it("names the plan by its number in the build log", async () => {
-    const [plan] = await db.select({ id: cutPlans.id }).from(cutPlans).where(and(eq(cutPlans.revisionId, revision.r2), eq(cutPlans.number, 1)));
-    const [entry] = await db.select({ text: buildLogEntries.text }).from(buildLogEntries).where(eq(buildLogEntries.cutPlanId, plan.id));
+    const [plan] = await db
+      .select({ id: cutPlans.id })
+      .from(cutPlans)
+      .where(and(eq(cutPlans.revisionId, revision.r2), eq(cutPlans.number, 1)));
+    const [entry] = await db
+      .select({ text: buildLogEntries.text })
+      .from(buildLogEntries)
+      .where(eq(buildLogEntries.cutPlanId, plan.id));
     expect(entry.text).toMatch(/^Cut plan 1 of R2 saved for review: /);
   });
 
   it("gives saves at the same moment different numbers", async () => {
     const saved = await Promise.all([save(revision.r1), save(revision.r1), save(revision.r1), save(revision.r2)]);
-    expect(saved.slice(0, 3).map((p) => p.number).sort()).toEqual([3, 4, 5]);
+    expect(
+      saved
+        .slice(0, 3)
+        .map((p) => p.number)
+        .sort(),
+    ).toEqual([3, 4, 5]);
     expect(saved[3].number).toBe(2);
-    const rows = await db.select({ number: cutPlans.number }).from(cutPlans).where(eq(cutPlans.revisionId, revision.r1));
+    const rows = await db
+      .select({ number: cutPlans.number })
+      .from(cutPlans)
+      .where(eq(cutPlans.revisionId, revision.r1));
     expect(rows.map((r) => r.number).sort()).toEqual([1, 2, 3, 4, 5]);
   });
 

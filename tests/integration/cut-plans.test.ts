@@ -26,13 +26,19 @@ let projectId = 0;
 let choice: PlanChoice;
 
 const json = (method: string, body?: unknown) =>
-  new Request("http://test.local/api", { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+  new Request("http://test.local/api", {
+    method,
+    headers: { "content-type": "application/json" },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
 const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
 
-const planCount = async () => (await db.select({ n: count() }).from(cutPlans).where(eq(cutPlans.revisionId, revisionId)))[0].n;
+const planCount = async () =>
+  (await db.select({ n: count() }).from(cutPlans).where(eq(cutPlans.revisionId, revisionId)))[0].n;
 
 beforeAll(async () => {
-  for (const role of ["fabricator", "client", "installer"] as const) who[role] = (await makeUser(role, `cut-${role}`)).id;
+  for (const role of ["fabricator", "client", "installer"] as const)
+    who[role] = (await makeUser(role, `cut-${role}`)).id;
   who.outsider = (await makeUser("fabricator", "cut-outsider")).id;
   who.admin = (await makeUser("admin", "cut-admin")).id;
   projectId = await makeProject("Cut plan project", [
@@ -40,7 +46,9 @@ beforeAll(async () => {
     { userId: who.client, role: "client" },
     { userId: who.installer, role: "installer" },
   ]);
-  const [d] = await db.insert(designs).values({ projectId, name: "Trike track", mode: "track-for-wheel", draft: SQUARE });
+  const [d] = await db
+    .insert(designs)
+    .values({ projectId, name: "Trike track", mode: "track-for-wheel", draft: SQUARE });
   const actor = { id: who.fabricator, role: "fabricator" as const, name: "f", email: "f@example.test", active: true };
   revisionId = (await saveRevision(actor as never, d.insertId, projectId, { spec: SQUARE, note: "" })).id;
   choice = await demoChoice();
@@ -81,16 +89,33 @@ describe("storing a cut plan", () => {
     writeFileSync(join(dir, "job.zip"), Buffer.from(await zip.arrayBuffer()));
     // Listed by Info-ZIP's unzip, an independent reader of the format.
     const listing = execFileSync("unzip", ["-Z1", join(dir, "job.zip")], { encoding: "utf8" });
-    for (const pattern of [/README\.txt/, /bom\.csv/, /sheet-1-mm\.dxf/, /sheet-1-mm\.svg/, /sheet-1-preview\.png/, /parts-mm\.dxf/]) expect(listing).toMatch(pattern);
-    for (const [caller, status] of [["client", 403], ["installer", 403], ["outsider", 404]] as const) {
+    for (const pattern of [
+      /README\.txt/,
+      /bom\.csv/,
+      /sheet-1-mm\.dxf/,
+      /sheet-1-mm\.svg/,
+      /sheet-1-preview\.png/,
+      /parts-mm\.dxf/,
+    ])
+      expect(listing).toMatch(pattern);
+    for (const [caller, status] of [
+      ["client", 403],
+      ["installer", 403],
+      ["outsider", 404],
+    ] as const) {
       actAs(who[caller]);
-      expect((await planFilesRoute.GET(json("GET"), ctx({ id: String(plan.id), name: "job.zip" }))).status, caller).toBe(status);
+      expect(
+        (await planFilesRoute.GET(json("GET"), ctx({ id: String(plan.id), name: "job.zip" }))).status,
+        caller,
+      ).toBe(status);
       expect((await cutPlansRoute.GET(json("GET"), ctx({ id: String(revisionId) }))).status, caller).toBe(status);
     }
     actAs(null);
     expect((await planFilesRoute.GET(json("GET"), ctx({ id: String(plan.id), name: "job.zip" }))).status).toBe(401);
     actAs(who.admin);
-    expect((await planFilesRoute.GET(json("GET"), ctx({ id: String(plan.id), name: "nonsense.exe" }))).status).toBe(404);
+    expect((await planFilesRoute.GET(json("GET"), ctx({ id: String(plan.id), name: "nonsense.exe" }))).status).toBe(
+      404,
+    );
   });
 
   it.each([
@@ -101,7 +126,9 @@ describe("storing a cut plan", () => {
     const { nest } = await validNest(choice);
     actAs(who[caller]);
     const before = await planCount();
-    expect((await cutPlansRoute.POST(json("POST", { ...choice, nest }), ctx({ id: String(revisionId) }))).status).toBe(status);
+    expect((await cutPlansRoute.POST(json("POST", { ...choice, nest }), ctx({ id: String(revisionId) }))).status).toBe(
+      status,
+    );
     expect(await planCount()).toBe(before);
   });
 });
@@ -110,7 +137,16 @@ describe("the server's own check", () => {
   it("refuses a nest with two parts on top of each other", async () => {
     const { nest } = await validNest(choice);
     const [a, b] = nest.sheets[0].placements;
-    const tampered = { ...nest, sheets: [{ ...nest.sheets[0], placements: [a, { ...b, x: a.x, y: a.y, rotation: a.rotation }, ...nest.sheets[0].placements.slice(2)] }, ...nest.sheets.slice(1)] };
+    const tampered = {
+      ...nest,
+      sheets: [
+        {
+          ...nest.sheets[0],
+          placements: [a, { ...b, x: a.x, y: a.y, rotation: a.rotation }, ...nest.sheets[0].placements.slice(2)],
+        },
+        ...nest.sheets.slice(1),
+      ],
+    };
     actAs(who.fabricator);
     const before = await planCount();
     const res = await cutPlansRoute.POST(json("POST", { ...choice, nest: tampered }), ctx({ id: String(revisionId) }));
@@ -121,7 +157,10 @@ describe("the server's own check", () => {
 
   it("refuses a nest that leaves a part out", async () => {
     const { nest } = await validNest(choice);
-    const short = { ...nest, sheets: [{ ...nest.sheets[0], placements: nest.sheets[0].placements.slice(1) }, ...nest.sheets.slice(1)] };
+    const short = {
+      ...nest,
+      sheets: [{ ...nest.sheets[0], placements: nest.sheets[0].placements.slice(1) }, ...nest.sheets.slice(1)],
+    };
     actAs(who.fabricator);
     const res = await cutPlansRoute.POST(json("POST", { ...choice, nest: short }), ctx({ id: String(revisionId) }));
     expect(res.status).toBe(400);
@@ -134,7 +173,10 @@ describe("bad settings", () => {
     const { nest } = await validNest(choice);
     actAs(who.fabricator);
     const before = [await planCount(), await auditCount()];
-    const res = await cutPlansRoute.POST(json("POST", { ...choice, ...over, settings: { ...choice.settings, ...settings }, nest }), ctx({ id: String(revisionId) }));
+    const res = await cutPlansRoute.POST(
+      json("POST", { ...choice, ...over, settings: { ...choice.settings, ...settings }, nest }),
+      ctx({ id: String(revisionId) }),
+    );
     expect([await planCount(), await auditCount()], "nothing written").toEqual(before);
     return { status: res.status, body: await res.json() };
   };
@@ -153,7 +195,15 @@ describe("bad settings", () => {
   });
 
   it("a sheet smaller than a part", async () => {
-    const [tiny] = await db.insert(stockSheets).values({ name: `Offcut ${Date.now()}`, materialId: choice.materialId, lengthMm: 500, widthMm: 300, grain: "length", source: "test offcut", sourceKind: "measured" });
+    const [tiny] = await db.insert(stockSheets).values({
+      name: `Offcut ${Date.now()}`,
+      materialId: choice.materialId,
+      lengthMm: 500,
+      widthMm: 300,
+      grain: "length",
+      source: "test offcut",
+      sourceKind: "measured",
+    });
     const r = await post({}, { stockSheetId: tiny.insertId });
     expect(r.status).toBe(400);
     expect(r.body.message).toMatch(/too long|too wide/);
@@ -163,7 +213,10 @@ describe("bad settings", () => {
     // The kerf comes from the library row; a request's own "machine" is ignored, not trusted.
     const { nest } = await validNest(choice);
     actAs(who.fabricator);
-    const res = await cutPlansRoute.POST(json("POST", { ...choice, settings: { ...choice.settings, machine: { kind: "router", kerf: -1 } }, nest }), ctx({ id: String(revisionId) }));
+    const res = await cutPlansRoute.POST(
+      json("POST", { ...choice, settings: { ...choice.settings, machine: { kind: "router", kerf: -1 } }, nest }),
+      ctx({ id: String(revisionId) }),
+    );
     expect(res.status).toBe(201);
   });
 });

@@ -17,7 +17,16 @@ vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
 
 const SQUARE = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400 } };
 
-const CALLERS = ["anonymous", "admin", "fabricator member", "fabricator non-member", "client member", "client non-member", "installer member", "installer non-member"] as const;
+const CALLERS = [
+  "anonymous",
+  "admin",
+  "fabricator member",
+  "fabricator non-member",
+  "client member",
+  "client non-member",
+  "installer member",
+  "installer non-member",
+] as const;
 type Caller = (typeof CALLERS)[number];
 const ids = {} as Record<Exclude<Caller, "anonymous">, number>;
 let projectId = 0;
@@ -25,7 +34,8 @@ let designId = 0;
 let revisionId = 0;
 
 const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
-const req = (method: string, body?: unknown) => new Request("http://t/api", { method, body: body === undefined ? undefined : JSON.stringify(body) });
+const req = (method: string, body?: unknown) =>
+  new Request("http://t/api", { method, body: body === undefined ? undefined : JSON.stringify(body) });
 
 beforeAll(async () => {
   ids.admin = (await makeUser("admin")).id;
@@ -39,7 +49,10 @@ beforeAll(async () => {
     { userId: ids["installer member"], role: "installer" },
   ]);
   actAs(ids["fabricator member"]);
-  const res = await designsRoute.POST(req("POST", { name: "Trike track", spec: SQUARE }), ctx({ id: String(projectId) }));
+  const res = await designsRoute.POST(
+    req("POST", { name: "Trike track", spec: SQUARE }),
+    ctx({ id: String(projectId) }),
+  );
   designId = (await res.json()).design.id;
   const saved = await revisionsRoute.POST(req("POST", { spec: SQUARE, note: "first" }), ctx({ id: String(designId) }));
   revisionId = (await saved.json()).revision.id;
@@ -50,26 +63,95 @@ afterAll(async () => {
 });
 
 const view: Record<Caller, number> = {
-  anonymous: 401, admin: 200, "fabricator member": 200, "fabricator non-member": 404, "client member": 200,
-  "client non-member": 404, "installer member": 200, "installer non-member": 404,
+  anonymous: 401,
+  admin: 200,
+  "fabricator member": 200,
+  "fabricator non-member": 404,
+  "client member": 200,
+  "client non-member": 404,
+  "installer member": 200,
+  "installer non-member": 404,
 };
 const edit = (ok: number): Record<Caller, number> => ({
-  anonymous: 401, admin: ok, "fabricator member": ok, "fabricator non-member": 404, "client member": 403,
-  "client non-member": 404, "installer member": 403, "installer non-member": 404,
+  anonymous: 401,
+  admin: ok,
+  "fabricator member": ok,
+  "fabricator non-member": 404,
+  "client member": 403,
+  "client non-member": 404,
+  "installer member": 403,
+  "installer non-member": 404,
 });
-const immutable: Record<Caller, number> = { ...view, admin: 409, "fabricator member": 409, "client member": 409, "installer member": 409 };
+const immutable: Record<Caller, number> = {
+  ...view,
+  admin: 409,
+  "fabricator member": 409,
+  "client member": 409,
+  "installer member": 409,
+};
 
 const CASES: { name: string; expect: Record<Caller, number>; writes: boolean; call: () => Promise<Response> }[] = [
-  { name: "GET /api/projects/[id]/designs", expect: view, writes: false, call: () => designsRoute.GET(req("GET"), ctx({ id: String(projectId) })) },
-  { name: "POST /api/projects/[id]/designs", expect: edit(201), writes: true, call: () => designsRoute.POST(req("POST", { name: "Another", spec: SQUARE }), ctx({ id: String(projectId) })) },
-  { name: "GET /api/designs/[id]", expect: view, writes: false, call: () => designRoute.GET(req("GET"), ctx({ id: String(designId) })) },
-  { name: "PATCH /api/designs/[id]", expect: edit(200), writes: true, call: () => designRoute.PATCH(req("PATCH", { draft: { ...SQUARE, tolerance: 0.02 } }), ctx({ id: String(designId) })) },
-  { name: "GET /api/designs/[id]/revisions", expect: view, writes: false, call: () => revisionsRoute.GET(req("GET"), ctx({ id: String(designId) })) },
-  { name: "POST /api/designs/[id]/revisions", expect: edit(201), writes: true, call: () => revisionsRoute.POST(req("POST", { spec: SQUARE, note: "again" }), ctx({ id: String(designId) })) },
-  { name: "GET /api/revisions/[id]", expect: view, writes: false, call: () => revisionRoute.GET(req("GET"), ctx({ id: String(revisionId) })) },
-  { name: "GET /api/revisions/[id]/preview", expect: view, writes: false, call: () => previewRoute.GET(req("GET"), ctx({ id: String(revisionId) })) },
-  { name: "PATCH /api/revisions/[id]", expect: immutable, writes: false, call: () => revisionRoute.PATCH(req("PATCH", { note: "changed" }), ctx({ id: String(revisionId) })) },
-  { name: "DELETE /api/revisions/[id]", expect: immutable, writes: false, call: () => revisionRoute.DELETE(req("DELETE"), ctx({ id: String(revisionId) })) },
+  {
+    name: "GET /api/projects/[id]/designs",
+    expect: view,
+    writes: false,
+    call: () => designsRoute.GET(req("GET"), ctx({ id: String(projectId) })),
+  },
+  {
+    name: "POST /api/projects/[id]/designs",
+    expect: edit(201),
+    writes: true,
+    call: () => designsRoute.POST(req("POST", { name: "Another", spec: SQUARE }), ctx({ id: String(projectId) })),
+  },
+  {
+    name: "GET /api/designs/[id]",
+    expect: view,
+    writes: false,
+    call: () => designRoute.GET(req("GET"), ctx({ id: String(designId) })),
+  },
+  {
+    name: "PATCH /api/designs/[id]",
+    expect: edit(200),
+    writes: true,
+    call: () =>
+      designRoute.PATCH(req("PATCH", { draft: { ...SQUARE, tolerance: 0.02 } }), ctx({ id: String(designId) })),
+  },
+  {
+    name: "GET /api/designs/[id]/revisions",
+    expect: view,
+    writes: false,
+    call: () => revisionsRoute.GET(req("GET"), ctx({ id: String(designId) })),
+  },
+  {
+    name: "POST /api/designs/[id]/revisions",
+    expect: edit(201),
+    writes: true,
+    call: () => revisionsRoute.POST(req("POST", { spec: SQUARE, note: "again" }), ctx({ id: String(designId) })),
+  },
+  {
+    name: "GET /api/revisions/[id]",
+    expect: view,
+    writes: false,
+    call: () => revisionRoute.GET(req("GET"), ctx({ id: String(revisionId) })),
+  },
+  {
+    name: "GET /api/revisions/[id]/preview",
+    expect: view,
+    writes: false,
+    call: () => previewRoute.GET(req("GET"), ctx({ id: String(revisionId) })),
+  },
+  {
+    name: "PATCH /api/revisions/[id]",
+    expect: immutable,
+    writes: false,
+    call: () => revisionRoute.PATCH(req("PATCH", { note: "changed" }), ctx({ id: String(revisionId) })),
+  },
+  {
+    name: "DELETE /api/revisions/[id]",
+    expect: immutable,
+    writes: false,
+    call: () => revisionRoute.DELETE(req("DELETE"), ctx({ id: String(revisionId) })),
+  },
 ];
 
 describe.each(CASES)("$name", (c) => {
@@ -78,7 +160,7 @@ describe.each(CASES)("$name", (c) => {
     const before = await auditCount();
     const res = await c.call();
     expect(res.status).toBe(c.expect[caller]);
-    expect(await auditCount() - before).toBe(c.writes && res.status < 400 ? 1 : 0);
+    expect((await auditCount()) - before).toBe(c.writes && res.status < 400 ? 1 : 0);
   });
 });
 
@@ -102,8 +184,14 @@ describe("revisions", () => {
 
   it("cannot be changed even with SQL behind the application's back", async () => {
     // Drizzle wraps the driver's error; the trigger's own words are in its cause.
-    const refusal = (p: Promise<unknown>) => p.then(() => "accepted", (e: Error & { cause?: Error }) => e.cause?.message ?? e.message);
-    expect(await refusal(db.update(revisions).set({ note: "tampered" }).where(eq(revisions.id, revisionId)))).toMatch(/immutable/);
+    const refusal = (p: Promise<unknown>) =>
+      p.then(
+        () => "accepted",
+        (e: Error & { cause?: Error }) => e.cause?.message ?? e.message,
+      );
+    expect(await refusal(db.update(revisions).set({ note: "tampered" }).where(eq(revisions.id, revisionId)))).toMatch(
+      /immutable/,
+    );
     expect(await refusal(db.delete(revisions).where(eq(revisions.id, revisionId)))).toMatch(/immutable/);
     const [row] = await db.select().from(revisions).where(eq(revisions.id, revisionId));
     expect(row.note).toBe("first");
@@ -111,11 +199,18 @@ describe("revisions", () => {
 
   it("refuses a spec the engine refuses, with the engine's message, and stores nothing", async () => {
     actAs(ids["fabricator member"]);
-    const [{ n: before }] = (await db.execute(sql`select count(*) as n from revisions`))[0] as unknown as { n: number }[];
-    const res = await revisionsRoute.POST(req("POST", { spec: { mode: "track-for-wheel", wheel: { kind: "polar", r: "100 - 200*cos(theta)" } }, note: "" }), ctx({ id: String(designId) }));
+    const [{ n: before }] = (await db.execute(sql`select count(*) as n from revisions`))[0] as unknown as {
+      n: number;
+    }[];
+    const res = await revisionsRoute.POST(
+      req("POST", { spec: { mode: "track-for-wheel", wheel: { kind: "polar", r: "100 - 200*cos(theta)" } }, note: "" }),
+      ctx({ id: String(designId) }),
+    );
     expect(res.status).toBe(400);
     expect((await res.json()).message).toMatch(/./);
-    const [{ n: after }] = (await db.execute(sql`select count(*) as n from revisions`))[0] as unknown as { n: number }[];
+    const [{ n: after }] = (await db.execute(sql`select count(*) as n from revisions`))[0] as unknown as {
+      n: number;
+    }[];
     expect(Number(after)).toBe(Number(before));
   });
 

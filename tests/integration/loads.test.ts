@@ -24,12 +24,22 @@ const RIDE = {
   traction: 0.2,
   mu: 0.8,
   wheel: { material: "Rubber tread 3 mm, 60 Shore A", modulusGpa: 0.004, poisson: 0.49, treadWidthMm: 36 },
-  track: { material: "Birch plywood 18 mm", modulusGpa: 6.86, poisson: 0.3, widthMm: 36, depthMm: 80, supportSpanMm: 600, densityKgM3: 680, allowableMpa: 4 },
+  track: {
+    material: "Birch plywood 18 mm",
+    modulusGpa: 6.86,
+    poisson: 0.3,
+    widthMm: 36,
+    depthMm: 80,
+    supportSpanMm: 600,
+    densityKgM3: 680,
+    allowableMpa: 4,
+  },
   clearancesMm: { "wheel to fork": 12 },
 };
 
 const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
-const req = (method: string, body?: unknown) => new Request("http://t/api", { method, body: body === undefined ? undefined : JSON.stringify(body) });
+const req = (method: string, body?: unknown) =>
+  new Request("http://t/api", { method, body: body === undefined ? undefined : JSON.stringify(body) });
 let designId = 0;
 let clientId = 0;
 let fabId = 0;
@@ -42,7 +52,11 @@ beforeAll(async () => {
     { userId: clientId, role: "client" },
   ]);
   actAs(fab);
-  designId = (await (await designsRoute.POST(req("POST", { name: "Square", spec: SQUARE }), ctx({ id: String(projectId) }))).json()).design.id;
+  designId = (
+    await (
+      await designsRoute.POST(req("POST", { name: "Square", spec: SQUARE }), ctx({ id: String(projectId) }))
+    ).json()
+  ).design.id;
 });
 
 afterAll(async () => {
@@ -52,7 +66,10 @@ afterAll(async () => {
 describe("load settings", () => {
   it("are kept with the draft, and a bad one is refused naming the field, keeping the old", async () => {
     expect((await designRoute.PATCH(req("PATCH", { loads: RIDE }), ctx({ id: String(designId) }))).status).toBe(200);
-    const bad = await designRoute.PATCH(req("PATCH", { loads: { ...RIDE, wheel: { ...RIDE.wheel, poisson: 0.7 } } }), ctx({ id: String(designId) }));
+    const bad = await designRoute.PATCH(
+      req("PATCH", { loads: { ...RIDE, wheel: { ...RIDE.wheel, poisson: 0.7 } } }),
+      ctx({ id: String(designId) }),
+    );
     expect(bad.status).toBe(400);
     expect((await bad.json()).fields.loads.join(" ")).toMatch(/Poisson's ratio must be from 0 to 0\.49/);
     const got = await (await designRoute.GET(req("GET"), ctx({ id: String(designId) }))).json();
@@ -61,12 +78,17 @@ describe("load settings", () => {
 
   it("are not the client's to change", async () => {
     actAs(clientId);
-    expect((await designRoute.PATCH(req("PATCH", { loads: { ...RIDE, use: "display" } }), ctx({ id: String(designId) }))).status).toBe(403);
+    expect(
+      (await designRoute.PATCH(req("PATCH", { loads: { ...RIDE, use: "display" } }), ctx({ id: String(designId) })))
+        .status,
+    ).toBe(403);
   });
 
   it("go into each revision as they are when it is saved, and the cautions come from them", async () => {
     actAs(fabId);
-    const saved = await (await revisionsRoute.POST(req("POST", { spec: SQUARE, note: "ride" }), ctx({ id: String(designId) }))).json();
+    const saved = await (
+      await revisionsRoute.POST(req("POST", { spec: SQUARE, note: "ride" }), ctx({ id: String(designId) }))
+    ).json();
     // A later change to the draft's settings does not reach the saved revision.
     await designRoute.PATCH(req("PATCH", { loads: { ...RIDE, use: "display" } }), ctx({ id: String(designId) }));
     const { revision } = await (await revisionRoute.GET(req("GET"), ctx({ id: String(saved.revision.id) }))).json();
@@ -77,7 +99,9 @@ describe("load settings", () => {
     // The same figures as the module run here on the same input (the library's treads only feed the helper).
     const here = checkLoads(loadsInputSchema.parse({ ...RIDE, spec: SQUARE }));
     expect(server.report.grip.needed).toBe(here.grip.needed);
-    expect(server.report.cautions.map((c) => [c.signal, c.check])).toEqual(here.cautions.map((c) => [c.signal, c.check]));
+    expect(server.report.cautions.map((c) => [c.signal, c.check])).toEqual(
+      here.cautions.map((c) => [c.signal, c.check]),
+    );
     expect(server.report.cautions.find((c) => c.check === "grip")?.signal).toBe("WARNING");
     expect(server.report.cautions.find((c) => c.check === "gap")?.name).toBe("wheel to fork");
   });

@@ -19,7 +19,11 @@ const OLD = "integration-password-1"; // tests/integration/support/fixtures.ts
 const NEW = "a-new-password-for-the-shop";
 let user: { id: number; email: string };
 
-const refusal = (p: Promise<unknown>) => p.then(() => null, (e: unknown) => (e instanceof AppError ? e.kind : String(e)));
+const refusal = (p: Promise<unknown>) =>
+  p.then(
+    () => null,
+    (e: unknown) => (e instanceof AppError ? e.kind : String(e)),
+  );
 
 beforeAll(async () => {
   user = await makeUser("fabricator", "password-change");
@@ -31,11 +35,24 @@ afterAll(async () => {
 
 describe("changing one's password", () => {
   it("asks for the new one twice, different from the current one", () => {
-    expect(passwordChangeSchema.safeParse({ currentPassword: OLD, newPassword: NEW, newPasswordAgain: NEW }).success).toBe(true);
-    const mismatch = passwordChangeSchema.safeParse({ currentPassword: OLD, newPassword: NEW, newPasswordAgain: `${NEW}x` });
-    expect(mismatch.error?.issues[0]).toMatchObject({ path: ["newPasswordAgain"], message: "The two new passwords are not the same." });
-    expect(passwordChangeSchema.safeParse({ currentPassword: OLD, newPassword: OLD, newPasswordAgain: OLD }).success).toBe(false);
-    expect(passwordChangeSchema.safeParse({ currentPassword: OLD, newPassword: "short", newPasswordAgain: "short" }).success).toBe(false);
+    expect(
+      passwordChangeSchema.safeParse({ currentPassword: OLD, newPassword: NEW, newPasswordAgain: NEW }).success,
+    ).toBe(true);
+    const mismatch = passwordChangeSchema.safeParse({
+      currentPassword: OLD,
+      newPassword: NEW,
+      newPasswordAgain: `${NEW}x`,
+    });
+    expect(mismatch.error?.issues[0]).toMatchObject({
+      path: ["newPasswordAgain"],
+      message: "The two new passwords are not the same.",
+    });
+    expect(
+      passwordChangeSchema.safeParse({ currentPassword: OLD, newPassword: OLD, newPasswordAgain: OLD }).success,
+    ).toBe(false);
+    expect(
+      passwordChangeSchema.safeParse({ currentPassword: OLD, newPassword: "short", newPasswordAgain: "short" }).success,
+    ).toBe(false);
   });
 
   it("refuses a wrong current password and changes nothing", async () => {
@@ -63,7 +80,8 @@ describe("changing one's password", () => {
 
   it("is rate-limited with the sign-in: after too many wrong passwords even the right one waits", async () => {
     const other = await makeUser("client", "password-limit");
-    for (let i = 0; i < MAX_FAILURES_PER_ACCOUNT; i++) expect(await refusal(changePassword(other, `wrong-${i}`, NEW, "127.0.0.10"))).toBe("bad_request");
+    for (let i = 0; i < MAX_FAILURES_PER_ACCOUNT; i++)
+      expect(await refusal(changePassword(other, `wrong-${i}`, NEW, "127.0.0.10"))).toBe("bad_request");
     expect(await refusal(changePassword(other, OLD, NEW, "127.0.0.10"))).toBe("too_many");
     const [row] = await db.select().from(users).where(eq(users.id, other.id));
     expect(await verifyPassword(row.passwordHash, OLD)).toBe(true);

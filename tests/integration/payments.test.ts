@@ -23,7 +23,11 @@ import { auditCount } from "./support/fixtures";
 vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
 vi.mock("next/cache", async () => (await import("./support/session")).mockCache);
 
-const SQUARE = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 300, cornerRadius: 0 } };
+const SQUARE = {
+  mode: "track-for-wheel",
+  units: "mm",
+  wheel: { kind: "polygon", sides: 4, side: 300, cornerRadius: 0 },
+};
 const secret = process.env.STRIPE_WEBHOOK_SECRET!;
 const sdk = new Stripe("sk_test_unused");
 let ids: CallerIds;
@@ -35,10 +39,21 @@ let capture: http.Server;
 const delivered: Array<{ body: string; signature: string }> = [];
 
 const json = (method: string, body?: unknown) =>
-  new Request("http://test.local/api", { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+  new Request("http://test.local/api", {
+    method,
+    headers: { "content-type": "application/json" },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
 const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
 const hook = (body: string, signature?: string) =>
-  webhookRoute.POST(new Request("http://test.local/api/payments/webhook", { method: "POST", headers: { "content-type": "application/json", ...(signature ? { "stripe-signature": signature } : {}) }, body }), ctx({}));
+  webhookRoute.POST(
+    new Request("http://test.local/api/payments/webhook", {
+      method: "POST",
+      headers: { "content-type": "application/json", ...(signature ? { "stripe-signature": signature } : {}) },
+      body,
+    }),
+    ctx({}),
+  );
 
 function freePort(): Promise<number> {
   return new Promise((resolve) => {
@@ -49,15 +64,34 @@ function freePort(): Promise<number> {
   });
 }
 
-const fab = () => ({ id: ids["fabricator member"], role: "fabricator" as const, name: "Fab", email: "fab@example.test" });
+const fab = () => ({
+  id: ids["fabricator member"],
+  role: "fabricator" as const,
+  name: "Fab",
+  email: "fab@example.test",
+});
 
 /** A review of a fresh revision asking for a deposit, approved by the client member through the route (so the deposit falls due). */
-async function approvedWithDeposit(amount = 125000, currency = "GBP"): Promise<{ reviewId: number; depositId: number; paymentUrl: string | null }> {
+async function approvedWithDeposit(
+  amount = 125000,
+  currency = "GBP",
+): Promise<{ reviewId: number; depositId: number; paymentUrl: string | null }> {
   const revisionId = (await saveRevision(fab(), designId, projectId, { spec: SQUARE, note: "" })).id;
-  const reviewId = await insertReview(fab(), { revisionId, revisionNumber: 1, projectId, message: "Deposit test", runLengthMm: 2000, endTreatment: "flat", deposit: { amountMinor: amount, currency } });
+  const reviewId = await insertReview(fab(), {
+    revisionId,
+    revisionNumber: 1,
+    projectId,
+    message: "Deposit test",
+    runLengthMm: 2000,
+    endTreatment: "flat",
+    deposit: { amountMinor: amount, currency },
+  });
   const [me] = await db.select({ name: users.name }).from(users).where(eq(users.id, ids["client member"]));
   actAs(ids["client member"]);
-  const res = await decisionRoute.POST(json("POST", { decision: "approve", typedName: me.name }), ctx({ id: String(reviewId) }));
+  const res = await decisionRoute.POST(
+    json("POST", { decision: "approve", typedName: me.name }),
+    ctx({ id: String(reviewId) }),
+  );
   const body = await res.json();
   expect(res.status, JSON.stringify(body)).toBe(201);
   const [dep] = await db.select().from(deposits).where(eq(deposits.reviewId, reviewId));
@@ -78,7 +112,13 @@ async function payOnFake(url: string): Promise<{ body: string; signature: string
 const state = async (depositId: number) => {
   const [dep] = await db.select().from(deposits).where(eq(deposits.id, depositId));
   const [{ n }] = await db.select({ n: count() }).from(paymentEvents);
-  return { status: dep.status, paidAt: dep.paidAt, session: dep.checkoutSessionId, events: n, audit: await auditCount() };
+  return {
+    status: dep.status,
+    paidAt: dep.paidAt,
+    session: dep.checkoutSessionId,
+    events: n,
+    audit: await auditCount(),
+  };
 };
 
 beforeAll(async () => {
@@ -87,26 +127,40 @@ beforeAll(async () => {
     const chunks: Buffer[] = [];
     req.on("data", (c) => chunks.push(c));
     req.on("end", () => {
-      delivered.push({ body: Buffer.concat(chunks).toString("utf8"), signature: String(req.headers["stripe-signature"] ?? "") });
+      delivered.push({
+        body: Buffer.concat(chunks).toString("utf8"),
+        signature: String(req.headers["stripe-signature"] ?? ""),
+      });
       res.writeHead(200).end();
     });
   });
   await new Promise<void>((r) => capture.listen(0, "127.0.0.1", () => r()));
   fakePort = await freePort();
   fake = spawn(process.execPath, [path.resolve("scripts/fakes/payment-service.mjs")], {
-    env: { ...process.env, PAYMENT_SERVICE_PORT: String(fakePort), PAYMENT_WEBHOOK_URL: `http://127.0.0.1:${(capture.address() as net.AddressInfo).port}/hook` },
+    env: {
+      ...process.env,
+      PAYMENT_SERVICE_PORT: String(fakePort),
+      PAYMENT_WEBHOOK_URL: `http://127.0.0.1:${(capture.address() as net.AddressInfo).port}/hook`,
+    },
     stdio: "ignore",
   });
   process.env.STRIPE_API_HOST = "127.0.0.1";
   process.env.STRIPE_API_PORT = String(fakePort);
   process.env.STRIPE_API_PROTOCOL = "http";
   for (let i = 0; i < 100; i++) {
-    if (await fetch(`http://127.0.0.1:${fakePort}/sessions`).then((r) => r.ok).catch(() => false)) break;
+    if (
+      await fetch(`http://127.0.0.1:${fakePort}/sessions`)
+        .then((r) => r.ok)
+        .catch(() => false)
+    )
+      break;
     await new Promise((r) => setTimeout(r, 100));
   }
 
   ({ ids, projectId } = await makeCallers("Deposit"));
-  const [d] = await db.insert(designs).values({ projectId, name: "Deposit track", mode: "track-for-wheel", draft: SQUARE });
+  const [d] = await db
+    .insert(designs)
+    .values({ projectId, name: "Deposit track", mode: "track-for-wheel", draft: SQUARE });
   designId = d.insertId;
 });
 
@@ -140,7 +194,10 @@ describe("paying a deposit", () => {
     expect(after.paidAt).toBeInstanceOf(Date);
     expect(after.events).toBe(due.events + 1);
     expect(after.audit).toBe(due.audit + 1);
-    const [entry] = await db.select().from(auditLog).where(and(eq(auditLog.entity, "deposits"), eq(auditLog.entityId, String(depositId))));
+    const [entry] = await db
+      .select()
+      .from(auditLog)
+      .where(and(eq(auditLog.entity, "deposits"), eq(auditLog.entityId, String(depositId))));
     expect(entry.action).toBe("deposit-paid");
 
     // The same delivery again is a replay: 400, and nothing more is written.
@@ -157,9 +214,17 @@ describe("paying a deposit", () => {
     const paid = await payOnFake(paymentUrl!);
     const before = await state(depositId);
     const altered = paid.body.replace(/"amount_total":\d+/, '"amount_total":1');
-    const stale = sdk.webhooks.generateTestHeaderString({ payload: paid.body, secret, timestamp: Math.floor(Date.now() / 1000) - 3600 });
+    const stale = sdk.webhooks.generateTestHeaderString({
+      payload: paid.body,
+      secret,
+      timestamp: Math.floor(Date.now() / 1000) - 3600,
+    });
     const cases: Array<[string, string, string | undefined]> = [
-      ["signed with another secret", paid.body, sdk.webhooks.generateTestHeaderString({ payload: paid.body, secret: "whsec_not_ours" })],
+      [
+        "signed with another secret",
+        paid.body,
+        sdk.webhooks.generateTestHeaderString({ payload: paid.body, secret: "whsec_not_ours" }),
+      ],
       ["body altered after signing", altered, paid.signature],
       ["no signature", paid.body, undefined],
       ["garbled signature", paid.body, "t=abc,v1=zzz"],
@@ -178,7 +243,10 @@ describe("paying a deposit", () => {
     const { depositId, paymentUrl } = await approvedWithDeposit(50000, "EUR");
     const paid = await payOnFake(paymentUrl!);
     const before = await state(depositId);
-    for (const change of [(s: string) => s.replace(/"amount_total":\d+/, '"amount_total":49999'), (s: string) => s.replace(/"currency":"eur"/, '"currency":"usd"')]) {
+    for (const change of [
+      (s: string) => s.replace(/"amount_total":\d+/, '"amount_total":49999'),
+      (s: string) => s.replace(/"currency":"eur"/, '"currency":"usd"'),
+    ]) {
       const body = change(paid.body);
       expect(body).not.toBe(paid.body);
       const res = await hook(body, sdk.webhooks.generateTestHeaderString({ payload: body, secret }));
@@ -189,7 +257,12 @@ describe("paying a deposit", () => {
   });
 
   it("records an event of another type once and changes nothing", async () => {
-    const payload = JSON.stringify({ id: `evt_other_${Date.now()}`, object: "event", type: "charge.refunded", data: { object: {} } });
+    const payload = JSON.stringify({
+      id: `evt_other_${Date.now()}`,
+      object: "event",
+      type: "charge.refunded",
+      data: { object: {} },
+    });
     const header = sdk.webhooks.generateTestHeaderString({ payload, secret });
     expect(await (await hook(payload, header)).json()).toEqual({ received: true, changed: false });
     expect((await hook(payload, header)).status).toBe(400);
@@ -216,9 +289,25 @@ describe("the payment page route by caller", () => {
 
   it("answers 409 before approval and 404 where no deposit was asked for", async () => {
     const revisionId = (await saveRevision(fab(), designId, projectId, { spec: SQUARE, note: "" })).id;
-    const waiting = await insertReview(fab(), { revisionId, revisionNumber: 1, projectId, message: "Not yet", runLengthMm: 2000, endTreatment: "flat", deposit: { amountMinor: 1000, currency: "GBP" } });
+    const waiting = await insertReview(fab(), {
+      revisionId,
+      revisionNumber: 1,
+      projectId,
+      message: "Not yet",
+      runLengthMm: 2000,
+      endTreatment: "flat",
+      deposit: { amountMinor: 1000, currency: "GBP" },
+    });
     const revision2 = (await saveRevision(fab(), designId, projectId, { spec: SQUARE, note: "" })).id;
-    const none = await insertReview(fab(), { revisionId: revision2, revisionNumber: 2, projectId, message: "No deposit", runLengthMm: 2000, endTreatment: "flat", deposit: null });
+    const none = await insertReview(fab(), {
+      revisionId: revision2,
+      revisionNumber: 2,
+      projectId,
+      message: "No deposit",
+      runLengthMm: 2000,
+      endTreatment: "flat",
+      deposit: null,
+    });
     actAs(ids["client member"]);
     expect((await checkoutRoute.POST(json("POST", {}), ctx({ id: String(waiting) }))).status).toBe(409);
     expect((await checkoutRoute.POST(json("POST", {}), ctx({ id: String(none) }))).status).toBe(404);

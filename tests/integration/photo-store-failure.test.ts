@@ -59,10 +59,24 @@ beforeAll(async () => {
       if (forwarded > cutAfter) killStore();
     });
     upstream.on("data", (chunk) => client.write(chunk));
-    for (const s of [client, upstream]) s.on("error", () => undefined).on("close", () => (client.destroy(), upstream.destroy()));
+    for (const s of [client, upstream])
+      s.on("error", () => undefined).on("close", () => (client.destroy(), upstream.destroy()));
   });
   await new Promise<void>((r) => relay.listen(relayPort, "127.0.0.1", () => r()));
-  for (let i = 0; i < 100 && !(await new Promise((r) => net.connect(storePort, "127.0.0.1").once("connect", function (this: net.Socket) { this.destroy(); r(true); }).once("error", () => r(false)))); i++)
+  for (
+    let i = 0;
+    i < 100 &&
+    !(await new Promise((r) =>
+      net
+        .connect(storePort, "127.0.0.1")
+        .once("connect", function (this: net.Socket) {
+          this.destroy();
+          r(true);
+        })
+        .once("error", () => r(false)),
+    ));
+    i++
+  )
     await new Promise((r) => setTimeout(r, 100));
   // The app's storage module reads these on first use (this file has its own module graph).
   process.env.S3_ENDPOINT = `http://127.0.0.1:${relayPort}`;
@@ -79,14 +93,21 @@ describe("the store dying mid-upload", () => {
     const photo = await cameraJpeg();
     // Let the first photo (and a little more) through, then kill the store while the rest is on its way.
     cutAfter = photo.length + 2000;
-    const rows = async () => Promise.all([auditCount(), ...[buildLogEntries, buildLogPhotos].map(async (t) => (await db.select({ n: count() }).from(t))[0].n)]);
+    const rows = async () =>
+      Promise.all([
+        auditCount(),
+        ...[buildLogEntries, buildLogPhotos].map(async (t) => (await db.select({ n: count() }).from(t))[0].n),
+      ]);
     const before = await rows();
     const form = new FormData();
     form.set("kind", "installed");
     form.set("text", "Three photos of the joints");
-    for (let i = 0; i < 3; i++) form.append("photos[]", new File([new Uint8Array(photo)], `joint-${i}.jpg`, { type: "image/jpeg" }));
+    for (let i = 0; i < 3; i++)
+      form.append("photos[]", new File([new Uint8Array(photo)], `joint-${i}.jpg`, { type: "image/jpeg" }));
     actAs(ids["installer member"]);
-    const res = await logRoute.POST(new Request("http://test.local/api/log", { method: "POST", body: form }), { params: Promise.resolve({ id: String(projectId) }) });
+    const res = await logRoute.POST(new Request("http://test.local/api/log", { method: "POST", body: form }), {
+      params: Promise.resolve({ id: String(projectId) }),
+    });
     const body = await res.json();
     expect(forwarded, "part of the upload reached the store before it died").toBeGreaterThan(photo.length);
     expect(res.status).toBe(503);

@@ -15,7 +15,15 @@ import { saveRevision } from "@/lib/server/designs";
 import { insertReview } from "@/db/queries/reviews";
 import { eq } from "drizzle-orm";
 import { actAs } from "./support/session";
-import { CALLERS, clientOnly, makeCallers, projectManage, projectView, type Caller, type CallerIds } from "./support/callers";
+import {
+  CALLERS,
+  clientOnly,
+  makeCallers,
+  projectManage,
+  projectView,
+  type Caller,
+  type CallerIds,
+} from "./support/callers";
 import { auditCount } from "./support/fixtures";
 
 vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
@@ -27,12 +35,25 @@ let designId = 0;
 let decidedReviewId = 0;
 let approvedRevisionId = 0;
 
-const SQUARE = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 200, cornerRadius: 0 } };
+const SQUARE = {
+  mode: "track-for-wheel",
+  units: "mm",
+  wheel: { kind: "polygon", sides: 4, side: 200, cornerRadius: 0 },
+};
 const json = (method: string, body?: unknown) =>
-  new Request("http://test.local/api", { method, headers: { "content-type": "application/json", "user-agent": "role-matrix" }, body: body === undefined ? undefined : JSON.stringify(body) });
+  new Request("http://test.local/api", {
+    method,
+    headers: { "content-type": "application/json", "user-agent": "role-matrix" },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
 const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
 
-const fabricator = () => ({ id: ids["fabricator member"], role: "fabricator" as const, name: "Fab", email: "fab@example.test" });
+const fabricator = () => ({
+  id: ids["fabricator member"],
+  role: "fabricator" as const,
+  name: "Fab",
+  email: "fab@example.test",
+});
 
 async function freshRevision(): Promise<number> {
   return (await saveRevision(fabricator(), designId, projectId, { spec: SQUARE, note: "matrix" })).id;
@@ -41,11 +62,22 @@ async function freshRevision(): Promise<number> {
 /** A review waiting for the client, written straight through the query (no mail), on a revision of its own. */
 async function freshReview(): Promise<number> {
   const revisionId = await freshRevision();
-  return insertReview(fabricator(), { revisionId, revisionNumber: 0, projectId, message: "Matrix review", runLengthMm: 1200, endTreatment: "flat", deposit: null });
+  return insertReview(fabricator(), {
+    revisionId,
+    revisionNumber: 0,
+    projectId,
+    message: "Matrix review",
+    runLengthMm: 1200,
+    endTreatment: "flat",
+    deposit: null,
+  });
 }
 
 async function rowCounts(): Promise<number[]> {
-  return Promise.all([auditCount(), ...[reviews, reviewComments, signOffs, deposits].map(async (t) => (await db.select({ n: count() }).from(t))[0].n)]);
+  return Promise.all([
+    auditCount(),
+    ...[reviews, reviewComments, signOffs, deposits].map(async (t) => (await db.select({ n: count() }).from(t))[0].n),
+  ]);
 }
 
 interface Case {
@@ -61,20 +93,45 @@ const CASES: Case[] = [
     name: "POST /api/revisions/[id]/reviews",
     expect: projectManage(201),
     prepare: freshRevision,
-    call: async (revisionId) => (await revisionReviewsRoute.POST(json("POST", { message: "Please look", runLength: 1200, endTreatment: "flat" }), ctx({ id: String(revisionId) }))).status,
+    call: async (revisionId) =>
+      (
+        await revisionReviewsRoute.POST(
+          json("POST", { message: "Please look", runLength: 1200, endTreatment: "flat" }),
+          ctx({ id: String(revisionId) }),
+        )
+      ).status,
   },
-  { name: "GET /api/revisions/[id]/reviews", expect: projectView(200), call: async () => (await revisionReviewsRoute.GET(json("GET"), ctx({ id: String(approvedRevisionId) }))).status },
-  { name: "GET /api/reviews/[id]", expect: projectView(200), call: async () => (await reviewRoute.GET(json("GET"), ctx({ id: String(decidedReviewId) }))).status },
+  {
+    name: "GET /api/revisions/[id]/reviews",
+    expect: projectView(200),
+    call: async () => (await revisionReviewsRoute.GET(json("GET"), ctx({ id: String(approvedRevisionId) }))).status,
+  },
+  {
+    name: "GET /api/reviews/[id]",
+    expect: projectView(200),
+    call: async () => (await reviewRoute.GET(json("GET"), ctx({ id: String(decidedReviewId) }))).status,
+  },
   ...(["PUT", "PATCH", "DELETE"] as const).map((m) => ({
     name: `${m} /api/reviews/[id]`,
     expect: projectView(405),
-    call: async () => (await reviewRoute[m](json(m, { message: "changed" }), ctx({ id: String(decidedReviewId) }))).status,
+    call: async () =>
+      (await reviewRoute[m](json(m, { message: "changed" }), ctx({ id: String(decidedReviewId) }))).status,
   })),
-  { name: "GET /api/reviews/[id]/comments", expect: projectView(200), call: async () => (await commentsRoute.GET(json("GET"), ctx({ id: String(decidedReviewId) }))).status },
+  {
+    name: "GET /api/reviews/[id]/comments",
+    expect: projectView(200),
+    call: async () => (await commentsRoute.GET(json("GET"), ctx({ id: String(decidedReviewId) }))).status,
+  },
   {
     name: "POST /api/reviews/[id]/comments",
     expect: projectView(201),
-    call: async () => (await commentsRoute.POST(json("POST", { text: "A comment from the matrix", at: 300 }), ctx({ id: String(decidedReviewId) }))).status,
+    call: async () =>
+      (
+        await commentsRoute.POST(
+          json("POST", { text: "A comment from the matrix", at: 300 }),
+          ctx({ id: String(decidedReviewId) }),
+        )
+      ).status,
   },
   {
     name: "POST /api/reviews/[id]/decision",
@@ -82,32 +139,61 @@ const CASES: Case[] = [
     prepare: freshReview,
     call: async (reviewId) => {
       const [me] = await db.select({ name: users.name }).from(users).where(eq(users.id, ids["client member"]));
-      return (await decisionRoute.POST(json("POST", { decision: "approve", typedName: me.name }), ctx({ id: String(reviewId) }))).status;
+      return (
+        await decisionRoute.POST(
+          json("POST", { decision: "approve", typedName: me.name }),
+          ctx({ id: String(reviewId) }),
+        )
+      ).status;
     },
   },
-  { name: "GET /api/reviews/[id]/decision", expect: projectView(200), call: async () => (await decisionRoute.GET(json("GET"), ctx({ id: String(decidedReviewId) }))).status },
+  {
+    name: "GET /api/reviews/[id]/decision",
+    expect: projectView(200),
+    call: async () => (await decisionRoute.GET(json("GET"), ctx({ id: String(decidedReviewId) }))).status,
+  },
   ...(["PUT", "PATCH", "DELETE"] as const).map((m) => ({
     name: `${m} /api/reviews/[id]/decision`,
     expect: projectView(405),
-    call: async () => (await decisionRoute[m](json(m, { decision: "request-changes", typedName: "x", comment: "y" }), ctx({ id: String(decidedReviewId) }))).status,
+    call: async () =>
+      (
+        await decisionRoute[m](
+          json(m, { decision: "request-changes", typedName: "x", comment: "y" }),
+          ctx({ id: String(decidedReviewId) }),
+        )
+      ).status,
   })),
-  { name: "GET /api/revisions/[id]/sign-off", expect: projectView(200), call: async () => (await signOffRoute.GET(json("GET"), ctx({ id: String(approvedRevisionId) }))).status },
+  {
+    name: "GET /api/revisions/[id]/sign-off",
+    expect: projectView(200),
+    call: async () => (await signOffRoute.GET(json("GET"), ctx({ id: String(approvedRevisionId) }))).status,
+  },
   ...(["PUT", "PATCH", "DELETE"] as const).map((m) => ({
     name: `${m} /api/revisions/[id]/sign-off`,
     expect: projectView(405),
-    call: async () => (await signOffRoute[m](json(m, { typedName: "x" }), ctx({ id: String(approvedRevisionId) }))).status,
+    call: async () =>
+      (await signOffRoute[m](json(m, { typedName: "x" }), ctx({ id: String(approvedRevisionId) }))).status,
   })),
-  { name: "GET /api/reviews/[id]/preview", expect: projectView(200), call: async () => (await previewRoute.GET(json("GET"), ctx({ id: String(decidedReviewId) }))).status },
+  {
+    name: "GET /api/reviews/[id]/preview",
+    expect: projectView(200),
+    call: async () => (await previewRoute.GET(json("GET"), ctx({ id: String(decidedReviewId) }))).status,
+  },
 ];
 
 beforeAll(async () => {
   ({ ids, projectId } = await makeCallers("Review matrix"));
-  const [d] = await db.insert(designs).values({ projectId, name: "Matrix track", mode: "track-for-wheel", draft: SQUARE });
+  const [d] = await db
+    .insert(designs)
+    .values({ projectId, name: "Matrix track", mode: "track-for-wheel", draft: SQUARE });
   designId = d.insertId;
   decidedReviewId = await freshReview();
   const [me] = await db.select({ name: users.name }).from(users).where(eq(users.id, ids["client member"]));
   actAs(ids["client member"]);
-  const res = await decisionRoute.POST(json("POST", { decision: "approve", typedName: me.name }), ctx({ id: String(decidedReviewId) }));
+  const res = await decisionRoute.POST(
+    json("POST", { decision: "approve", typedName: me.name }),
+    ctx({ id: String(decidedReviewId) }),
+  );
   const body = await res.json();
   expect(res.status, JSON.stringify(body)).toBe(201);
   approvedRevisionId = body.signOff.revisionId;

@@ -8,7 +8,12 @@ import * as memberRoute from "@/app/api/projects/[id]/members/[memberId]/route";
 import * as solveRoute from "@/app/api/solve/route";
 import { addMemberAction, createProjectAction, removeMemberAction, updateProjectAction } from "@/lib/actions/projects";
 import { changeRoleAction, createUserAction, setActiveAction } from "@/lib/actions/users";
-import { saveMachineAction, saveMaterialAction, saveStockSheetAction, setShopRowActiveAction } from "@/lib/actions/shop";
+import {
+  saveMachineAction,
+  saveMaterialAction,
+  saveStockSheetAction,
+  setShopRowActiveAction,
+} from "@/lib/actions/shop";
 import type { ActionState } from "@/lib/server/action";
 import { db, pool } from "@/db";
 import { materials } from "@/db/schema";
@@ -18,7 +23,6 @@ import { addMembership, auditCount, makeProject, makeUser, runTag } from "./supp
 
 vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
 vi.mock("next/cache", async () => (await import("./support/session")).mockCache);
-
 
 const ids = {} as Record<Exclude<Caller, "anonymous">, number>;
 let projectId = 0;
@@ -41,7 +45,11 @@ afterAll(async () => {
 });
 
 const json = (method: string, body?: unknown) =>
-  new Request("http://test.local/api", { method, headers: { "content-type": "application/json" }, body: body === undefined ? undefined : JSON.stringify(body) });
+  new Request("http://test.local/api", {
+    method,
+    headers: { "content-type": "application/json" },
+    body: body === undefined ? undefined : JSON.stringify(body),
+  });
 
 const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
 
@@ -57,7 +65,12 @@ async function actionStatus(run: () => Promise<ActionState>): Promise<number> {
     const state = await run();
     return state.ok ? 200 : (state.status ?? 500);
   } catch (error) {
-    if (error instanceof Error && "digest" in error && String((error as { digest: unknown }).digest).startsWith("NEXT_REDIRECT")) return 200;
+    if (
+      error instanceof Error &&
+      "digest" in error &&
+      String((error as { digest: unknown }).digest).startsWith("NEXT_REDIRECT")
+    )
+      return 200;
     throw error;
   }
 }
@@ -70,16 +83,34 @@ interface Case {
 }
 
 const everyoneSignedIn = (status: number): Record<Caller, number> => ({
-  anonymous: 401, admin: status, "fabricator member": status, "fabricator non-member": status, "client member": status,
-  "client non-member": status, "installer member": status, "installer non-member": status,
+  anonymous: 401,
+  admin: status,
+  "fabricator member": status,
+  "fabricator non-member": status,
+  "client member": status,
+  "client non-member": status,
+  "installer member": status,
+  "installer non-member": status,
 });
 const shopOnly = (status: number): Record<Caller, number> => ({
-  anonymous: 401, admin: status, "fabricator member": status, "fabricator non-member": status, "client member": 403,
-  "client non-member": 403, "installer member": 403, "installer non-member": 403,
+  anonymous: 401,
+  admin: status,
+  "fabricator member": status,
+  "fabricator non-member": status,
+  "client member": 403,
+  "client non-member": 403,
+  "installer member": 403,
+  "installer non-member": 403,
 });
 const adminOnly = (status: number): Record<Caller, number> => ({
-  anonymous: 401, admin: status, "fabricator member": 403, "fabricator non-member": 403, "client member": 403,
-  "client non-member": 403, "installer member": 403, "installer non-member": 403,
+  anonymous: 401,
+  admin: status,
+  "fabricator member": 403,
+  "fabricator non-member": 403,
+  "client member": 403,
+  "client non-member": 403,
+  "installer member": 403,
+  "installer non-member": 403,
 });
 const projectView = viewTable(200);
 
@@ -91,25 +122,44 @@ async function throwawayMember(): Promise<number> {
 
 let seq = 0;
 const CASES: Case[] = [
-  { name: "GET /api/projects", expect: everyoneSignedIn(200), call: async () => (await projectsRoute.GET(json("GET"), ctx({}))).status },
+  {
+    name: "GET /api/projects",
+    expect: everyoneSignedIn(200),
+    call: async () => (await projectsRoute.GET(json("GET"), ctx({}))).status,
+  },
   {
     name: "POST /api/projects",
     expect: shopOnly(201),
-    call: async () => (await projectsRoute.POST(json("POST", { name: `Made ${runTag} ${++seq}`, site: "Bench" }), ctx({}))).status,
+    call: async () =>
+      (await projectsRoute.POST(json("POST", { name: `Made ${runTag} ${++seq}`, site: "Bench" }), ctx({}))).status,
   },
-  { name: "GET /api/projects/[id]", expect: projectView, call: async () => (await projectRoute.GET(json("GET"), ctx({ id: String(projectId) }))).status },
+  {
+    name: "GET /api/projects/[id]",
+    expect: projectView,
+    call: async () => (await projectRoute.GET(json("GET"), ctx({ id: String(projectId) }))).status,
+  },
   {
     name: "PATCH /api/projects/[id]",
     expect: projectManage(200),
-    call: async () => (await projectRoute.PATCH(json("PATCH", { site: `Bench ${++seq}` }), ctx({ id: String(projectId) }))).status,
+    call: async () =>
+      (await projectRoute.PATCH(json("PATCH", { site: `Bench ${++seq}` }), ctx({ id: String(projectId) }))).status,
   },
-  { name: "GET /api/projects/[id]/members", expect: projectView, call: async () => (await membersRoute.GET(json("GET"), ctx({ id: String(projectId) }))).status },
+  {
+    name: "GET /api/projects/[id]/members",
+    expect: projectView,
+    call: async () => (await membersRoute.GET(json("GET"), ctx({ id: String(projectId) }))).status,
+  },
   {
     name: "POST /api/projects/[id]/members",
     expect: projectManage(201),
     call: async () => {
       const newcomer = await makeUser("installer", "newcomer");
-      return (await membersRoute.POST(json("POST", { userId: newcomer.id, role: "installer" }), ctx({ id: String(projectId) }))).status;
+      return (
+        await membersRoute.POST(
+          json("POST", { userId: newcomer.id, role: "installer" }),
+          ctx({ id: String(projectId) }),
+        )
+      ).status;
     },
   },
   {
@@ -117,7 +167,12 @@ const CASES: Case[] = [
     expect: projectManage(200),
     call: async () => {
       const memberId = await throwawayMember();
-      return (await memberRoute.PATCH(json("PATCH", { role: "installer" }), ctx({ id: String(projectId), memberId: String(memberId) }))).status;
+      return (
+        await memberRoute.PATCH(
+          json("PATCH", { role: "installer" }),
+          ctx({ id: String(projectId), memberId: String(memberId) }),
+        )
+      ).status;
     },
   },
   {
@@ -125,18 +180,31 @@ const CASES: Case[] = [
     expect: projectManage(200),
     call: async () => {
       const memberId = await throwawayMember();
-      return (await memberRoute.DELETE(json("DELETE"), ctx({ id: String(projectId), memberId: String(memberId) }))).status;
+      return (await memberRoute.DELETE(json("DELETE"), ctx({ id: String(projectId), memberId: String(memberId) })))
+        .status;
     },
   },
   {
     name: "POST /api/solve",
     expect: everyoneSignedIn(200),
-    call: async () => (await solveRoute.POST(json("POST", { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400 } }), ctx({}))).status,
+    call: async () =>
+      (
+        await solveRoute.POST(
+          json("POST", { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400 } }),
+          ctx({}),
+        )
+      ).status,
   },
   {
     name: "action createProject",
     expect: shopOnly(200),
-    call: () => actionStatus(() => createProjectAction({}, form({ name: `Action-made ${runTag} ${++seq}`, site: "Bench", clientOrganisation: "" }))),
+    call: () =>
+      actionStatus(() =>
+        createProjectAction(
+          {},
+          form({ name: `Action-made ${runTag} ${++seq}`, site: "Bench", clientOrganisation: "" }),
+        ),
+      ),
   },
   {
     name: "action updateProject",
@@ -162,7 +230,18 @@ const CASES: Case[] = [
   {
     name: "action createUser",
     expect: adminOnly(200),
-    call: () => actionStatus(() => createUserAction({}, form({ email: `new.${runTag}.${++seq}@example.test`, name: "New person", role: "client", password: "a-long-first-password" }))),
+    call: () =>
+      actionStatus(() =>
+        createUserAction(
+          {},
+          form({
+            email: `new.${runTag}.${++seq}@example.test`,
+            name: "New person",
+            role: "client",
+            password: "a-long-first-password",
+          }),
+        ),
+      ),
   },
   {
     name: "action changeRole",
@@ -191,7 +270,18 @@ const CASES: Case[] = [
     expect: shopOnly(200),
     call: async () =>
       actionStatus(async () =>
-        saveStockSheetAction({}, form({ name: `Matrix sheet ${runTag} ${++seq}`, materialId: await libraryMaterialId(), lengthMm: 2440, widthMm: 1220, grain: "length", source: "common practice", sourceKind: "common-practice" })),
+        saveStockSheetAction(
+          {},
+          form({
+            name: `Matrix sheet ${runTag} ${++seq}`,
+            materialId: await libraryMaterialId(),
+            lengthMm: 2440,
+            widthMm: 1220,
+            grain: "length",
+            source: "common practice",
+            sourceKind: "common-practice",
+          }),
+        ),
       ),
   },
   {
@@ -199,7 +289,19 @@ const CASES: Case[] = [
     expect: shopOnly(200),
     call: () =>
       actionStatus(() =>
-        saveMachineAction({}, form({ name: `Matrix router ${runTag} ${++seq}`, kind: "router", kerfMm: 6, bedLengthMm: 2500, bedWidthMm: 1250, minInsideRadiusMm: 3, source: "common practice", sourceKind: "common-practice" })),
+        saveMachineAction(
+          {},
+          form({
+            name: `Matrix router ${runTag} ${++seq}`,
+            kind: "router",
+            kerfMm: 6,
+            bedLengthMm: 2500,
+            bedWidthMm: 1250,
+            minInsideRadiusMm: 3,
+            source: "common practice",
+            sourceKind: "common-practice",
+          }),
+        ),
       ),
   },
   {
@@ -213,12 +315,27 @@ const CASES: Case[] = [
 ];
 
 function materialForm(name: string) {
-  return { name, thicknessMm: 18, densityKgM3: 680, modulusGpa: 7, strengthMpa: 40, frictionStatic: 0.6, frictionKinetic: "", frictionPair: "rubber on ply", source: "common practice", sourceKind: "common-practice" };
+  return {
+    name,
+    thicknessMm: 18,
+    densityKgM3: 680,
+    modulusGpa: 7,
+    strengthMpa: 40,
+    frictionStatic: 0.6,
+    frictionKinetic: "",
+    frictionPair: "rubber on ply",
+    source: "common practice",
+    sourceKind: "common-practice",
+  };
 }
 
 /** A material row of this run's own (made directly, so it costs no audit entry inside a case). */
 async function libraryMaterialId(): Promise<number> {
-  const [res] = await db.insert(materials).values({ ...materialForm(`Matrix base ${runTag} ${++seq}`), frictionKinetic: null, sourceKind: "common-practice" });
+  const [res] = await db.insert(materials).values({
+    ...materialForm(`Matrix base ${runTag} ${++seq}`),
+    frictionKinetic: null,
+    sourceKind: "common-practice",
+  });
   return res.insertId;
 }
 

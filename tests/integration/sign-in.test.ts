@@ -41,13 +41,18 @@ describe("checkCredentials", () => {
     }
     const u = await makeUser("client", "sprayed");
     expect(await checkCredentials(u.email, PASSWORD, address)).toBe("rate_limited");
-    expect(await checkCredentials(u.email, PASSWORD, "10.3.0.1"), "another address still gets in").toMatchObject({ id: u.id });
+    expect(await checkCredentials(u.email, PASSWORD, "10.3.0.1"), "another address still gets in").toMatchObject({
+      id: u.id,
+    });
   });
 
   it("records attempts without the password", async () => {
     const u = await makeUser("client", "recorded");
     await checkCredentials(u.email, "a-secret-guess", "10.4.0.1");
-    const rows = await db.select().from(signInAttempts).where(and(eq(signInAttempts.email, u.email), eq(signInAttempts.address, "10.4.0.1")));
+    const rows = await db
+      .select()
+      .from(signInAttempts)
+      .where(and(eq(signInAttempts.email, u.email), eq(signInAttempts.address, "10.4.0.1")));
     expect(rows).toHaveLength(1);
     expect(rows[0].succeeded).toBe(false);
     expect(JSON.stringify(rows)).not.toContain("a-secret-guess");

@@ -8,7 +8,8 @@ import { actAs } from "./support/session";
 
 vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
 
-const post = (body: string) => solveRoute.POST(new Request("http://t/api/solve", { method: "POST", body }), { params: Promise.resolve({}) });
+const post = (body: string) =>
+  solveRoute.POST(new Request("http://t/api/solve", { method: "POST", body }), { params: Promise.resolve({}) });
 
 beforeAll(async () => {
   actAs((await makeUser("client", "solver")).id);
@@ -19,7 +20,9 @@ afterAll(async () => {
 
 describe("POST /api/solve", () => {
   it("returns the engine's result for a square wheel", async () => {
-    const res = await post(JSON.stringify({ mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400 } }));
+    const res = await post(
+      JSON.stringify({ mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400 } }),
+    );
     expect(res.status).toBe(200);
     const body = await res.json();
     // Hall & Wagon 1992: square of inradius A on y = −A cosh(x/A), period 2A·asinh(tan(π/4)) = 2A·ln(1+√2); A = 200 mm.
@@ -27,7 +30,9 @@ describe("POST /api/solve", () => {
   });
 
   it("refuses a malformed formula with the engine's message", async () => {
-    const res = await post(JSON.stringify({ mode: "track-for-wheel", units: "mm", wheel: { kind: "polar", r: "100 + cos(theta" } }));
+    const res = await post(
+      JSON.stringify({ mode: "track-for-wheel", units: "mm", wheel: { kind: "polar", r: "100 + cos(theta" } }),
+    );
     expect(res.status).toBe(400);
     const body = await res.json();
     expect(body.status).toBe(400);

@@ -8,9 +8,18 @@ import sharp from "sharp";
 /** A JPEG that a phone might send: 640 × 400 px stored sideways with orientation 6 (rotate 90° to view), and a GPS position in its EXIF. */
 export async function cameraJpeg(): Promise<Buffer> {
   return sharp({ create: { width: 640, height: 400, channels: 3, background: "#7a8b99" } })
-    .composite([{ input: Buffer.from('<svg xmlns="http://www.w3.org/2000/svg" width="640" height="400"><rect x="40" y="40" width="200" height="120" fill="#c33"/></svg>') }])
+    .composite([
+      {
+        input: Buffer.from(
+          '<svg xmlns="http://www.w3.org/2000/svg" width="640" height="400"><rect x="40" y="40" width="200" height="120" fill="#c33"/></svg>',
+        ),
+      },
+    ])
     .jpeg({ quality: 85 })
-    .withExif({ IFD0: { Make: "ExampleCam", Model: "Site 1" }, IFD3: { GPSLatitudeRef: "N", GPSLatitude: "51/1 30/1 12/1", GPSLongitudeRef: "W", GPSLongitude: "0/1 7/1 30/1" } })
+    .withExif({
+      IFD0: { Make: "ExampleCam", Model: "Site 1" },
+      IFD3: { GPSLatitudeRef: "N", GPSLatitude: "51/1 30/1 12/1", GPSLongitudeRef: "W", GPSLongitude: "0/1 7/1 30/1" },
+    })
     .withMetadata({ orientation: 6 })
     .toBuffer();
 }
@@ -49,5 +58,10 @@ export function pngBomb(width = 20000, height = 20000): Buffer {
   ihdr[9] = 0; // greyscale
   // Rows of zeros (filter byte 0 + width bytes) deflate to almost nothing; 400 MB inflates from about 400 KB.
   const rows = deflateSync(Buffer.alloc((width + 1) * height), { level: 9 });
-  return Buffer.concat([Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]), chunk("IHDR", ihdr), chunk("IDAT", rows), chunk("IEND", Buffer.alloc(0))]);
+  return Buffer.concat([
+    Buffer.from([0x89, 0x50, 0x4e, 0x47, 0x0d, 0x0a, 0x1a, 0x0a]),
+    chunk("IHDR", ihdr),
+    chunk("IDAT", rows),
+    chunk("IEND", Buffer.alloc(0)),
+  ]);
 }

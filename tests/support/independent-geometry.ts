@@ -104,7 +104,11 @@ export interface LayoutReport {
  * Checks placed parts: pairwise overlap, containment in `container`, and the smallest gap among
  * pairs whose envelopes come within `gapOfInterest` of each other.
  */
-export function checkLayout(parts: Array<{ label: string; ring: XY[] }>, container: Box, gapOfInterest = 0): LayoutReport {
+export function checkLayout(
+  parts: Array<{ label: string; ring: XY[] }>,
+  container: Box,
+  gapOfInterest = 0,
+): LayoutReport {
   const env = parts.map((p) => envelope(p.ring));
   const areas = parts.map((p) => areaOf(p.ring));
   const report: LayoutReport = {
@@ -120,7 +124,8 @@ export function checkLayout(parts: Array<{ label: string; ring: XY[] }>, contain
   const box = rect(container);
   parts.forEach((p, i) => {
     const e = env[i];
-    if (e.minX >= container.minX && e.minY >= container.minY && e.maxX <= container.maxX && e.maxY <= container.maxY) return;
+    if (e.minX >= container.minX && e.minY >= container.minY && e.maxX <= container.maxX && e.maxY <= container.maxY)
+      return;
     const out = differenceArea(p.ring, box) / areas[i];
     if (out > report.worstOutside) [report.worstOutside, report.worstOutsidePart] = [out, p.label];
   });
@@ -131,7 +136,8 @@ export function checkLayout(parts: Array<{ label: string; ring: XY[] }>, contain
       if (apart > gapOfInterest) continue;
       if (apart < 0) {
         const o = intersectionArea(parts[i].ring, parts[j].ring) / Math.min(areas[i], areas[j]);
-        if (o > report.worstOverlap) [report.worstOverlap, report.worstOverlapPair] = [o, [parts[i].label, parts[j].label]];
+        if (o > report.worstOverlap)
+          [report.worstOverlap, report.worstOverlapPair] = [o, [parts[i].label, parts[j].label]];
       }
       if (gapOfInterest > 0) report.minGap = Math.min(report.minGap, distanceBetween(parts[i].ring, parts[j].ring));
     }

@@ -23,7 +23,11 @@ export async function sunkMessages(): Promise<SunkMessage[]> {
 }
 
 /** Messages to this address whose subject matches, waiting briefly for SMTP to deliver them. */
-export async function waitForMail(to: string, subject: RegExp, { count = 1, timeoutMs = 10_000 } = {}): Promise<SunkMessage[]> {
+export async function waitForMail(
+  to: string,
+  subject: RegExp,
+  { count = 1, timeoutMs = 10_000 } = {},
+): Promise<SunkMessage[]> {
   const deadline = Date.now() + timeoutMs;
   for (;;) {
     const found = (await sunkMessages()).filter((m) => m.to.includes(to) && subject.test(subjectOf(m)));
@@ -69,7 +73,9 @@ export function subjectOf(m: SunkMessage): string {
 /** An encoded-word subject (RFC 2047) as text. */
 export function decodeHeader(value: string): string {
   return value.replace(/=\?([^?]+)\?([BQ])\?([^?]*)\?=\s*/gi, (_m, _cs, enc: string, text: string) =>
-    enc.toUpperCase() === "B" ? Buffer.from(text, "base64").toString("utf8") : decodeQuotedPrintable(text.replace(/_/g, " ")).toString("utf8"),
+    enc.toUpperCase() === "B"
+      ? Buffer.from(text, "base64").toString("utf8")
+      : decodeQuotedPrintable(text.replace(/_/g, " ")).toString("utf8"),
   );
 }
 
@@ -80,11 +86,18 @@ export function mimeParts(raw: string): MimePart[] {
   const type = headers["content-type"] ?? "text/plain";
   const boundary = /boundary="?([^";]+)"?/i.exec(type)?.[1];
   if (/^multipart\//i.test(type) && boundary) {
-    const pieces = body.split(new RegExp(`\\r?\\n?--${boundary.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}(?:--)?\\r?\\n?`));
+    const pieces = body.split(
+      new RegExp(`\\r?\\n?--${boundary.replace(/[.*+?^${}()|[\]\\]/g, "\\$&")}(?:--)?\\r?\\n?`),
+    );
     return pieces.filter((p) => p.trim() !== "").flatMap((p) => (/^[\w-]+:/.test(p) ? mimeParts(p) : []));
   }
   const encoding = (headers["content-transfer-encoding"] ?? "7bit").toLowerCase();
-  const bytes = encoding === "base64" ? Buffer.from(body.replace(/\s+/g, ""), "base64") : encoding === "quoted-printable" ? decodeQuotedPrintable(body) : Buffer.from(body, "utf8");
+  const bytes =
+    encoding === "base64"
+      ? Buffer.from(body.replace(/\s+/g, ""), "base64")
+      : encoding === "quoted-printable"
+        ? decodeQuotedPrintable(body)
+        : Buffer.from(body, "utf8");
   return [{ headers, body: bytes }];
 }
 

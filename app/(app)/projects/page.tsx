@@ -25,7 +25,10 @@ export default async function ProjectsPage() {
             {projects.map((p) => (
               <tr key={p.id}>
                 <td>
-                  <Link href={`/projects/${p.id}`} className="font-medium underline decoration-ink-line underline-offset-2 hover:decoration-ink">
+                  <Link
+                    href={`/projects/${p.id}`}
+                    className="font-medium underline decoration-ink-line underline-offset-2 hover:decoration-ink"
+                  >
                     {p.name}
                   </Link>
                 </td>

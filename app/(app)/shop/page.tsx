@@ -15,7 +15,10 @@ const fmt = (v: number | null) => (v === null ? "—" : String(Number(v.toPrecis
 function SourceCell({ source, kind }: { source: string; kind: string }) {
   return (
     <td className="max-w-xs text-xs text-ink-soft">
-      <Badge tone={kind === "common-practice" ? "caution" : "ink"}>{kind === "common-practice" ? "common practice" : kind}</Badge> {source}
+      <Badge tone={kind === "common-practice" ? "caution" : "ink"}>
+        {kind === "common-practice" ? "common practice" : kind}
+      </Badge>{" "}
+      {source}
     </td>
   );
 }
@@ -35,17 +38,31 @@ function Edit({ name, children }: { name: string; children: ReactNode }) {
 
 export default async function ShopLibraryPage() {
   const user = await requirePageUser();
-  if (user.role !== "admin" && user.role !== "fabricator") return <NoAccess what="The shop library is kept by the shop's admins and fabricators." />;
+  if (user.role !== "admin" && user.role !== "fabricator")
+    return <NoAccess what="The shop library is kept by the shop's admins and fabricators." />;
   const library = await listShopLibrary();
   return (
     <>
       <h1 className="text-2xl font-semibold tracking-tight">Shop library</h1>
       <p className="max-w-3xl text-sm text-ink-soft">
-        The figures cut plans and rolling checks use. Rows marked common practice are trade defaults, not facts: measure your own material and
-        tread (friction coefficients depend on the whole system) and edit the row. Retired rows stay for the plans that used them.
+        The figures cut plans and rolling checks use. Rows marked common practice are trade defaults, not facts: measure
+        your own material and tread (friction coefficients depend on the whole system) and edit the row. Retired rows
+        stay for the plans that used them.
       </p>
       <Panel title="Materials">
-        <Table head={["Name", "Thickness", "Density", "Modulus, ν", "Strength, allowable contact", "Friction μ (static / kinetic)", "Source", "Status"]} caption="Materials">
+        <Table
+          head={[
+            "Name",
+            "Thickness",
+            "Density",
+            "Modulus, ν",
+            "Strength, allowable contact",
+            "Friction μ (static / kinetic)",
+            "Source",
+            "Status",
+          ]}
+          caption="Materials"
+        >
           {library.materials.map((m) => (
             <tr key={m.id} data-testid={`material-${m.name}`} className={m.active ? "" : "opacity-60"}>
               <td>

@@ -9,7 +9,15 @@ import { specErrors } from "./field-errors";
 import { TrackFields } from "./track-fields";
 import { WheelFields } from "./wheel-fields";
 
-export function SpecForm({ spec, onChange, readOnly }: { spec: DesignSpecInput; onChange: (spec: DesignSpecInput) => void; readOnly?: boolean }) {
+export function SpecForm({
+  spec,
+  onChange,
+  readOnly,
+}: {
+  spec: DesignSpecInput;
+  onChange: (spec: DesignSpecInput) => void;
+  readOnly?: boolean;
+}) {
   const units: Units = spec.units ?? "mm";
   const errors = specErrors(spec);
   const usesWheel = spec.mode === "track-for-wheel" || spec.mode === "partner-wheel";
@@ -35,14 +43,33 @@ export function SpecForm({ spec, onChange, readOnly }: { spec: DesignSpecInput; 
         />
       </div>
       {usesWheel && spec.wheel ? (
-        <WheelFields wheel={spec.wheel} units={units} errors={errors} onChange={(wheel) => onChange({ ...spec, wheel })} />
+        <WheelFields
+          wheel={spec.wheel}
+          units={units}
+          errors={errors}
+          onChange={(wheel) => onChange({ ...spec, wheel })}
+        />
       ) : null}
       {!usesWheel && spec.track ? (
-        <TrackFields track={spec.track} units={units} errors={errors} onChange={(track) => onChange({ ...spec, track })} />
+        <TrackFields
+          track={spec.track}
+          units={units}
+          errors={errors}
+          onChange={(track) => onChange({ ...spec, track })}
+        />
       ) : null}
       <div className="grid grid-cols-2 gap-3">
         {spec.mode === "partner-wheel" ? (
-          <NumberInput label="Lobes" integer min={1} max={64} value={spec.lobes} error={errors.lobes} hint="Repeats of the partner's pattern per partner turn." onChange={(lobes) => onChange({ ...spec, lobes })} />
+          <NumberInput
+            label="Lobes"
+            integer
+            min={1}
+            max={64}
+            value={spec.lobes}
+            error={errors.lobes}
+            hint="Repeats of the partner's pattern per partner turn."
+            onChange={(lobes) => onChange({ ...spec, lobes })}
+          />
         ) : null}
         {spec.mode === "wheel-for-track" || spec.mode === "twin-wheels" ? (
           <NumberInput

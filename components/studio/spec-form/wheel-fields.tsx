@@ -19,7 +19,17 @@ const KIND_LABELS: { value: Kind; label: string }[] = [
   { value: "outline", label: "Uploaded outline" },
 ];
 
-export function WheelFields({ wheel, units, errors, onChange }: { wheel: Wheel; units: Units; errors: FieldErrors; onChange: (w: Wheel) => void }) {
+export function WheelFields({
+  wheel,
+  units,
+  errors,
+  onChange,
+}: {
+  wheel: Wheel;
+  units: Units;
+  errors: FieldErrors;
+  onChange: (w: Wheel) => void;
+}) {
   const e = (key: string) => errors[`wheel.${key}`];
   return (
     <div className="flex flex-col gap-3 rounded-plate border border-paper-edge p-3">
@@ -33,8 +43,22 @@ export function WheelFields({ wheel, units, errors, onChange }: { wheel: Wheel; 
       {wheel.kind === "polygon" ? <PolygonFields wheel={wheel} units={units} e={e} onChange={onChange} /> : null}
       {wheel.kind === "ellipse" ? (
         <div className="grid grid-cols-2 gap-3">
-          <NumberInput label="Semi-major axis" unit={units} min={0} value={wheel.semiMajor} error={e("semiMajor") ?? errors.wheel} onChange={(semiMajor) => semiMajor !== undefined && onChange({ ...wheel, semiMajor })} />
-          <NumberInput label="Semi-minor axis" unit={units} min={0} value={wheel.semiMinor} error={e("semiMinor")} onChange={(semiMinor) => semiMinor !== undefined && onChange({ ...wheel, semiMinor })} />
+          <NumberInput
+            label="Semi-major axis"
+            unit={units}
+            min={0}
+            value={wheel.semiMajor}
+            error={e("semiMajor") ?? errors.wheel}
+            onChange={(semiMajor) => semiMajor !== undefined && onChange({ ...wheel, semiMajor })}
+          />
+          <NumberInput
+            label="Semi-minor axis"
+            unit={units}
+            min={0}
+            value={wheel.semiMinor}
+            error={e("semiMinor")}
+            onChange={(semiMinor) => semiMinor !== undefined && onChange({ ...wheel, semiMinor })}
+          />
           <SelectInput<"focus" | "centre" | "point">
             label="Axle at"
             value={typeof wheel.axle === "object" ? "point" : (wheel.axle ?? "focus")}
@@ -47,16 +71,50 @@ export function WheelFields({ wheel, units, errors, onChange }: { wheel: Wheel; 
           />
           {typeof wheel.axle === "object" ? (
             <div className="grid grid-cols-2 gap-2">
-              <NumberInput label="Axle x" unit={units} value={wheel.axle.x} error={e("axle.x")} onChange={(x) => x !== undefined && typeof wheel.axle === "object" && onChange({ ...wheel, axle: { ...wheel.axle, x } })} />
-              <NumberInput label="Axle y" unit={units} value={wheel.axle.y} error={e("axle.y")} onChange={(y) => y !== undefined && typeof wheel.axle === "object" && onChange({ ...wheel, axle: { ...wheel.axle, y } })} />
+              <NumberInput
+                label="Axle x"
+                unit={units}
+                value={wheel.axle.x}
+                error={e("axle.x")}
+                onChange={(x) =>
+                  x !== undefined &&
+                  typeof wheel.axle === "object" &&
+                  onChange({ ...wheel, axle: { ...wheel.axle, x } })
+                }
+              />
+              <NumberInput
+                label="Axle y"
+                unit={units}
+                value={wheel.axle.y}
+                error={e("axle.y")}
+                onChange={(y) =>
+                  y !== undefined &&
+                  typeof wheel.axle === "object" &&
+                  onChange({ ...wheel, axle: { ...wheel.axle, y } })
+                }
+              />
             </div>
           ) : null}
         </div>
       ) : null}
       {wheel.kind === "circle" ? (
         <div className="grid grid-cols-2 gap-3">
-          <NumberInput label="Radius" unit={units} min={0} value={wheel.radius} error={e("radius")} onChange={(radius) => radius !== undefined && onChange({ ...wheel, radius })} />
-          <NumberInput label="Axle offset from centre" unit={units} min={0} value={wheel.axleOffset} error={e("axleOffset")} onChange={(axleOffset) => onChange({ ...wheel, axleOffset })} />
+          <NumberInput
+            label="Radius"
+            unit={units}
+            min={0}
+            value={wheel.radius}
+            error={e("radius")}
+            onChange={(radius) => radius !== undefined && onChange({ ...wheel, radius })}
+          />
+          <NumberInput
+            label="Axle offset from centre"
+            unit={units}
+            min={0}
+            value={wheel.axleOffset}
+            error={e("axleOffset")}
+            onChange={(axleOffset) => onChange({ ...wheel, axleOffset })}
+          />
         </div>
       ) : null}
       {wheel.kind === "polar" ? (
@@ -74,12 +132,31 @@ export function WheelFields({ wheel, units, errors, onChange }: { wheel: Wheel; 
   );
 }
 
-function PolygonFields({ wheel, units, e, onChange }: { wheel: Extract<Wheel, { kind: "polygon" }>; units: Units; e: (k: string) => string | undefined; onChange: (w: Wheel) => void }) {
-  const sizeBy: PolygonSize = wheel.side !== undefined ? "side" : wheel.circumradius !== undefined ? "circumradius" : "inradius";
+function PolygonFields({
+  wheel,
+  units,
+  e,
+  onChange,
+}: {
+  wheel: Extract<Wheel, { kind: "polygon" }>;
+  units: Units;
+  e: (k: string) => string | undefined;
+  onChange: (w: Wheel) => void;
+}) {
+  const sizeBy: PolygonSize =
+    wheel.side !== undefined ? "side" : wheel.circumradius !== undefined ? "circumradius" : "inradius";
   const size = wheel[sizeBy];
   return (
     <div className="grid grid-cols-2 gap-3">
-      <NumberInput label="Sides" integer min={3} max={360} value={wheel.sides} error={e("sides")} onChange={(sides) => sides !== undefined && onChange({ ...wheel, sides })} />
+      <NumberInput
+        label="Sides"
+        integer
+        min={3}
+        max={360}
+        value={wheel.sides}
+        error={e("sides")}
+        onChange={(sides) => sides !== undefined && onChange({ ...wheel, sides })}
+      />
       <SelectInput<PolygonSize>
         label="Size given by"
         value={sizeBy}
@@ -88,27 +165,70 @@ function PolygonFields({ wheel, units, e, onChange }: { wheel: Extract<Wheel, { 
           { value: "inradius", label: "inradius (axle to side)" },
           { value: "circumradius", label: "circumradius (axle to corner)" },
         ]}
-        onChange={(by) => onChange({ kind: "polygon", sides: wheel.sides, cornerRadius: wheel.cornerRadius, [by]: size })}
+        onChange={(by) =>
+          onChange({ kind: "polygon", sides: wheel.sides, cornerRadius: wheel.cornerRadius, [by]: size })
+        }
       />
-      <NumberInput label={sizeBy === "side" ? "Side" : sizeBy === "inradius" ? "Inradius" : "Circumradius"} unit={units} min={0} value={size} error={e(sizeBy) ?? e("")} onChange={(v) => v !== undefined && onChange({ ...wheel, [sizeBy]: v })} />
-      <NumberInput label="Corner radius" unit={units} min={0} value={wheel.cornerRadius ?? 0} error={e("cornerRadius")} onChange={(cornerRadius) => onChange({ ...wheel, cornerRadius: cornerRadius ?? 0 })} />
+      <NumberInput
+        label={sizeBy === "side" ? "Side" : sizeBy === "inradius" ? "Inradius" : "Circumradius"}
+        unit={units}
+        min={0}
+        value={size}
+        error={e(sizeBy) ?? e("")}
+        onChange={(v) => v !== undefined && onChange({ ...wheel, [sizeBy]: v })}
+      />
+      <NumberInput
+        label="Corner radius"
+        unit={units}
+        min={0}
+        value={wheel.cornerRadius ?? 0}
+        error={e("cornerRadius")}
+        onChange={(cornerRadius) => onChange({ ...wheel, cornerRadius: cornerRadius ?? 0 })}
+      />
     </div>
   );
 }
 
-function OutlineFields({ wheel, units, e, onChange }: { wheel: Extract<Wheel, { kind: "outline" }>; units: Units; e: (k: string) => string | undefined; onChange: (w: Wheel) => void }) {
+function OutlineFields({
+  wheel,
+  units,
+  e,
+  onChange,
+}: {
+  wheel: Extract<Wheel, { kind: "outline" }>;
+  units: Units;
+  e: (k: string) => string | undefined;
+  onChange: (w: Wheel) => void;
+}) {
   // The engine's own refusal of this axle (not star-shaped about it, outside it), beside the fields
   // that place it; the canvas handle gives the same words.
   const refusal = e("axle.x") || e("points") || e("axle.y") ? undefined : axleRefusal(wheel.points, wheel.axle);
   return (
     <div className="flex flex-col gap-3">
-      <OutlineUpload want="wheel" units={units} onPoints={(points, axle) => onChange({ kind: "outline", points, axle: axle ?? wheel.axle })} />
+      <OutlineUpload
+        want="wheel"
+        units={units}
+        onPoints={(points, axle) => onChange({ kind: "outline", points, axle: axle ?? wheel.axle })}
+      />
       <p className="text-xs text-ink-soft">
-        <span className="font-mono">{wheel.points.length}</span> points. Place the axle by typing its position, or drag it on the canvas (or focus it there and use the arrow keys).
+        <span className="font-mono">{wheel.points.length}</span> points. Place the axle by typing its position, or drag
+        it on the canvas (or focus it there and use the arrow keys).
       </p>
       <div className="grid grid-cols-2 gap-3">
-        <NumberInput label="Axle x" unit={units} value={wheel.axle.x} error={e("axle.x") ?? e("points") ?? refusal} onChange={(x) => x !== undefined && onChange({ ...wheel, axle: { ...wheel.axle, x } })} />
-        <NumberInput label="Axle y" unit={units} value={wheel.axle.y} error={e("axle.y")} onChange={(y) => y !== undefined && onChange({ ...wheel, axle: { ...wheel.axle, y } })} />
+        <NumberInput
+          label="Axle x"
+          unit={units}
+          value={wheel.axle.x}
+          error={e("axle.x") ?? e("points") ?? refusal}
+          onChange={(x) => x !== undefined && onChange({ ...wheel, axle: { ...wheel.axle, x } })}
+        />
+        <NumberInput
+          label="Axle y"
+          unit={units}
+          value={wheel.axle.y}
+          error={e("axle.y")}
+          onChange={(y) => y !== undefined && onChange({ ...wheel, axle: { ...wheel.axle, y } })}
+        />
       </div>
     </div>
   );

@@ -91,12 +91,19 @@ export function AxleHandle({ at, axle, units, pixelsPerUnit, box, onDragStart, o
         onKeyDown={onKeyDown}
       />
       {dragging ? (
-        <span className="pointer-events-none absolute rounded-plate bg-paper/90 px-1 font-mono text-[11px] text-ink" style={{ left: at[0] + 16, top: at[1] + 12 }}>
+        <span
+          className="pointer-events-none absolute rounded-plate bg-paper/90 px-1 font-mono text-[11px] text-ink"
+          style={{ left: at[0] + 16, top: at[1] + 12 }}
+        >
           {where}
         </span>
       ) : null}
       {refusal ? (
-        <p role="alert" data-testid="axle-refusal" className="absolute bottom-6 left-2 max-w-[70%] rounded-plate border border-caution bg-paper/95 px-2 py-1 text-xs font-medium text-caution-ink">
+        <p
+          role="alert"
+          data-testid="axle-refusal"
+          className="absolute bottom-6 left-2 max-w-[70%] rounded-plate border border-caution bg-paper/95 px-2 py-1 text-xs font-medium text-caution-ink"
+        >
           {refusal}
         </p>
       ) : null}

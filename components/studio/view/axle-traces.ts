@@ -5,7 +5,14 @@ import { cycleOf, type Pose, type TraceRow } from "@/lib/studio/motion";
 import type { Pt } from "@/lib/studio/view-math";
 import type { SolvedGeometry } from "@/lib/track";
 
-export function tracesSoFar(result: SolvedGeometry, isPair: boolean, trace: TraceRow[], pose: Pose, resting: { wheel: number; partner?: number }, position: number) {
+export function tracesSoFar(
+  result: SolvedGeometry,
+  isPair: boolean,
+  trace: TraceRow[],
+  pose: Pose,
+  resting: { wheel: number; partner?: number },
+  position: number,
+) {
   const c = cycleOf(result);
   const travelled = position * c.length;
   const shown = isPair ? [] : trace.filter((t) => t.along - c.start <= travelled);
@@ -15,7 +22,9 @@ export function tracesSoFar(result: SolvedGeometry, isPair: boolean, trace: Trac
     upper.push([pose.wheel.x, resting.wheel]);
     if (resting.partner !== undefined) lower.push([pose.wheel.x, resting.partner]);
   }
-  const pairRest = isPair ? trace.filter((t) => t.along <= travelled && t.partner !== undefined).map((t) => t.partner!) : [];
+  const pairRest = isPair
+    ? trace.filter((t) => t.along <= travelled && t.partner !== undefined).map((t) => t.partner!)
+    : [];
   if (isPair && resting.partner !== undefined) pairRest.push(resting.partner);
   return { upper, lower, pairRest };
 }

@@ -34,7 +34,14 @@ export function WheelBody({ outline, angleCw, axle, view, tone, name }: BodyProp
   const [mx, my] = toScreen(view, placed[0]);
   return (
     <Group listening={false} name={name}>
-      <Line points={flat(placed, view)} closed stroke={stroke} strokeWidth={1.5} fill={tone === "wheel" ? "rgba(29,53,87,0.07)" : "rgba(61,90,128,0.06)"} perfectDrawEnabled={false} />
+      <Line
+        points={flat(placed, view)}
+        closed
+        stroke={stroke}
+        strokeWidth={1.5}
+        fill={tone === "wheel" ? "rgba(29,53,87,0.07)" : "rgba(61,90,128,0.06)"}
+        perfectDrawEnabled={false}
+      />
       <Line points={[ax, ay, mx, my]} stroke={stroke} strokeWidth={1} dash={[4, 3]} opacity={0.7} />
       <AxleMark at={[ax, ay]} colour={stroke} />
     </Group>
@@ -55,7 +62,18 @@ export function AxleMark({ at, colour }: { at: Pt; colour: string }) {
 
 export function ContactMark({ at, view }: { at: Pt; view: View }) {
   const [x, y] = toScreen(view, at);
-  return <Circle listening={false} x={x} y={y} radius={3.5} fill={INK.base} stroke="#f6f0e1" strokeWidth={1} name="contact" />;
+  return (
+    <Circle
+      listening={false}
+      x={x}
+      y={y}
+      radius={3.5}
+      fill={INK.base}
+      stroke="#f6f0e1"
+      strokeWidth={1}
+      name="contact"
+    />
+  );
 }
 
 /** The caution spot (e.g. where a wheel cuts in): the one place the safety orange is used. */
@@ -75,23 +93,52 @@ export function HighlightMark({ at, label, view, font }: { at: Pt; label?: strin
  * outline rests at (`resting`, lib/studio/motion restingAxles), so a wrong turn table would show as
  * a bobbing axle. Pairs keep their fixed axles.
  */
-export function drawnAxles(result: SolvedGeometry, pose: Pose, resting: { wheel: number; partner?: number }): { wheel: Pt; partner?: Pt } {
+export function drawnAxles(
+  result: SolvedGeometry,
+  pose: Pose,
+  resting: { wheel: number; partner?: number },
+): { wheel: Pt; partner?: Pt } {
   const pair = result.mode === "partner-wheel";
   const wheelY = pair || !Number.isFinite(resting.wheel) ? pose.wheel.y : resting.wheel;
   if (!pose.partner) return { wheel: [pose.wheel.x, wheelY] };
-  const partnerY = pair || resting.partner === undefined || !Number.isFinite(resting.partner) ? pose.partner.y : resting.partner;
+  const partnerY =
+    pair || resting.partner === undefined || !Number.isFinite(resting.partner) ? pose.partner.y : resting.partner;
   return { wheel: [pose.wheel.x, wheelY], partner: [pose.partner.x, partnerY] };
 }
 
 /** All moving bodies at one pose. */
-export function PosedBodies({ result, pose, resting, view }: { result: SolvedGeometry; pose: Pose; resting: { wheel: number; partner?: number }; view: View }) {
+export function PosedBodies({
+  result,
+  pose,
+  resting,
+  view,
+}: {
+  result: SolvedGeometry;
+  pose: Pose;
+  resting: { wheel: number; partner?: number };
+  view: View;
+}) {
   const axles = drawnAxles(result, pose, resting);
   return (
     <>
       {result.partner && pose.partner && axles.partner ? (
-        <WheelBody outline={result.partner.points} angleCw={-pose.partner.angle} axle={axles.partner} view={view} tone="partner" name="partner" />
+        <WheelBody
+          outline={result.partner.points}
+          angleCw={-pose.partner.angle}
+          axle={axles.partner}
+          view={view}
+          tone="partner"
+          name="partner"
+        />
       ) : null}
-      <WheelBody outline={result.wheel.points} angleCw={pose.wheel.angle} axle={axles.wheel} view={view} tone="wheel" name="wheel" />
+      <WheelBody
+        outline={result.wheel.points}
+        angleCw={pose.wheel.angle}
+        axle={axles.wheel}
+        view={view}
+        tone="wheel"
+        name="wheel"
+      />
       <ContactMark at={pose.contact} view={view} />
     </>
   );

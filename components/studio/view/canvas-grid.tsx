@@ -11,7 +11,19 @@ import { INK } from "./palette";
 const FINE = "rgba(196, 180, 140, 0.28)";
 const MAJOR = "rgba(196, 180, 140, 0.6)";
 
-export function CanvasGrid({ view, width, height, units, font }: { view: View; width: number; height: number; units: "mm" | "in"; font: string }) {
+export function CanvasGrid({
+  view,
+  width,
+  height,
+  units,
+  font,
+}: {
+  view: View;
+  width: number;
+  height: number;
+  units: "mm" | "in";
+  font: string;
+}) {
   const rules = gridRules(view.scale, units);
   const [x0, y1] = toWorld(view, [0, 0]);
   const [x1, y0] = toWorld(view, [width, height]);
@@ -50,12 +62,38 @@ export function CanvasGrid({ view, width, height, units, font }: { view: View; w
         }}
       />
       {labelsX.map((x) => (
-        <Text key={`x${x}`} listening={false} x={view.ox + view.scale * x + 3} y={height - 14} text={label(x)} fontSize={10} fontFamily={font} fill={INK.faint} />
+        <Text
+          key={`x${x}`}
+          listening={false}
+          x={view.ox + view.scale * x + 3}
+          y={height - 14}
+          text={label(x)}
+          fontSize={10}
+          fontFamily={font}
+          fill={INK.faint}
+        />
       ))}
       {labelsY.map((y) => (
-        <Text key={`y${y}`} listening={false} x={3} y={view.oy - view.scale * y - 12} text={label(y)} fontSize={10} fontFamily={font} fill={INK.faint} />
+        <Text
+          key={`y${y}`}
+          listening={false}
+          x={3}
+          y={view.oy - view.scale * y - 12}
+          text={label(y)}
+          fontSize={10}
+          fontFamily={font}
+          fill={INK.faint}
+        />
       ))}
-      <Text listening={false} x={width - 28} y={height - 14} text={units} fontSize={10} fontFamily={font} fill={INK.faint} />
+      <Text
+        listening={false}
+        x={width - 28}
+        y={height - 14}
+        text={units}
+        fontSize={10}
+        fontFamily={font}
+        fill={INK.faint}
+      />
     </>
   );
 }

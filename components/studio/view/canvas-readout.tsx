@@ -31,7 +31,10 @@ export function CanvasReadout({ result, pose, id }: { result: SolvedGeometry; po
     rows.push(["wheel turn", `${fmt(pose.wheel.angle, 3)} rad`]);
   }
   return (
-    <dl id={id} className="pointer-events-none absolute left-2 top-2 grid grid-cols-[auto_auto] gap-x-3 rounded-plate border border-paper-edge bg-paper/85 px-2 py-1 font-mono text-[11px] leading-4 text-ink">
+    <dl
+      id={id}
+      className="pointer-events-none absolute left-2 top-2 grid grid-cols-[auto_auto] gap-x-3 rounded-plate border border-paper-edge bg-paper/85 px-2 py-1 font-mono text-[11px] leading-4 text-ink"
+    >
       {rows.map(([k, v]) => (
         <div key={k} className="contents">
           <dt className="text-ink-soft">{k}</dt>

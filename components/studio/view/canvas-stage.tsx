@@ -91,7 +91,11 @@ export default function CanvasStage(props: CanvasStageProps) {
       fps: meter.fps,
       position,
       axleTrace: ys(traceFlat),
-      lowerAxleTrace: lowerFlat.length ? ys(lowerFlat) : traces.pairRest.length ? traces.pairRest.map((y) => toScreen(view, [0, y])[1]) : undefined,
+      lowerAxleTrace: lowerFlat.length
+        ? ys(lowerFlat)
+        : traces.pairRest.length
+          ? traces.pairRest.map((y) => toScreen(view, [0, y])[1])
+          : undefined,
       axleLine: toScreen(view, [0, scene.axleY])[1],
       lowerAxleLine: scene.lowerAxleY !== undefined ? toScreen(view, [0, scene.lowerAxleY])[1] : undefined,
       pixelsPerUnit: view.scale,
@@ -124,8 +128,12 @@ export default function CanvasStage(props: CanvasStageProps) {
         <Stage width={width} height={height}>
           {staticLayer}
           <Layer listening={false}>
-            {traceFlat.length >= 4 ? <Line points={traceFlat} stroke={INK.soft} strokeWidth={1.5} name="axle-trace" /> : null}
-            {lowerFlat.length >= 4 ? <Line points={lowerFlat} stroke={INK.soft} strokeWidth={1.5} name="lower-axle-trace" /> : null}
+            {traceFlat.length >= 4 ? (
+              <Line points={traceFlat} stroke={INK.soft} strokeWidth={1.5} name="axle-trace" />
+            ) : null}
+            {lowerFlat.length >= 4 ? (
+              <Line points={lowerFlat} stroke={INK.soft} strokeWidth={1.5} name="lower-axle-trace" />
+            ) : null}
             <PosedBodies result={result} pose={pose} resting={resting} view={view} />
             {highlight ? <HighlightMark at={highlight.point} label={highlight.label} view={view} font={font} /> : null}
           </Layer>

@@ -3,7 +3,15 @@
 import { ZOOM_STEP } from "./use-canvas-controls";
 import type { useViewTransform } from "./use-view-transform";
 
-export function CanvasTools({ vt, playing, speed }: { vt: ReturnType<typeof useViewTransform>; playing: boolean; speed: number }) {
+export function CanvasTools({
+  vt,
+  playing,
+  speed,
+}: {
+  vt: ReturnType<typeof useViewTransform>;
+  playing: boolean;
+  speed: number;
+}) {
   return (
     <>
       <div className="no-print absolute right-2 top-2 flex gap-1">

@@ -23,7 +23,6 @@ export interface Figure {
 const radius = (r: number | undefined, units: string) =>
   r === undefined ? "—" : r === 0 ? "0 (corner)" : Number.isFinite(r) ? `${fmt(r)} ${units}` : "∞ (straight)";
 
-
 export function checkFigures(r: SolveResult): Figure[] {
   const c = r.check;
   const u = r.units;
@@ -36,7 +35,12 @@ export function checkFigures(r: SolveResult): Figure[] {
       label: pair ? "Overlap away from the contact" : "Cut into the track away from the contact",
       value: `${fmt(c.interference.depth)} ${u}`,
       state: c.interference.depth > 0 ? "warn" : "pass",
-      note: c.interference.depth > 0 ? (pair ? "The wheels overlap away from the contact." : "The wheel cuts into the track away from the contact.") : undefined,
+      note:
+        c.interference.depth > 0
+          ? pair
+            ? "The wheels overlap away from the contact."
+            : "The wheel cuts into the track away from the contact."
+          : undefined,
       locate: c.interference.depth > 0 && c.interference.at ? "interference" : undefined,
     },
     {
@@ -62,11 +66,28 @@ export function checkFigures(r: SolveResult): Figure[] {
       value: `${fmt(c.axleDeviation, 3)} ${u}`,
       state: c.axleDeviation > tol ? "warn" : "pass",
     },
-    { key: "slip", label: "Slip between the rolled lengths (Δs)", value: `${fmt(c.slip, 3)} ${u}`, state: c.slip > tol ? "warn" : "pass" },
+    {
+      key: "slip",
+      label: "Slip between the rolled lengths (Δs)",
+      value: `${fmt(c.slip, 3)} ${u}`,
+      state: c.slip > tol ? "warn" : "pass",
+    },
   ];
   const radii: Array<[string, string, number | undefined]> = [
-    ["wheel", r.mode === "partner-wheel" ? "Tightest bend radius, driver (ρ)" : r.mode === "twin-wheels" ? "Tightest bend radius, upper wheel (ρ)" : "Tightest bend radius, wheel (ρ)", c.minCurvatureRadius.wheel],
-    ["partner", r.mode === "twin-wheels" ? "Tightest bend radius, lower wheel (ρ)" : "Tightest bend radius, partner (ρ)", c.minCurvatureRadius.partner],
+    [
+      "wheel",
+      r.mode === "partner-wheel"
+        ? "Tightest bend radius, driver (ρ)"
+        : r.mode === "twin-wheels"
+          ? "Tightest bend radius, upper wheel (ρ)"
+          : "Tightest bend radius, wheel (ρ)",
+      c.minCurvatureRadius.wheel,
+    ],
+    [
+      "partner",
+      r.mode === "twin-wheels" ? "Tightest bend radius, lower wheel (ρ)" : "Tightest bend radius, partner (ρ)",
+      c.minCurvatureRadius.partner,
+    ],
     ["track", "Tightest bend radius, track (ρ)", c.minCurvatureRadius.track],
   ];
   for (const [key, label, value] of radii) {
@@ -77,7 +98,9 @@ export function checkFigures(r: SolveResult): Figure[] {
       label,
       value: radius(value, u),
       state: sharp ? "warn" : "pass",
-      note: sharp ? `Under ${SHARP_SHARE * 100}% of the wheel size: round it for parts people touch, and check the cutter fits.` : undefined,
+      note: sharp
+        ? `Under ${SHARP_SHARE * 100}% of the wheel size: round it for parts people touch, and check the cutter fits.`
+        : undefined,
     });
   }
   if (c.speedRatio)

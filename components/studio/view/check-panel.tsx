@@ -49,24 +49,42 @@ export function CheckPanel({ result, checking, error, onPointAt }: CheckPanelPro
     const loc = onPointAt ? locationFor(result, what) : null;
     if (!loc) return null;
     return (
-      <Button type="button" variant={what === "interference" ? "caution" : "quiet"} className="px-2 py-0.5 text-xs" onClick={() => onPointAt?.(loc.position, loc.point)} aria-label={`Show ${label} on the canvas`}>
+      <Button
+        type="button"
+        variant={what === "interference" ? "caution" : "quiet"}
+        className="px-2 py-0.5 text-xs"
+        onClick={() => onPointAt?.(loc.position, loc.point)}
+        aria-label={`Show ${label} on the canvas`}
+      >
         show
       </Button>
     );
   };
   const warns = figures.filter((f) => f.state === "warn").length;
   return (
-    <Panel title="Rolling check" actions={<Badge tone={warns ? "caution" : "pass"}>{warns ? `${warns} to look at` : "all pass"}</Badge>}>
+    <Panel
+      title="Rolling check"
+      actions={<Badge tone={warns ? "caution" : "pass"}>{warns ? `${warns} to look at` : "all pass"}</Badge>}
+    >
       <dl className="flex flex-col divide-y divide-ink-line text-sm" data-testid="check-figures">
         {figures.map((f) => (
-          <div key={f.key} className="flex flex-wrap items-baseline gap-x-3 gap-y-1 py-1.5" data-check={f.key} data-state={f.state}>
+          <div
+            key={f.key}
+            className="flex flex-wrap items-baseline gap-x-3 gap-y-1 py-1.5"
+            data-check={f.key}
+            data-state={f.state}
+          >
             <dt className="min-w-0 flex-1">{f.label}</dt>
             <dd className="font-mono text-ink">{f.value}</dd>
             <dd>
               <Badge tone={BADGE[f.state].tone}>{BADGE[f.state].word}</Badge>
             </dd>
             {f.locate && f.state === "warn" ? <dd>{show(f.locate, f.label.toLowerCase())}</dd> : null}
-            {f.note ? <dd className={`basis-full text-xs ${f.state === "warn" ? "text-caution-ink" : "text-ink-soft"}`}>{f.note}</dd> : null}
+            {f.note ? (
+              <dd className={`basis-full text-xs ${f.state === "warn" ? "text-caution-ink" : "text-ink-soft"}`}>
+                {f.note}
+              </dd>
+            ) : null}
           </div>
         ))}
       </dl>

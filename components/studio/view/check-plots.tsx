@@ -52,9 +52,33 @@ export function plotsFor(r: SolvedGeometry): PlotSpec[] {
     const sorted = { x: order.map((i) => inSector.x[i]), y: order.map((i) => inSector.y[i]) };
     const clip = curvatureClip(sorted);
     return [
-      { key: "friction", title: "Grip needed (μ = |r′|/r)", series: outlineFrictionSeries(r.wheel.points, sector), xLabel: "driver turn θ (rad)", yLabel: "|r′|/r", xDomain: dom, guide: { y: FRICTION_GUIDE, label: `${FRICTION_GUIDE}` } },
-      { key: "ratio", title: "Speed ratio ω partner / ω driver", series: speedRatioSeries(r.follower ?? []), xLabel: "driver turn θ (rad)", yLabel: "ratio", xDomain: dom },
-      { key: "curvature", title: "Driver pitch-curve curvature", series: sorted, xLabel: "driver turn θ (rad)", yLabel: `κ (1/${u}, + convex)`, xDomain: dom, clip, clipNote: "off the scale: a corner or very tight bend" },
+      {
+        key: "friction",
+        title: "Grip needed (μ = |r′|/r)",
+        series: outlineFrictionSeries(r.wheel.points, sector),
+        xLabel: "driver turn θ (rad)",
+        yLabel: "|r′|/r",
+        xDomain: dom,
+        guide: { y: FRICTION_GUIDE, label: `${FRICTION_GUIDE}` },
+      },
+      {
+        key: "ratio",
+        title: "Speed ratio ω partner / ω driver",
+        series: speedRatioSeries(r.follower ?? []),
+        xLabel: "driver turn θ (rad)",
+        yLabel: "ratio",
+        xDomain: dom,
+      },
+      {
+        key: "curvature",
+        title: "Driver pitch-curve curvature",
+        series: sorted,
+        xLabel: "driver turn θ (rad)",
+        yLabel: `κ (1/${u}, + convex)`,
+        xDomain: dom,
+        clip,
+        clipNote: "off the scale: a corner or very tight bend",
+      },
     ];
   }
   const pts = r.track?.points ?? [];
@@ -63,11 +87,35 @@ export function plotsFor(r: SolvedGeometry): PlotSpec[] {
   const curv = curvatureSeries(pts, (p) => p[0]);
   const clip = curvatureClip(curv);
   const plots: PlotSpec[] = [
-    { key: "friction", title: "Grip needed (μ = |dy/dx|)", series: trackFrictionSeries(pts), xLabel: `axle x (${u})`, yLabel: "|dy/dx|", xDomain: dom, guide: { y: FRICTION_GUIDE, label: `${FRICTION_GUIDE}` } },
+    {
+      key: "friction",
+      title: "Grip needed (μ = |dy/dx|)",
+      series: trackFrictionSeries(pts),
+      xLabel: `axle x (${u})`,
+      yLabel: "|dy/dx|",
+      xDomain: dom,
+      guide: { y: FRICTION_GUIDE, label: `${FRICTION_GUIDE}` },
+    },
   ];
   if (r.mode === "twin-wheels" && r.motion)
-    plots.push({ key: "ratio", title: "Speed ratio ω lower / ω upper", series: twinRatioSeries(r.motion), xLabel: `axle x (${u})`, yLabel: "ratio", xDomain: dom });
-  plots.push({ key: "curvature", title: "Track curvature", series: curv, xLabel: `axle x (${u})`, yLabel: `κ (1/${u}, + bends up)`, xDomain: dom, clip, clipNote: "off the scale: a cusp or very tight bend" });
+    plots.push({
+      key: "ratio",
+      title: "Speed ratio ω lower / ω upper",
+      series: twinRatioSeries(r.motion),
+      xLabel: `axle x (${u})`,
+      yLabel: "ratio",
+      xDomain: dom,
+    });
+  plots.push({
+    key: "curvature",
+    title: "Track curvature",
+    series: curv,
+    xLabel: `axle x (${u})`,
+    yLabel: `κ (1/${u}, + bends up)`,
+    xDomain: dom,
+    clip,
+    clipNote: "off the scale: a cusp or very tight bend",
+  });
   return plots;
 }
 

@@ -46,8 +46,20 @@ export function LinePlot({ title, series, xLabel, yLabel, xDomain, yDomain, guid
   return (
     <figure className="flex flex-col gap-1 text-sm" data-plot={title}>
       <figcaption className="font-medium">{title}</figcaption>
-      <svg viewBox={`0 0 ${W} ${H}`} className="w-full" role="img" aria-label={`${title}: ${yLabel} against ${xLabel}, from ${fmt(Math.min(...series.y), 3)} to ${fmt(Math.max(...series.y), 3)}`}>
-        <rect x={M.left} y={M.top} width={W - M.left - M.right} height={H - M.top - M.bottom} fill="#fffdf7" stroke="#c4cfdc" />
+      <svg
+        viewBox={`0 0 ${W} ${H}`}
+        className="w-full"
+        role="img"
+        aria-label={`${title}: ${yLabel} against ${xLabel}, from ${fmt(Math.min(...series.y), 3)} to ${fmt(Math.max(...series.y), 3)}`}
+      >
+        <rect
+          x={M.left}
+          y={M.top}
+          width={W - M.left - M.right}
+          height={H - M.top - M.bottom}
+          fill="#fffdf7"
+          stroke="#c4cfdc"
+        />
         {yt.map((v) => (
           <g key={`y${v}`}>
             <line x1={M.left} x2={W - M.right} y1={py(v)} y2={py(v)} stroke="#e2d6b8" strokeWidth={0.75} />
@@ -64,23 +76,51 @@ export function LinePlot({ title, series, xLabel, yLabel, xDomain, yDomain, guid
             </text>
           </g>
         ))}
-        {y0 < 0 && y1 > 0 ? <line x1={M.left} x2={W - M.right} y1={py(0)} y2={py(0)} stroke="#3d5a80" strokeWidth={0.75} /> : null}
+        {y0 < 0 && y1 > 0 ? (
+          <line x1={M.left} x2={W - M.right} y1={py(0)} y2={py(0)} stroke="#3d5a80" strokeWidth={0.75} />
+        ) : null}
         {guide ? (
           <g>
-            <line x1={M.left} x2={W - M.right} y1={py(guide.y)} y2={py(guide.y)} stroke="#e8590c" strokeWidth={1.25} strokeDasharray="5 3" />
-            <text x={W - M.right - 3} y={py(guide.y) - 3} textAnchor="end" fontSize={9} fill="#e8590c" className="font-mono">
+            <line
+              x1={M.left}
+              x2={W - M.right}
+              y1={py(guide.y)}
+              y2={py(guide.y)}
+              stroke="#e8590c"
+              strokeWidth={1.25}
+              strokeDasharray="5 3"
+            />
+            <text
+              x={W - M.right - 3}
+              y={py(guide.y) - 3}
+              textAnchor="end"
+              fontSize={9}
+              fill="#e8590c"
+              className="font-mono"
+            >
               {guide.label}
             </text>
           </g>
         ) : null}
         <path d={d} fill="none" stroke="#1d3557" strokeWidth={1.4} strokeLinejoin="round" />
         {clipped.map((x, i) => (
-          <path key={`c${i}`} d={`M${px(x) - 3},${M.top + 1}L${px(x) + 3},${M.top + 1}L${px(x)},${M.top + 6}Z`} fill="#e8590c" />
+          <path
+            key={`c${i}`}
+            d={`M${px(x) - 3},${M.top + 1}L${px(x) + 3},${M.top + 1}L${px(x)},${M.top + 6}Z`}
+            fill="#e8590c"
+          />
         ))}
         <text x={(M.left + W - M.right) / 2} y={H - 4} textAnchor="middle" fontSize={10} className="fill-ink">
           {xLabel}
         </text>
-        <text x={10} y={(M.top + H - M.bottom) / 2} textAnchor="middle" fontSize={10} transform={`rotate(-90 10 ${(M.top + H - M.bottom) / 2})`} className="fill-ink">
+        <text
+          x={10}
+          y={(M.top + H - M.bottom) / 2}
+          textAnchor="middle"
+          fontSize={10}
+          transform={`rotate(-90 10 ${(M.top + H - M.bottom) / 2})`}
+          className="fill-ink"
+        >
           {yLabel}
         </text>
       </svg>

@@ -39,12 +39,22 @@ export function OptionsTable({ result, pending, currentValue, onPick }: OptionsT
   ];
   return (
     <Panel title={lobes ? "Lobes" : "Closure options"}>
-      <Table head={head} caption={lobes ? "Lobe choices and the centre distance each gives" : "Periods per turn and the wheel size each gives"}>
+      <Table
+        head={head}
+        caption={
+          lobes ? "Lobe choices and the centre distance each gives" : "Periods per turn and the wheel size each gives"
+        }
+      >
         {options.map((o) => {
           const n = count(o);
           const current = n === currentValue;
           return (
-            <tr key={n} aria-current={current ? "true" : undefined} className={current ? "bg-paper-deep" : undefined} data-option={n}>
+            <tr
+              key={n}
+              aria-current={current ? "true" : undefined}
+              className={current ? "bg-paper-deep" : undefined}
+              data-option={n}
+            >
               <td className="font-mono">{n}</td>
               <td className="font-mono">{fmt((lobes ? o.centreDistance : o.axleHeight) ?? NaN)}</td>
               {result.mode === "twin-wheels" ? <td className="font-mono">{fmt(o.centreDistance ?? NaN)}</td> : null}

@@ -45,6 +45,15 @@ export function OutlineAxle(props: {
     return refusal;
   };
   return (
-    <AxleHandle at={at} axle={outline.axle} units={props.result.units} pixelsPerUnit={view.scale} box={props.box} onDragStart={start} onDragEnd={() => props.setDrag(null)} place={place} />
+    <AxleHandle
+      at={at}
+      axle={outline.axle}
+      units={props.result.units}
+      pixelsPerUnit={view.scale}
+      box={props.box}
+      onDragStart={start}
+      onDragEnd={() => props.setDrag(null)}
+      place={place}
+    />
   );
 }

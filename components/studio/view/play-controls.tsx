@@ -45,14 +45,36 @@ export function PlayControls({
   };
   const valueText = describePosition?.(position) ?? `${(position * 100).toFixed(1)}% of the cycle`;
   return (
-    <div role="group" aria-label="Playback" className="no-print flex flex-wrap items-center gap-2" onKeyDown={onKeyDown}>
-      <Button type="button" className="w-24 justify-center" onClick={() => onPlayingChange(!playing)} aria-keyshortcuts="Space">
+    <div
+      role="group"
+      aria-label="Playback"
+      className="no-print flex flex-wrap items-center gap-2"
+      onKeyDown={onKeyDown}
+    >
+      <Button
+        type="button"
+        className="w-24 justify-center"
+        onClick={() => onPlayingChange(!playing)}
+        aria-keyshortcuts="Space"
+      >
         {playing ? "❚❚ Pause" : "▶ Play"}
       </Button>
-      <Button type="button" variant="quiet" onClick={() => step(-1)} aria-label="Step one frame back" title="One frame back">
+      <Button
+        type="button"
+        variant="quiet"
+        onClick={() => step(-1)}
+        aria-label="Step one frame back"
+        title="One frame back"
+      >
         ◀︎
       </Button>
-      <Button type="button" variant="quiet" onClick={() => step(1)} aria-label="Step one frame forward" title="One frame forward">
+      <Button
+        type="button"
+        variant="quiet"
+        onClick={() => step(1)}
+        aria-label="Step one frame forward"
+        title="One frame forward"
+      >
         ▶︎
       </Button>
       <label className="flex items-center gap-1.5 text-sm">

@@ -35,7 +35,18 @@ export interface StudioViewProps {
 }
 
 /** The studio's view half: canvas and playback on the left, the check and options on the right, plots below. */
-export function StudioView({ result, options, check, checkError, spec, error, onPick, onAxleChange, canvasHeight, belowCheck }: StudioViewProps) {
+export function StudioView({
+  result,
+  options,
+  check,
+  checkError,
+  spec,
+  error,
+  onPick,
+  onAxleChange,
+  canvasHeight,
+  belowCheck,
+}: StudioViewProps) {
   const clock = useRollingClock();
   const [highlight, setHighlight] = useState<CanvasHighlight | null>(null);
   // A new design clears the old design's highlight (adjusted while rendering, not in an effect).
@@ -78,9 +89,16 @@ export function StudioView({ result, options, check, checkError, spec, error, on
   const side = useMemo(
     () => (
       <aside className="flex flex-col gap-3">
-        {!error ? <CheckPanel result={checked} checking={!!result && !checked} error={checkError} onPointAt={pointAt} /> : null}
+        {!error ? (
+          <CheckPanel result={checked} checking={!!result && !checked} error={checkError} onPointAt={pointAt} />
+        ) : null}
         {!error && belowCheck ? belowCheck(showAt) : null}
-        <OptionsTable result={error ? undefined : withOptions} pending={optionsPending} currentValue={current} onPick={onPick} />
+        <OptionsTable
+          result={error ? undefined : withOptions}
+          pending={optionsPending}
+          currentValue={current}
+          onPick={onPick}
+        />
       </aside>
     ),
     [error, result, checked, checkError, withOptions, optionsPending, pointAt, current, onPick, belowCheck, showAt],
@@ -113,7 +131,11 @@ export function StudioView({ result, options, check, checkError, spec, error, on
               <PlayControls {...clock.controls} describePosition={describePosition} />
             </div>
             {highlight ? (
-              <button type="button" className="no-print text-xs text-caution-ink underline" onClick={() => setHighlight(null)}>
+              <button
+                type="button"
+                className="no-print text-xs text-caution-ink underline"
+                onClick={() => setHighlight(null)}
+              >
                 Clear the mark
               </button>
             ) : null}

@@ -1,7 +1,15 @@
 "use client";
 // The canvas's own input: its width (followed with a ResizeObserver), the mouse wheel (taken natively,
 // since React's listener is passive and the page would scroll too), keys and pointer drags.
-import { useEffect, useEffectEvent, useRef, useState, type KeyboardEvent, type PointerEvent, type RefObject } from "react";
+import {
+  useEffect,
+  useEffectEvent,
+  useRef,
+  useState,
+  type KeyboardEvent,
+  type PointerEvent,
+  type RefObject,
+} from "react";
 import { stepFrame } from "./use-rolling-clock";
 import type { useViewTransform } from "./use-view-transform";
 
@@ -28,7 +36,11 @@ export function useCanvasWidth(box: RefObject<HTMLDivElement | null>): number {
   return width;
 }
 
-export function useCanvasControls(box: RefObject<HTMLDivElement | null>, vt: ReturnType<typeof useViewTransform>, playback: Playback) {
+export function useCanvasControls(
+  box: RefObject<HTMLDivElement | null>,
+  vt: ReturnType<typeof useViewTransform>,
+  playback: Playback,
+) {
   const onWheel = useEffectEvent((e: WheelEvent) => {
     e.preventDefault();
     const rect = box.current!.getBoundingClientRect();

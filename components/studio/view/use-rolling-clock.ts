@@ -77,7 +77,15 @@ export function useRollingClock(opts: { cycleSeconds?: number; initialPlaying?: 
     position,
     setPosition,
     cycleSeconds,
-    controls: { playing, onPlayingChange: setPlaying, speed, onSpeedChange: setSpeed, position, onPositionChange: setPosition, cycleSeconds },
+    controls: {
+      playing,
+      onPlayingChange: setPlaying,
+      speed,
+      onSpeedChange: setSpeed,
+      position,
+      onPositionChange: setPosition,
+      cycleSeconds,
+    },
   };
 }
 

@@ -53,7 +53,11 @@ function list(flow: Flow, number: string, title: string, items: string[], none: 
   if (items.length === 0) return flow.paragraph(none);
   for (const item of items) {
     flow.need(heightOf(doc, item, STYLE.body, w, 1));
-    doc.save().circle(flow.left + 3.5, flow.y + 5.6, 1.5).fill(COLOUR.ink).restore();
+    doc
+      .save()
+      .circle(flow.left + 3.5, flow.y + 5.6, 1.5)
+      .fill(COLOUR.ink)
+      .restore();
     flow.y += write(doc, item, flow.left + indent, flow.y, STYLE.body, { width: w, lineGap: 1 }) + 3;
   }
 }

@@ -20,7 +20,11 @@ export function cautionBox(flow: Flow, c: SheetCaution): void {
   const doc = flow.doc;
   const colour = signalColour(c.signal);
   const textW = flow.width - PANEL - 2 * PAD;
-  const word = { font: c.signal === "NOTICE" ? FONT.sansSemibold : FONT.sansBold, size: SIZE.body, color: COLOUR.white };
+  const word = {
+    font: c.signal === "NOTICE" ? FONT.sansSemibold : FONT.sansBold,
+    size: SIZE.body,
+    color: COLOUR.white,
+  };
   const h = Math.max(heightOf(doc, c.text, STYLE.body, textW, 1) + 2 * PAD, 22);
   flow.need(h + 4);
   const x = flow.left;

@@ -14,7 +14,8 @@ export function tickBoxes<Row>(count: (row: Row) => number): DrawnCell<Row> {
     paint: (doc, row, box) => {
       const n = Math.max(1, count(row));
       const per = perLine(box.w);
-      for (let i = 0; i < n; i++) tickBox(doc, box.x + (i % per) * (BOX + BOX_GAP), box.y + 0.5 + Math.floor(i / per) * (BOX + BOX_GAP), BOX);
+      for (let i = 0; i < n; i++)
+        tickBox(doc, box.x + (i % per) * (BOX + BOX_GAP), box.y + 0.5 + Math.floor(i / per) * (BOX + BOX_GAP), BOX);
     },
   };
 }
@@ -25,7 +26,14 @@ export function writeInLine<Row>(): DrawnCell<Row> {
   return {
     height: () => 12,
     paint: (doc, _row, box) => {
-      doc.save().lineWidth(0.5).strokeColor(COLOUR.inkFaint).moveTo(box.x, box.y + box.h - 1).lineTo(box.x + box.w, box.y + box.h - 1).stroke().restore();
+      doc
+        .save()
+        .lineWidth(0.5)
+        .strokeColor(COLOUR.inkFaint)
+        .moveTo(box.x, box.y + box.h - 1)
+        .lineTo(box.x + box.w, box.y + box.h - 1)
+        .stroke()
+        .restore();
     },
   };
 }

@@ -32,6 +32,16 @@ export function writeContents(doc: PDFKit.PDFDocument, slot: ContentsSlot, secti
     // A dotted leader from the title to the page number.
     const x0 = slot.x + widthOf(doc, title, STYLE.body) + 6;
     const x1 = slot.x + slot.width - widthOf(doc, page, STYLE.figure) - 6;
-    if (x1 > x0) doc.save().lineWidth(0.6).strokeColor(COLOUR.inkFaint).dash(0.6, { space: 2.4 }).moveTo(x0, y + 8).lineTo(x1, y + 8).stroke().undash().restore();
+    if (x1 > x0)
+      doc
+        .save()
+        .lineWidth(0.6)
+        .strokeColor(COLOUR.inkFaint)
+        .dash(0.6, { space: 2.4 })
+        .moveTo(x0, y + 8)
+        .lineTo(x1, y + 8)
+        .stroke()
+        .undash()
+        .restore();
   });
 }

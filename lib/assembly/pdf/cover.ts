@@ -25,33 +25,70 @@ export function cover(flow: Flow, sheet: AssemblySheet): ContentsSlot {
   write(doc, "AXLEWRIGHT  ·  FOR THE INSTALLER", flow.left, flow.y, STYLE.label);
   writeRight(doc, sheet.shop.name, flow.frame.right, flow.y, STYLE.label);
   flow.y += 11;
-  flow.y += write(doc, sheet.title, flow.left, flow.y, { font: FONT.sansBold, size: SIZE.title, color: COLOUR.ink }, { width: flow.width }) + 6;
+  flow.y +=
+    write(
+      doc,
+      sheet.title,
+      flow.left,
+      flow.y,
+      { font: FONT.sansBold, size: SIZE.title, color: COLOUR.ink },
+      { width: flow.width },
+    ) + 6;
 
   const a = sheet.approval;
   const cell = (label: string, share: number, ...lines: TitleCell["lines"]): TitleCell => ({ label, share, lines });
   titleBlock(flow, [
-    [cell("Project", 62, { text: sheet.project.name, style: { ...value, font: FONT.sansSemibold, size: SIZE.project } }), cell("Site", 38, { text: sheet.project.site, style: value })],
-    [cell("Client", 62, { text: sheet.project.client ?? "—", style: value }), cell("Design and revision", 38, { text: `${sheet.design.name}, R${sheet.design.revision}`, style: value })],
+    [
+      cell("Project", 62, {
+        text: sheet.project.name,
+        style: { ...value, font: FONT.sansSemibold, size: SIZE.project },
+      }),
+      cell("Site", 38, { text: sheet.project.site, style: value }),
+    ],
+    [
+      cell("Client", 62, { text: sheet.project.client ?? "—", style: value }),
+      cell("Design and revision", 38, { text: `${sheet.design.name}, R${sheet.design.revision}`, style: value }),
+    ],
     [
       a
         ? cell(
             "Sign-off reference",
             62,
             { text: a.reference, style: mono },
-            { text: `Approved by ${a.typedName}${a.organisation ? `, ${a.organisation}` : ""}, signed ${isoMinute(a.signedAt)}`, style: STYLE.small },
+            {
+              text: `Approved by ${a.typedName}${a.organisation ? `, ${a.organisation}` : ""}, signed ${isoMinute(a.signedAt)}`,
+              style: STYLE.small,
+            },
           )
-        : cell("Sign-off reference", 62, { text: "NOT APPROVED", style: orangeBold }, { text: "The client has not signed off this revision.", style: STYLE.small }),
+        : cell(
+            "Sign-off reference",
+            62,
+            { text: "NOT APPROVED", style: orangeBold },
+            { text: "The client has not signed off this revision.", style: STYLE.small },
+          ),
       cell("Date of this sheet", 38, { text: isoDay(sheet.date), style: { ...mono, font: FONT.mono } }),
     ],
-    [cell("Shop", 62, { text: sheet.shop.name, style: value }, { text: sheet.shop.contact, style: STYLE.small }), cell("Cut plan", 38, { text: `${sheet.cutPlanNumber} of R${sheet.design.revision}`, style: { ...mono, font: FONT.mono } })],
-    [cell("Spec hash (SHA-256 of the signed design)", 1, { text: sheet.design.specHash, style: { font: FONT.mono, size: SIZE.small, color: COLOUR.inkSoft } })],
+    [
+      cell("Shop", 62, { text: sheet.shop.name, style: value }, { text: sheet.shop.contact, style: STYLE.small }),
+      cell("Cut plan", 38, {
+        text: `${sheet.cutPlanNumber} of R${sheet.design.revision}`,
+        style: { ...mono, font: FONT.mono },
+      }),
+    ],
+    [
+      cell("Spec hash (SHA-256 of the signed design)", 1, {
+        text: sheet.design.specHash,
+        style: { font: FONT.mono, size: SIZE.small, color: COLOUR.inkSoft },
+      }),
+    ],
   ]);
   flow.gap(10);
 
   if (!a) notApproved(flow);
 
   flow.subsection("1.1", "Cautions", 30);
-  if (sheet.cautions.length === 0) flow.paragraph("No cautions were raised for this design. The disclaimer below still applies.");
+  if (sheet.cautions.length === 0)
+    flow.paragraph("No cautions were raised for this design. The disclaimer below still applies.");
   for (const c of sheet.cautions) cautionBox(flow, c);
   flow.gap(6);
 
@@ -70,8 +107,22 @@ function notApproved(flow: Flow): void {
   const { left: x, y, width: w } = flow;
   doc.save().rect(x, y, w, h).fill(COLOUR.cautionSoft).restore();
   doc.save().lineWidth(2.2).strokeColor(COLOUR.caution).rect(x, y, w, h).stroke().restore();
-  write(doc, NOT_APPROVED, x, y + 9, { font: FONT.sansBold, size: 17, color: COLOUR.caution }, { width: w, align: "center" });
-  write(doc, DO_NOT_INSTALL, x, y + 33, { font: FONT.sansSemibold, size: SIZE.body + 0.5, color: COLOUR.ink }, { width: w, align: "center" });
+  write(
+    doc,
+    NOT_APPROVED,
+    x,
+    y + 9,
+    { font: FONT.sansBold, size: 17, color: COLOUR.caution },
+    { width: w, align: "center" },
+  );
+  write(
+    doc,
+    DO_NOT_INSTALL,
+    x,
+    y + 33,
+    { font: FONT.sansSemibold, size: SIZE.body + 0.5, color: COLOUR.ink },
+    { width: w, align: "center" },
+  );
   flow.y += h + 12;
 }
 

@@ -83,7 +83,14 @@ export class Flow {
     const doc = this.doc;
     const h = write(doc, `${number}   ${title}`, this.left, this.y, style);
     this.y += h + 2;
-    doc.save().lineWidth(style === STYLE.heading ? 1 : 0.5).strokeColor(COLOUR.ink).moveTo(this.left, this.y).lineTo(this.frame.right, this.y).stroke().restore();
+    doc
+      .save()
+      .lineWidth(style === STYLE.heading ? 1 : 0.5)
+      .strokeColor(COLOUR.ink)
+      .moveTo(this.left, this.y)
+      .lineTo(this.frame.right, this.y)
+      .stroke()
+      .restore();
     this.y += style === STYLE.heading ? 9 : 6;
   }
 

@@ -45,7 +45,8 @@ export function registerFonts(doc: PDFKit.PDFDocument, files: Record<FontName, s
 
 // Characters the sheet prints as they are: printable ASCII, Latin-1, ı Œ œ, – — ‘ ’ ‚ “ ” „ • … ′ ″ ‹ › ⁄ € ™ ↑ ↓ − ∕
 // (every IBM Plex face has them); anything else is spelled out below.
-const HAS_GLYPH = /[\u0020-\u007e\u00a0-\u00ff\u0131\u0152\u0153\u2013\u2014\u2018-\u201a\u201c-\u201e\u2022\u2026\u2032\u2033\u2039\u203a\u2044\u20ac\u2122\u2191\u2193\u2212\u2215]/u;
+const HAS_GLYPH =
+  /[\u0020-\u007e\u00a0-\u00ff\u0131\u0152\u0153\u2013\u2014\u2018-\u201a\u201c-\u201e\u2022\u2026\u2032\u2033\u2039\u203a\u2044\u20ac\u2122\u2191\u2193\u2212\u2215]/u;
 
 const SPELLED: Record<string, string> = {
   "→": "->",
@@ -54,10 +55,10 @@ const SPELLED: Record<string, string> = {
   "≤": "<=",
   "≈": "~",
   "≠": "!=",
-  "μ": "µ",
-  "π": "pi",
-  "Δ": "delta ",
-  "θ": "theta",
+  μ: "µ",
+  π: "pi",
+  Δ: "delta ",
+  θ: "theta",
   "✓": "yes",
   "⌀": "Ø",
   "\u2009": " ",

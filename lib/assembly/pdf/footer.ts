@@ -13,12 +13,25 @@ export function writeFooters(doc: PDFKit.PDFDocument, frame: PageFrame, sheet: A
   for (let i = start; i < start + count; i++) {
     doc.switchToPage(i);
     const y = frame.footerY;
-    doc.save().lineWidth(0.5).strokeColor(COLOUR.inkLine).moveTo(frame.left, y - 4).lineTo(frame.right, y - 4).stroke().restore();
+    doc
+      .save()
+      .lineWidth(0.5)
+      .strokeColor(COLOUR.inkLine)
+      .moveTo(frame.left, y - 4)
+      .lineTo(frame.right, y - 4)
+      .stroke()
+      .restore();
     const page = `page ${i + 1} of ${count}`;
     const room = frame.right - frame.left - widthOf(doc, page, STYLE.footer) - 16 - widthOf(doc, ref, STYLE.footer);
     const jobText = fit(doc, job, room);
     write(doc, jobText, frame.left, y, STYLE.footer);
-    write(doc, ref, frame.left + widthOf(doc, jobText, STYLE.footer), y, sheet.approval ? STYLE.footer : { ...STYLE.footer, color: COLOUR.caution });
+    write(
+      doc,
+      ref,
+      frame.left + widthOf(doc, jobText, STYLE.footer),
+      y,
+      sheet.approval ? STYLE.footer : { ...STYLE.footer, color: COLOUR.caution },
+    );
     writeRight(doc, page, frame.right, y, STYLE.footer);
   }
 }

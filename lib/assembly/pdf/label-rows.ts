@@ -48,7 +48,8 @@ export function placeLabels(items: RowItem[], bounds: RowBounds, gap: number, ma
         if (o.row < row) return !inside(it.x, o);
         return !inside(items[j].x, s);
       });
-    const leavesLaterFree = (s: { left: number; right: number }) => items.slice(i + 1).every((later) => !inside(later.x, s));
+    const leavesLaterFree = (s: { left: number; right: number }) =>
+      items.slice(i + 1).every((later) => !inside(later.x, s));
     // The next label can still sit in this row if it may start as far right as it can go.
     const next = items[i + 1];
     const nextLeft = next ? Math.max(...next.anchors.map((a) => spanOf(next, a).left)) : Infinity;

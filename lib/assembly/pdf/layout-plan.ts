@@ -17,7 +17,8 @@ const SIDE = 34;
 /** Height the scale's line and its bar take over the strips. */
 const SCALE_LINES = 17 + SCALE_BAR_HEIGHT + 8;
 
-export const NO_RUN = "This design has no track run (a pair of wheels), so there is no layout plan. Set the wheels up by the parts list and the order of assembly.";
+export const NO_RUN =
+  "This design has no track run (a pair of wheels), so there is no layout plan. Set the wheels up by the parts list and the order of assembly.";
 
 export function layoutPlan(flow: Flow, sheet: AssemblySheet): void {
   flow.newPage();
@@ -33,7 +34,9 @@ export function layoutPlan(flow: Flow, sheet: AssemblySheet): void {
   const origin = flow.left + SIDE;
   const widthPt = flow.width - 2 * SIDE;
   const layouts = (k: number, strips: StripRange[]) =>
-    strips.map((range, index) => layoutStrip(doc, sheet, run, { index, count: strips.length, range, k, origin, bounds }));
+    strips.map((range, index) =>
+      layoutStrip(doc, sheet, run, { index, count: strips.length, range, k, origin, bounds }),
+    );
   runNotes(flow, sheet, run);
   const scale = chooseScale({
     length: run.length,
@@ -48,7 +51,14 @@ export function layoutPlan(flow: Flow, sheet: AssemblySheet): void {
   scaleLines(flow, scale.denominator, scale.ptPerMm);
   for (const strip of layouts(scale.ptPerMm, scale.strips)) {
     if (flow.need(strip.height)) {
-      flow.y += write(doc, `${SECTION.plan.number}   ${SECTION.plan.title} (continued)   ·   SCALE 1 : ${scale.denominator}`, flow.left, flow.y, STYLE.small) + 8;
+      flow.y +=
+        write(
+          doc,
+          `${SECTION.plan.number}   ${SECTION.plan.title} (continued)   ·   SCALE 1 : ${scale.denominator}`,
+          flow.left,
+          flow.y,
+          STYLE.small,
+        ) + 8;
     }
     drawStrip(doc, run, strip, flow.y);
     flow.y += strip.height;
@@ -86,9 +96,19 @@ function runNotes(flow: Flow, sheet: AssemblySheet, run: SheetRun): void {
 function scaleLines(flow: Flow, denominator: number, k: number): void {
   const doc = flow.doc;
   const top = flow.y;
-  write(doc, `SCALE 1 : ${denominator}`, flow.left, flow.y, { font: FONT.monoSemibold, size: SIZE.subheading + 1, color: COLOUR.ink });
+  write(doc, `SCALE 1 : ${denominator}`, flow.left, flow.y, {
+    font: FONT.monoSemibold,
+    size: SIZE.subheading + 1,
+    color: COLOUR.ink,
+  });
   const noteX = flow.left + 180;
-  write(doc, "ISO 5455, the same along and up the run. Print at actual size (100 %), not \"fit to page\".", noteX, flow.y + 2, STYLE.small);
+  write(
+    doc,
+    'ISO 5455, the same along and up the run. Print at actual size (100 %), not "fit to page".',
+    noteX,
+    flow.y + 2,
+    STYLE.small,
+  );
   scaleBar(doc, flow.left + 4, top + 17, denominator, k, noteX);
   flow.y = top + SCALE_LINES;
 }

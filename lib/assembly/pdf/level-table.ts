@@ -24,14 +24,23 @@ export function levelTable(flow: Flow, sheet: AssemblySheet): void {
     { header: "At", share: 10, text: (r) => r.label, style: STYLE.partId },
     { header: "What", share: 9, text: (r) => (r.what === "support" ? "Support" : "Joint") },
     { header: "Station from datum", share: 17, text: (r) => lengthCell(r.station, inches), style: STYLE.figure },
-    { header: "Top of track above datum", share: 17, text: (r) => lengthCell(r.topHeight, inches), style: STYLE.figure },
+    {
+      header: "Top of track above datum",
+      share: 17,
+      text: (r) => lengthCell(r.topHeight, inches),
+      style: STYLE.figure,
+    },
     { header: "Tolerance", share: 18, text: (r) => tolerance(r.tolerance, inches, true), style: STYLE.figure },
     { header: "Applies to", share: 9, text: (r) => (r.what === "support" ? "level" : "station") },
     { header: "Found on site", share: 13, drawn: writeInLine() },
     { header: "OK", share: 7, drawn: oneTickBox() },
   ];
   // The heading, the note and the table on one page when they fit on one.
-  flow.section(SECTION.levels.number, SECTION.levels.title, heightOf(flow.doc, INTRO, STYLE.body, flow.width, 1) + 6 + tableHeight(flow, columns, sheet.levels) + 30);
+  flow.section(
+    SECTION.levels.number,
+    SECTION.levels.title,
+    heightOf(flow.doc, INTRO, STYLE.body, flow.width, 1) + 6 + tableHeight(flow, columns, sheet.levels) + 30,
+  );
   flow.paragraph(INTRO, STYLE.body, 0, 6);
   table(flow, columns, sheet.levels, { continued: `${SECTION.levels.number}   ${SECTION.levels.title} (continued)` });
   flow.gap(5);

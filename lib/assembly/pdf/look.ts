@@ -48,5 +48,13 @@ const MARGIN = 42;
 
 export function pageFrame(paper: Paper): PageFrame {
   const { widthPt: width, heightPt: height } = PAPER_SIZES[paper];
-  return { width, height, left: MARGIN, right: width - MARGIN, top: MARGIN, bottom: height - MARGIN - 14, footerY: height - MARGIN + 4 };
+  return {
+    width,
+    height,
+    left: MARGIN,
+    right: width - MARGIN,
+    top: MARGIN,
+    bottom: height - MARGIN - 14,
+    footerY: height - MARGIN + 4,
+  };
 }

@@ -12,13 +12,26 @@ export function tickBox(doc: PDFKit.PDFDocument, x: number, y: number, size = 7.
 export function arrow(doc: PDFKit.PDFDocument, x0: number, x1: number, y: number, color: string = COLOUR.ink): void {
   const dir = Math.sign(x1 - x0) || 1;
   const head = 5.5;
-  doc.save().lineWidth(1).strokeColor(color).moveTo(x0, y).lineTo(x1 - dir * head, y).stroke();
+  doc
+    .save()
+    .lineWidth(1)
+    .strokeColor(color)
+    .moveTo(x0, y)
+    .lineTo(x1 - dir * head, y)
+    .stroke();
   doc.polygon([x1, y], [x1 - dir * head, y - 2.6], [x1 - dir * head, y + 2.6]).fill(color);
   doc.restore();
 }
 
 /** The safety alert symbol: a triangle of side `size` with its bottom-left corner at (x, y + size·√3/2). */
-export function alertSymbol(doc: PDFKit.PDFDocument, x: number, y: number, size: number, fill: string, mark: string): void {
+export function alertSymbol(
+  doc: PDFKit.PDFDocument,
+  x: number,
+  y: number,
+  size: number,
+  fill: string,
+  mark: string,
+): void {
   const h = (size * Math.sqrt(3)) / 2;
   doc.save();
   doc.polygon([x + size / 2, y], [x + size, y + h], [x, y + h]).fill(fill);

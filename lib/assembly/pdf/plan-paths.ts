@@ -9,13 +9,27 @@ import { COLOUR } from "./look";
 type Layer = (typeof PLAN_LAYER)[keyof typeof PLAN_LAYER];
 
 /** The plan's path data by layer, on the page. */
-export function planPathData(model: makerjs.IModel, k: number, x0: number, left: number, datumY: number, datumPt: number): Partial<Record<Layer, string>> {
+export function planPathData(
+  model: makerjs.IModel,
+  k: number,
+  x0: number,
+  left: number,
+  datumY: number,
+  datumPt: number,
+): Partial<Record<Layer, string>> {
   const onPage = makerjs.model.scale(makerjs.cloneObject(model), k);
-  return makerjs.exporter.toSVGPathData(onPage, { byLayers: true, origin: [left - x0 * k, datumPt + datumY * k] }) as Record<string, string>;
+  return makerjs.exporter.toSVGPathData(onPage, {
+    byLayers: true,
+    origin: [left - x0 * k, datumPt + datumY * k],
+  }) as Record<string, string>;
 }
 
 /** One layer's pen: a stroked line, a filled shape, or both. */
-function pen(doc: PDFKit.PDFDocument, d: string | undefined, p: { width?: number; stroke?: string; fill?: string; dash?: [number, number]; pattern?: string }): void {
+function pen(
+  doc: PDFKit.PDFDocument,
+  d: string | undefined,
+  p: { width?: number; stroke?: string; fill?: string; dash?: [number, number]; pattern?: string },
+): void {
   if (!d) return;
   doc.save();
   if (p.width !== undefined) doc.lineWidth(p.width);

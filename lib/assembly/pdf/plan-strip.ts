@@ -10,7 +10,16 @@ import { COLOUR, SIZE } from "./look";
 import { arrow } from "./marks";
 import { drawDatum, drawParts, planPathData } from "./plan-paths";
 import { topAt } from "./run-geometry";
-import { HEADER, LEADER, LINE, NAME, SYMBOL, type PlacedLabel, type StripLayout, type StripPlace } from "./strip-layout";
+import {
+  HEADER,
+  LEADER,
+  LINE,
+  NAME,
+  SYMBOL,
+  type PlacedLabel,
+  type StripLayout,
+  type StripPlace,
+} from "./strip-layout";
 import { STYLE, widthOf, write, writeCentred, writeRight, type TextStyle } from "./text";
 
 const SEGMENT: TextStyle = { font: FONT.monoSemibold, size: SIZE.small, color: COLOUR.ink };
@@ -25,12 +34,23 @@ export function drawStrip(doc: PDFKit.PDFDocument, run: SheetRun, s: StripLayout
   const xa = X(range.x0);
 
   // Header: which stretch this is, and the way the wheel goes.
-  write(doc, `Strip ${s.index + 1} of ${s.count}   ·   x = ${range.x0.toFixed(1)} to ${range.x1.toFixed(1)} mm`, s.bounds.left, top, STYLE.bodyStrong);
+  write(
+    doc,
+    `Strip ${s.index + 1} of ${s.count}   ·   x = ${range.x0.toFixed(1)} to ${range.x1.toFixed(1)} mm`,
+    s.bounds.left,
+    top,
+    STYLE.bodyStrong,
+  );
   writeRight(doc, "direction of travel", s.bounds.right - 46, top + 1, STYLE.small);
   arrow(doc, s.bounds.right - 40, s.bounds.right, top + 5.5);
 
   // The drawing itself is the plan model (../plan-drawing.ts), the same the screen shows.
-  const model = planModel(run, range, { supportHalf: 3.6 / k, supportHeight: SYMBOL / k, datumOver: 12 / k, idHeight: ID_HEIGHT / k });
+  const model = planModel(run, range, {
+    supportHalf: 3.6 / k,
+    supportHeight: SYMBOL / k,
+    datumOver: 12 / k,
+    idHeight: ID_HEIGHT / k,
+  });
   const paths = planPathData(model, k, range.x0, xa, run.datumY, datumPt);
   const bandTop = Math.min(...run.profile.map(([, y]) => y));
   const band = Y(run.baseY) - Y(bandTop);
@@ -56,7 +76,8 @@ export function drawStrip(doc: PDFKit.PDFDocument, run: SheetRun, s: StripLayout
 }
 
 function leader(doc: PDFKit.PDFDocument, x: number, y0: number, y1: number): void {
-  if (y1 - y0 > 0.5) doc.save().lineWidth(0.4).strokeColor(COLOUR.inkSoft).moveTo(x, y0).lineTo(x, y1).stroke().restore();
+  if (y1 - y0 > 0.5)
+    doc.save().lineWidth(0.4).strokeColor(COLOUR.inkSoft).moveTo(x, y0).lineTo(x, y1).stroke().restore();
 }
 
 /**
@@ -76,7 +97,14 @@ function drawLabel(doc: PDFKit.PDFDocument, l: PlacedLabel, top: number, b: Stri
 }
 
 /** Segment ids centred in the part of each segment this strip shows: in the base band when it has room, else over the track. */
-function segmentIds(doc: PDFKit.PDFDocument, run: SheetRun, s: StripLayout, band: number, X: (x: number) => number, Y: (y: number) => number): void {
+function segmentIds(
+  doc: PDFKit.PDFDocument,
+  run: SheetRun,
+  s: StripLayout,
+  band: number,
+  X: (x: number) => number,
+  Y: (y: number) => number,
+): void {
   for (const { id, a, b, whole } of partsIn(run, s.range)) {
     // A sliver of a segment at a strip's end goes unnamed: the next strip names it in full.
     if (!whole && (b - a) * s.k < widthOf(doc, id, SEGMENT) + 6) continue;

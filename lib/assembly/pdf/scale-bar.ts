@@ -14,7 +14,15 @@ const nice = (maxMm: number) => {
 export const SCALE_BAR_HEIGHT = 16;
 
 /** Draws the bar at (x, y) with its note starting at noteX (or after the bar). */
-export function scaleBar(doc: PDFKit.PDFDocument, x: number, y: number, denominator: number, ptPerMm: number, noteX: number, maxPt = 160): void {
+export function scaleBar(
+  doc: PDFKit.PDFDocument,
+  x: number,
+  y: number,
+  denominator: number,
+  ptPerMm: number,
+  noteX: number,
+  maxPt = 160,
+): void {
   const real = nice(maxPt / ptPerMm);
   const lengthPt = real * ptPerMm;
   const cells = String(real)[0] === "2" ? 4 : 5;
@@ -32,5 +40,11 @@ export function scaleBar(doc: PDFKit.PDFDocument, x: number, y: number, denomina
   const end = `${real} mm`;
   write(doc, end, x + lengthPt - widthOf(doc, end, figure) / 2, y + h + 2, figure);
   const onPaper = real / denominator;
-  write(doc, `The bar is ${real} mm of run and measures ${Number(onPaper.toFixed(2))} mm on the print at 100 %.`, Math.max(noteX, x + lengthPt + 24), y - 1, STYLE.small);
+  write(
+    doc,
+    `The bar is ${real} mm of run and measures ${Number(onPaper.toFixed(2))} mm on the print at 100 %.`,
+    Math.max(noteX, x + lengthPt + 24),
+    y - 1,
+    STYLE.small,
+  );
 }

@@ -23,12 +23,26 @@ export function signOff(flow: Flow, sheet: AssemblySheet): void {
   const said = sheet.approval
     ? `Installed to ${rev}, sign-off reference ${sheet.approval.reference}.`
     : `${rev} is ${NOT_APPROVED}. Sign below for a trial or review build only.`;
-  write(doc, said, x + PAD, y + PAD, { ...STYLE.bodyStrong, color: sheet.approval ? COLOUR.ink : COLOUR.caution }, { width: w - 2 * PAD });
+  write(
+    doc,
+    said,
+    x + PAD,
+    y + PAD,
+    { ...STYLE.bodyStrong, color: sheet.approval ? COLOUR.ink : COLOUR.caution },
+    { width: w - 2 * PAD },
+  );
   const labelW = 180;
   SIGN_OFF_LINES.forEach((label, i) => {
     const ly = y + PAD + 16 + i * LINE_H;
     write(doc, label, x + PAD, ly + LINE_H - 14, STYLE.body);
-    doc.save().lineWidth(0.6).strokeColor(COLOUR.ink).moveTo(x + PAD + labelW, ly + LINE_H - 4).lineTo(x + w - PAD, ly + LINE_H - 4).stroke().restore();
+    doc
+      .save()
+      .lineWidth(0.6)
+      .strokeColor(COLOUR.ink)
+      .moveTo(x + PAD + labelW, ly + LINE_H - 4)
+      .lineTo(x + w - PAD, ly + LINE_H - 4)
+      .stroke()
+      .restore();
   });
   flow.y += h;
 }

@@ -59,21 +59,39 @@ const AROUND = ["centre", "end", "start"] as const;
 
 export const within = (x: number, r: StripRange) => x >= r.x0 - 1e-6 && x <= r.x1 + 1e-6;
 
-export function layoutStrip(doc: PDFKit.PDFDocument, sheet: AssemblySheet, run: SheetRun, place: StripPlace): StripLayout {
+export function layoutStrip(
+  doc: PDFKit.PDFDocument,
+  sheet: AssemblySheet,
+  run: SheetRun,
+  place: StripPlace,
+): StripLayout {
   const { range, k, origin, bounds } = place;
   const label = (at: number, name: string, anchors: Label["anchors"]): Label => {
     // Dual dimensions stacked, the inches in brackets under the millimetres: narrow labels crowd less.
     const p = lengthParts(at);
-    const lines = [{ text: name, style: NAME }, { text: p.mm, style: FIGURE }, ...(sheet.inches ? [{ text: `(${p.inches})`, style: FIGURE }] : [])];
+    const lines = [
+      { text: name, style: NAME },
+      { text: p.mm, style: FIGURE },
+      ...(sheet.inches ? [{ text: `(${p.inches})`, style: FIGURE }] : []),
+    ];
     const widths = lines.map((l) => widthOf(doc, l.text, l.style));
     // A label that may run either way keeps its name centred on the station (see plan-strip.ts).
     const head = anchors.length > 1 ? widths[0] : undefined;
-    return { at, x: origin + (at - range.x0) * k, lines, anchors, head, width: Math.max(...(head === undefined ? widths : widths.slice(1))) };
+    return {
+      at,
+      x: origin + (at - range.x0) * k,
+      lines,
+      anchors,
+      head,
+      width: Math.max(...(head === undefined ? widths : widths.slice(1))),
+    };
   };
 
   const above: Label[] = [];
   if (range.x0 === 0) above.push(label(0, "DATUM  x = 0", ["start"]));
-  for (const j of sheet.joints) if (within(j.station, range) && j.station > 0 && j.station < run.length) above.push(label(j.station, `${j.between[0]}/${j.between[1]}`, AROUND));
+  for (const j of sheet.joints)
+    if (within(j.station, range) && j.station > 0 && j.station < run.length)
+      above.push(label(j.station, `${j.between[0]}/${j.between[1]}`, AROUND));
   if (Math.abs(range.x1 - run.length) < 1e-6) above.push(label(run.length, "END OF RUN", ["end"]));
   above.sort((a, b) => a.x - b.x);
   const below = run.supports.flatMap((s, i) => (within(s, range) ? [label(s, `S${i + 1}`, AROUND)] : []));

@@ -46,10 +46,15 @@ function measure<Row>(doc: PDFKit.PDFDocument, width: number, columns: Column<Ro
   const total = columns.reduce((s, c) => s + c.share, 0);
   const widths = columns.map((c) => (c.share / total) * width);
   const inner = (i: number) => widths[i] - 2 * PAD_X;
-  const headerHeight = Math.max(...columns.map((c, i) => heightOf(doc, c.header, STYLE.cellHead, inner(i)))) + 2 * PAD_Y;
+  const headerHeight =
+    Math.max(...columns.map((c, i) => heightOf(doc, c.header, STYLE.cellHead, inner(i)))) + 2 * PAD_Y;
   const rowHeight = (row: Row) =>
     Math.max(
-      ...columns.map((c, i) => (c.drawn ? c.drawn.height(row, inner(i)) : heightOf(doc, c.text?.(row) ?? "", c.style ?? STYLE.cell, inner(i), 0.5))),
+      ...columns.map((c, i) =>
+        c.drawn
+          ? c.drawn.height(row, inner(i))
+          : heightOf(doc, c.text?.(row) ?? "", c.style ?? STYLE.cell, inner(i), 0.5),
+      ),
     ) +
     2 * PAD_Y;
   return { widths, headerHeight, heights: rows.map(rowHeight) };
@@ -68,18 +73,36 @@ export function table<Row>(flow: Flow, columns: Column<Row>[], rows: Row[], opts
   const inner = (i: number) => widths[i] - 2 * PAD_X;
 
   const rule = (y: number, colour: string, width: number) =>
-    doc.save().lineWidth(width).strokeColor(colour).moveTo(flow.left, y).lineTo(flow.left + flow.width, y).stroke().restore();
+    doc
+      .save()
+      .lineWidth(width)
+      .strokeColor(colour)
+      .moveTo(flow.left, y)
+      .lineTo(flow.left + flow.width, y)
+      .stroke()
+      .restore();
   const verticals = (y0: number, y1: number) => {
     doc.save().lineWidth(0.4).strokeColor(COLOUR.inkLine);
     for (const x of xs.slice(1)) doc.moveTo(x, y0).lineTo(x, y1).stroke();
     doc.restore();
-    doc.save().lineWidth(0.9).strokeColor(COLOUR.ink).moveTo(flow.left, y0).lineTo(flow.left, y1).moveTo(flow.left + flow.width, y0).lineTo(flow.left + flow.width, y1).stroke().restore();
+    doc
+      .save()
+      .lineWidth(0.9)
+      .strokeColor(COLOUR.ink)
+      .moveTo(flow.left, y0)
+      .lineTo(flow.left, y1)
+      .moveTo(flow.left + flow.width, y0)
+      .lineTo(flow.left + flow.width, y1)
+      .stroke()
+      .restore();
   };
 
   const header = () => {
     const y = flow.y;
     doc.save().rect(flow.left, y, flow.width, headerHeight).fill(COLOUR.paperDeep).restore();
-    columns.forEach((c, i) => write(doc, c.header, xs[i] + PAD_X, y + PAD_Y, STYLE.cellHead, { width: inner(i), align: c.align }));
+    columns.forEach((c, i) =>
+      write(doc, c.header, xs[i] + PAD_X, y + PAD_Y, STYLE.cellHead, { width: inner(i), align: c.align }),
+    );
     rule(y, COLOUR.ink, 0.9);
     verticals(y, y + headerHeight);
     rule(y + headerHeight, COLOUR.ink, 0.6);
@@ -103,10 +126,18 @@ export function table<Row>(flow: Flow, columns: Column<Row>[], rows: Row[], opts
     columns.forEach((c, i) => {
       const box = { x: xs[i] + PAD_X, y: y + PAD_Y, w: inner(i), h: h - 2 * PAD_Y };
       if (c.drawn) c.drawn.paint(doc, row, box);
-      else write(doc, c.text?.(row) ?? "", box.x, box.y, c.style ?? STYLE.cell, { width: box.w, align: c.align, lineGap: 0.5 });
+      else
+        write(doc, c.text?.(row) ?? "", box.x, box.y, c.style ?? STYLE.cell, {
+          width: box.w,
+          align: c.align,
+          lineGap: 0.5,
+        });
     });
     verticals(y, y + h);
-    const last = r === n - 1 || heights[r + 1] > flow.room - h || (r + 1 === n - 2 && heights[r + 1] + heights[n - 1] > flow.room - h);
+    const last =
+      r === n - 1 ||
+      heights[r + 1] > flow.room - h ||
+      (r + 1 === n - 2 && heights[r + 1] + heights[n - 1] > flow.room - h);
     rule(y + h, last ? COLOUR.ink : COLOUR.inkLine, last ? 0.9 : 0.4);
     flow.y += h;
   });

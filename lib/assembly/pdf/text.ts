@@ -35,7 +35,14 @@ function setStyle(doc: PDFKit.PDFDocument, s: TextStyle): void {
 }
 
 /** Writes the text with its top at y; returns the height it took. */
-export function write(doc: PDFKit.PDFDocument, text: string, x: number, y: number, s: TextStyle, o: WriteOptions = {}): number {
+export function write(
+  doc: PDFKit.PDFDocument,
+  text: string,
+  x: number,
+  y: number,
+  s: TextStyle,
+  o: WriteOptions = {},
+): number {
   setStyle(doc, s);
   const t = printable(text);
   if (o.width === undefined) {
@@ -59,7 +66,15 @@ export function heightOf(doc: PDFKit.PDFDocument, text: string, s: TextStyle, wi
 }
 
 /** Writes one line centred on x, kept between lo and hi; returns the left edge it used. */
-export function writeCentred(doc: PDFKit.PDFDocument, text: string, x: number, y: number, s: TextStyle, lo = -Infinity, hi = Infinity): number {
+export function writeCentred(
+  doc: PDFKit.PDFDocument,
+  text: string,
+  x: number,
+  y: number,
+  s: TextStyle,
+  lo = -Infinity,
+  hi = Infinity,
+): number {
   const w = widthOf(doc, text, s);
   const left = Math.min(Math.max(x - w / 2, lo), hi - w);
   write(doc, text, left, y, s);

@@ -40,12 +40,34 @@ export function titleBlock(flow: Flow, rows: TitleCell[][]): void {
       let y = flow.y + PAD;
       y += write(doc, c.label.toUpperCase(), x + PAD, y, STYLE.label, { width: w - 2 * PAD }) + 2;
       for (const l of c.lines) y += write(doc, l.text, x + PAD, y, l.style, { width: w - 2 * PAD, lineGap: 0.5 });
-      if (x > x0) doc.save().lineWidth(0.5).strokeColor(COLOUR.ink).moveTo(x, flow.y).lineTo(x, flow.y + heights[r]).stroke().restore();
+      if (x > x0)
+        doc
+          .save()
+          .lineWidth(0.5)
+          .strokeColor(COLOUR.ink)
+          .moveTo(x, flow.y)
+          .lineTo(x, flow.y + heights[r])
+          .stroke()
+          .restore();
       x += w;
     }
     flow.y += heights[r];
-    if (r < rows.length - 1) doc.save().lineWidth(0.5).strokeColor(COLOUR.ink).moveTo(x0, flow.y).lineTo(x0 + W, flow.y).stroke().restore();
+    if (r < rows.length - 1)
+      doc
+        .save()
+        .lineWidth(0.5)
+        .strokeColor(COLOUR.ink)
+        .moveTo(x0, flow.y)
+        .lineTo(x0 + W, flow.y)
+        .stroke()
+        .restore();
   });
   // The outer frame heavier than the inner rules, as on a drawing sheet.
-  doc.save().lineWidth(1.4).strokeColor(COLOUR.ink).rect(x0, top, W, flow.y - top).stroke().restore();
+  doc
+    .save()
+    .lineWidth(1.4)
+    .strokeColor(COLOUR.ink)
+    .rect(x0, top, W, flow.y - top)
+    .stroke()
+    .restore();
 }

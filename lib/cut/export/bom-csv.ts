@@ -22,13 +22,31 @@ function sheetsOf(id: string, nest: Pick<SheetNestResult, "sheets" | "unplaced">
   return [on.join(", "), left ? `${left} unplaced` : ""].filter(Boolean).join("; ");
 }
 
-export function bomCsv(parts: Part[], opts: { material: string; thickness: number; units: OutputUnits; nest: Pick<SheetNestResult, "sheets" | "unplaced"> | null }): string {
+export function bomCsv(
+  parts: Part[],
+  opts: {
+    material: string;
+    thickness: number;
+    units: OutputUnits;
+    nest: Pick<SheetNestResult, "sheets" | "unplaced"> | null;
+  },
+): string {
   const u = opts.units;
   const n = (mm: number) => String(Number(fromMm(mm, u).toFixed(u === "in" ? 3 : 1)));
   const rows = [csvRow(["part", "name", "material", `thickness (${u})`, "sheet", `size L×W (${u})`, "quantity"])];
   for (const p of parts) {
     const b = bounds(p.region.outer);
-    rows.push(csvRow([p.id, p.name, opts.material, n(opts.thickness), sheetsOf(p.id, opts.nest), `${n(boxWidth(b))} × ${n(boxHeight(b))}`, p.quantity]));
+    rows.push(
+      csvRow([
+        p.id,
+        p.name,
+        opts.material,
+        n(opts.thickness),
+        sheetsOf(p.id, opts.nest),
+        `${n(boxWidth(b))} × ${n(boxHeight(b))}`,
+        p.quantity,
+      ]),
+    );
   }
   return rows.join("\r\n") + "\r\n";
 }

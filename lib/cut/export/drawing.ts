@@ -45,7 +45,10 @@ const key = (p: readonly [number, number]) => `${Math.round(p[0] * 1000)},${Math
 /** Cap height of the REFERENCE notes, mm, and the gap between lines and above the drawing. */
 const NOTE_HEIGHT = 10;
 
-export function buildDrawing(placed: PlacedPart[], opts: { units: OutputUnits; toolPaths?: Map<string, ToolPath>; frames?: Box[]; notes?: string[] }): Drawing {
+export function buildDrawing(
+  placed: PlacedPart[],
+  opts: { units: OutputUnits; toolPaths?: Map<string, ToolPath>; frames?: Box[]; notes?: string[] },
+): Drawing {
   const u = (v: number) => fromMm(v, opts.units);
   const U = (p: Pt): Pt => [u(p[0]), u(p[1])];
   const rings: Drawing["rings"] = [];
@@ -61,7 +64,10 @@ export function buildDrawing(placed: PlacedPart[], opts: { units: OutputUnits; t
     const k = r.map(key).sort().join(";");
     // Two identical outlines mean two copies drawn on top of each other: a nesting fault to stop
     // on, not to hide by dropping one.
-    if (seenRings.has(k)) throw new Error(`Two ${layer} outlines lie exactly on top of each other near (${r[0][0].toFixed(1)}, ${r[0][1].toFixed(1)}) mm: the layout overlaps two parts.`);
+    if (seenRings.has(k))
+      throw new Error(
+        `Two ${layer} outlines lie exactly on top of each other near (${r[0][0].toFixed(1)}, ${r[0][1].toFixed(1)}) mm: the layout overlaps two parts.`,
+      );
     seenRings.add(k);
     all.push(...r);
     rings.push({ layer, points: r.map(U) });
@@ -107,7 +113,15 @@ export function buildDrawing(placed: PlacedPart[], opts: { units: OutputUnits; t
   texts.reverse();
   // The notes' width, estimated at 0.6 cap heights a character (common practice for a monospace face).
   const notesWidth = Math.max(0, ...texts.map((t) => t.x + 0.6 * t.height * t.text.length));
-  return { units: opts.units, width: Math.max(u(Math.max(0, b.maxX)), notesWidth), height: u(top), rings, circles, lines, texts };
+  return {
+    units: opts.units,
+    width: Math.max(u(Math.max(0, b.maxX)), notesWidth),
+    height: u(top),
+    rings,
+    circles,
+    lines,
+    texts,
+  };
 }
 
 /** Each part once, left to right along one row, `gap` mm apart, all above y = 0. */
@@ -133,7 +147,12 @@ export function sheetParts(parts: Part[], placements: SheetPlacement[], offset: 
 }
 
 /** Every sheet of a nest stacked one above the other, `gap` mm apart, with their outlines. */
-export function stackedSheets(parts: Part[], nest: Pick<SheetNestResult, "sheets">, sheet: { length: number; width: number }, gap: number): { placed: PlacedPart[]; frames: Box[] } {
+export function stackedSheets(
+  parts: Part[],
+  nest: Pick<SheetNestResult, "sheets">,
+  sheet: { length: number; width: number },
+  gap: number,
+): { placed: PlacedPart[]; frames: Box[] } {
   const placed: PlacedPart[] = [];
   const frames: Box[] = [];
   nest.sheets.forEach((s, i) => {

@@ -7,7 +7,13 @@ import { DxfWriter, LWPolylineFlags, Units } from "@tarikjabiri/dxf";
 import { LAYERS, type Drawing, type LayerName } from "./drawing";
 
 /** AutoCAD Color Index per layer (ACI 5 blue, 4 cyan, 6 magenta, 3 green, 8 grey). */
-export const LAYER_ACI: Record<LayerName, number> = { CUT_OUTSIDE: 5, CUT_INSIDE: 4, DRILL: 6, ENGRAVE: 3, REFERENCE: 8 };
+export const LAYER_ACI: Record<LayerName, number> = {
+  CUT_OUTSIDE: 5,
+  CUT_INSIDE: 4,
+  DRILL: 6,
+  ENGRAVE: 3,
+  REFERENCE: 8,
+};
 
 export function drawingToDxf(d: Drawing): string {
   const dxf = new DxfWriter();
@@ -24,6 +30,7 @@ export function drawingToDxf(d: Drawing): string {
     );
   for (const c of d.circles) dxf.addCircle({ x: c.x, y: c.y, z: 0 }, c.r, { layerName: c.layer });
   for (const t of d.texts) dxf.addText({ x: t.x, y: t.y, z: 0 }, t.height, t.text, { layerName: t.layer });
-  for (const l of d.lines) dxf.addLine({ x: l.a[0], y: l.a[1], z: 0 }, { x: l.b[0], y: l.b[1], z: 0 }, { layerName: l.layer });
+  for (const l of d.lines)
+    dxf.addLine({ x: l.a[0], y: l.a[1], z: 0 }, { x: l.b[0], y: l.b[1], z: 0 }, { layerName: l.layer });
   return dxf.stringify();
 }

@@ -61,7 +61,9 @@ export function loadsOf(j: JobInput): LoadsReport {
  */
 export function revisionBaseName(revision: number, ...names: string[]): string {
   const head = `r${revision}`;
-  const rest = slugPart(names.join(" ")).slice(0, 60 - head.length - 1).replace(/-+$/, "");
+  const rest = slugPart(names.join(" "))
+    .slice(0, 60 - head.length - 1)
+    .replace(/-+$/, "");
   return rest ? `${head}-${rest}` : head;
 }
 
@@ -94,7 +96,11 @@ export function jobTextFiles(j: JobInput): JobTextFiles {
   // Every drawing carries the approval (or its absence) on REFERENCE, which is never cut.
   const notes = [approvalLine(stamp, { ascii: true }), revisionNote];
   const titled = (what: string) => `${s.project ? `${s.project}: ` : ""}${what} — ${approvalLine(stamp)}`;
-  const row = buildDrawing(partsRow(j.plan.parts, { gap: 20 + s.machine.kerf, toolPaths: j.toolPaths }), { units: u, toolPaths, notes });
+  const row = buildDrawing(partsRow(j.plan.parts, { gap: 20 + s.machine.kerf, toolPaths: j.toolPaths }), {
+    units: u,
+    toolPaths,
+    notes,
+  });
   files.push({ name: `${base}-parts-${u}.dxf`, data: drawingToDxf(row) });
   files.push({ name: `${base}-parts-${u}.svg`, data: drawingToSvg(row, { title: titled("parts") }) });
   previews.push({ name: `${base}-parts-preview.png`, svg: drawingToSvg(row, { preview: true }) });
@@ -110,7 +116,10 @@ export function jobTextFiles(j: JobInput): JobTextFiles {
     files.push({ name: `${base}-sheet-${n}-${u}.svg`, data: drawingToSvg(d, { title: titled(`sheet ${n}`) }) });
     previews.push({ name: `${base}-sheet-${n}-preview.png`, svg: drawingToSvg(d, { preview: true }) });
   }
-  files.push({ name: `${base}-bom.csv`, data: bomCsv(j.plan.parts, { material: s.material, thickness: s.sheet.thickness, units: u, nest: j.nest }) });
+  files.push({
+    name: `${base}-bom.csv`,
+    data: bomCsv(j.plan.parts, { material: s.material, thickness: s.sheet.thickness, units: u, nest: j.nest }),
+  });
   const names = [...files.map((f) => f.name), ...previews.map((p) => p.name), "README.txt"].sort();
   files.push({
     name: "README.txt",

@@ -30,18 +30,24 @@ export function drawingToSvg(d: Drawing, opts: { preview?: boolean; title?: stri
   if (opts.title) out.push(`<title>${escapeXml(opts.title)}</title>`);
   if (opts.preview) {
     out.push(`<rect x="0" y="0" width="${f(d.width)}" height="${f(d.height)}" fill="#f5efe0"/>`);
-    const fill = d.rings.filter((r) => r.layer === "CUT_OUTSIDE" || r.layer === "CUT_INSIDE").map((r) => ringPath(r.points, P)).join("");
+    const fill = d.rings
+      .filter((r) => r.layer === "CUT_OUTSIDE" || r.layer === "CUT_INSIDE")
+      .map((r) => ringPath(r.points, P))
+      .join("");
     if (fill) out.push(`<path d="${fill}" fill="#dfe6f2" fill-rule="evenodd" stroke="none"/>`);
   }
   for (const layer of LAYERS) {
     const body: string[] = [];
     for (const r of d.rings) if (r.layer === layer) body.push(`<path d="${ringPath(r.points, P)}"/>`);
-    for (const c of d.circles) if (c.layer === layer) body.push(`<circle cx="${f(c.x)}" cy="${f(H - c.y)}" r="${f(c.r)}"/>`);
+    for (const c of d.circles)
+      if (c.layer === layer) body.push(`<circle cx="${f(c.x)}" cy="${f(H - c.y)}" r="${f(c.r)}"/>`);
     const segs = d.lines.filter((l) => l.layer === layer).map((l) => `M${P(l.a[0], l.a[1])}L${P(l.b[0], l.b[1])}`);
     if (segs.length) body.push(`<path d="${segs.join("")}"/>`);
     for (const t of d.texts)
       if (t.layer === layer)
-        body.push(`<text x="${f(t.x)}" y="${f(H - t.y)}" font-size="${f(t.height * 1.4)}" font-family="IBM Plex Mono, DejaVu Sans Mono, monospace" fill="${LAYER_COLOUR[layer]}" stroke="none">${escapeXml(t.text)}</text>`);
+        body.push(
+          `<text x="${f(t.x)}" y="${f(H - t.y)}" font-size="${f(t.height * 1.4)}" font-family="IBM Plex Mono, DejaVu Sans Mono, monospace" fill="${LAYER_COLOUR[layer]}" stroke="none">${escapeXml(t.text)}</text>`,
+        );
     out.push(
       `<g id="${layer}" fill="none" stroke="${LAYER_COLOUR[layer]}" stroke-width="${f(stroke)}" stroke-linejoin="round" stroke-linecap="round"${layer === "REFERENCE" && !opts.preview ? ' stroke-dasharray="5 5"' : ""}>`,
     );

@@ -15,7 +15,10 @@ export async function jobFiles(j: JobInput, opts: { pngWidth?: number } = {}): P
 /** A ZIP stream of the given files (pipe it to a response or a file). */
 export function zipStream(files: JobFile[], folder = ""): ZipArchive {
   const zip = new ZipArchive({ zlib: { level: 9 } });
-  for (const f of files) zip.append(typeof f.data === "string" ? Buffer.from(f.data, "utf8") : f.data, { name: folder ? `${folder}/${f.name}` : f.name });
+  for (const f of files)
+    zip.append(typeof f.data === "string" ? Buffer.from(f.data, "utf8") : f.data, {
+      name: folder ? `${folder}/${f.name}` : f.name,
+    });
   void zip.finalize();
   return zip;
 }

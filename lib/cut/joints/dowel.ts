@@ -24,7 +24,15 @@ export function jointHoles(s: number, yc: number, settings: CutSettings): { left
 
 export function splicePlate(settings: CutSettings, id: string, quantity: number): Part {
   const g = spliceGeometry(settings);
-  const region: Region = { outer: [[0, 0], [g.length, 0], [g.length, g.height], [0, g.height]], holes: [] };
+  const region: Region = {
+    outer: [
+      [0, 0],
+      [g.length, 0],
+      [g.length, g.height],
+      [0, g.height],
+    ],
+    holes: [],
+  };
   const yc = g.height / 2;
   const drill: DrillHole[] = [];
   for (const o of [...g.offsets].reverse()) drill.push({ x: g.half - o, y: yc, diameter: g.diameter });

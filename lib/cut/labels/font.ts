@@ -62,7 +62,8 @@ export function parseStrokePath(d: string): Pt[][] {
   while (i < tokens.length) {
     const t = tokens[i];
     if (/[A-Za-z]/.test(t)) {
-      if (t !== "M" && t !== "L" && t !== "C") throw new Error(`The font's glyph paths may hold only M, L and C commands, not "${t}".`);
+      if (t !== "M" && t !== "L" && t !== "C")
+        throw new Error(`The font's glyph paths may hold only M, L and C commands, not "${t}".`);
       cmd = t;
       i++;
       continue;
@@ -82,7 +83,10 @@ export function parseStrokePath(d: string): Pt[][] {
         const u = j / 16;
         const v = 1 - u;
         const b = [v * v * v, 3 * v * v * u, 3 * v * u * u, u * u * u];
-        s.push([b[0] * p0[0] + b[1] * p1[0] + b[2] * p2[0] + b[3] * p3[0], b[0] * p0[1] + b[1] * p1[1] + b[2] * p2[1] + b[3] * p3[1]]);
+        s.push([
+          b[0] * p0[0] + b[1] * p1[0] + b[2] * p2[0] + b[3] * p3[0],
+          b[0] * p0[1] + b[1] * p1[1] + b[2] * p2[1] + b[3] * p3[1],
+        ]);
       }
     } else throw new Error(`Bad glyph path: "${d.slice(0, 60)}".`);
   }
@@ -111,5 +115,13 @@ export function parseSvgFont(svg: string): GlyphTable {
   }
   const H = glyphs.get("H");
   const capHeight = H ? Math.max(...H.strokes.flat().map((p) => p[1])) : Number(face["cap-height"] ?? 0.7 * unitsPerEm);
-  return { unitsPerEm, ascent: Number(face.ascent ?? 0.8 * unitsPerEm), descent: Number(face.descent ?? -0.2 * unitsPerEm), capHeight, defaultAdvance, glyphs, skipped };
+  return {
+    unitsPerEm,
+    ascent: Number(face.ascent ?? 0.8 * unitsPerEm),
+    descent: Number(face.descent ?? -0.2 * unitsPerEm),
+    capHeight,
+    defaultAdvance,
+    glyphs,
+    skipped,
+  };
 }

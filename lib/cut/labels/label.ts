@@ -29,14 +29,24 @@ export interface PlacedLabel {
   missing: string[];
 }
 
-export function placeLabel(font: GlyphTable, region: Region, drill: DrillHole[], req: LabelRequest): PlacedLabel | null {
+export function placeLabel(
+  font: GlyphTable,
+  region: Region,
+  drill: DrillHole[],
+  req: LabelRequest,
+): PlacedLabel | null {
   const variants = req.lines.length > 1 ? [req.lines, req.lines.slice(-1)] : [req.lines];
   for (const lines of variants) {
     for (let h = req.maxHeight; h >= req.minHeight - 1e-9; h *= 0.8) {
       const block = layoutBlock(font, lines, h, req.arrow);
       const w = block.box.maxX;
       const bh = block.box.maxY;
-      const at = findSpot(region, drill, w, bh, { margin: req.margin, prefer: req.prefer, step: Math.max(1, h / 2), within: req.within });
+      const at = findSpot(region, drill, w, bh, {
+        margin: req.margin,
+        prefer: req.prefer,
+        step: Math.max(1, h / 2),
+        within: req.within,
+      });
       if (at)
         return {
           strokes: block.strokes.map((s) => s.map(([x, y]): Pt => [x + at[0], y + at[1]])),

@@ -9,7 +9,13 @@ import { pointInRing } from "@/lib/geometry/ring";
 import type { DrillHole, Region } from "../types";
 
 function segmentHitsBox(a: Pt, b: Pt, r: Box): boolean {
-  if (Math.max(a[0], b[0]) < r.minX || Math.min(a[0], b[0]) > r.maxX || Math.max(a[1], b[1]) < r.minY || Math.min(a[1], b[1]) > r.maxY) return false;
+  if (
+    Math.max(a[0], b[0]) < r.minX ||
+    Math.min(a[0], b[0]) > r.maxX ||
+    Math.max(a[1], b[1]) < r.minY ||
+    Math.min(a[1], b[1]) > r.maxY
+  )
+    return false;
   const inside = (p: Pt) => p[0] >= r.minX && p[0] <= r.maxX && p[1] >= r.minY && p[1] <= r.maxY;
   if (inside(a) || inside(b)) return true;
   // Liang–Barsky clipping of the segment against the box.
@@ -29,7 +35,13 @@ function segmentHitsBox(a: Pt, b: Pt, r: Box): boolean {
     }
     return true;
   };
-  return clip(-dx, a[0] - r.minX) && clip(dx, r.maxX - a[0]) && clip(-dy, a[1] - r.minY) && clip(dy, r.maxY - a[1]) && t0 <= t1;
+  return (
+    clip(-dx, a[0] - r.minX) &&
+    clip(dx, r.maxX - a[0]) &&
+    clip(-dy, a[1] - r.minY) &&
+    clip(dy, r.maxY - a[1]) &&
+    t0 <= t1
+  );
 }
 
 function ringHitsBox(ring: Pt[], r: Box): boolean {
@@ -55,7 +67,13 @@ export function boxFits(box: Box, region: Region, drill: DrillHole[], margin: nu
 }
 
 /** The lower-left corner of a w × h box that fits (inside `within` too, if given), nearest `prefer` (the box's centre), or null. */
-export function findSpot(region: Region, drill: DrillHole[], w: number, h: number, opts: { margin: number; prefer: Pt; step?: number; maxTries?: number; within?: Box }): Pt | null {
+export function findSpot(
+  region: Region,
+  drill: DrillHole[],
+  w: number,
+  h: number,
+  opts: { margin: number; prefer: Pt; step?: number; maxTries?: number; within?: Box },
+): Pt | null {
   const r = bounds(region.outer);
   const b = opts.within ? intersection(r, opts.within) : r;
   const step = opts.step ?? Math.max(0.5, Math.min(w, h) / 2);

@@ -36,8 +36,15 @@ export function arrowStrokes(length: number, height: number): Pt[][] {
   const y = height / 2;
   const head = Math.min(height / 2, length / 3);
   return [
-    [[0, y], [length, y]],
-    [[length - head, y + head], [length, y], [length - head, y - head]],
+    [
+      [0, y],
+      [length, y],
+    ],
+    [
+      [length - head, y + head],
+      [length, y],
+      [length - head, y - head],
+    ],
   ];
 }
 

@@ -24,11 +24,7 @@ function ellipseRay(a: number, b: number, px: number, py: number): (t: number) =
   };
 }
 
-export function ellipseWheel(
-  a: number,
-  b: number,
-  axle: "focus" | "centre" | { x: number; y: number },
-): Wheel {
+export function ellipseWheel(a: number, b: number, axle: "focus" | "centre" | { x: number; y: number }): Wheel {
   const c = Math.sqrt(Math.max(0, a * a - b * b));
   const [px, py] = axle === "focus" ? [0, -c] : axle === "centre" ? [0, 0] : [axle.x, axle.y];
   if ((px * px) / (b * b) + (py * py) / (a * a) >= 1)
@@ -42,6 +38,10 @@ export function ellipseWheel(
 /** Circle of radius R whose centre sits `offset` above the axle in the start pose. */
 export function circleWheel(R: number, offset: number): Wheel {
   if (offset >= R)
-    throw new EngineError("invalid-wheel", `The axle offset (${offset}) must be smaller than the radius (${R}).`, "wheel.axleOffset");
+    throw new EngineError(
+      "invalid-wheel",
+      `The axle offset (${offset}) must be smaller than the radius (${R}).`,
+      "wheel.axleOffset",
+    );
   return ellipseWheel(R, R, { x: 0, y: offset });
 }

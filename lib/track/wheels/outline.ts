@@ -16,7 +16,8 @@ export function outlineWheel(points: ReadonlyArray<readonly [number, number]>, a
   const size = Math.max(...q.map(([x, y]) => Math.hypot(x, y)));
   const same = (p: [number, number], r: [number, number]) => Math.hypot(p[0] - r[0], p[1] - r[1]) <= 1e-12 * size;
   q = q.filter((p, i) => !same(p, q[(i + 1) % q.length]));
-  if (q.length < 3) throw new EngineError("invalid-wheel", "The outline needs at least three distinct points.", "wheel.points");
+  if (q.length < 3)
+    throw new EngineError("invalid-wheel", "The outline needs at least three distinct points.", "wheel.points");
   const n = q.length;
   const angle = (p: [number, number]) => Math.atan2(p[1], p[0]);
   const sweeps: number[] = [];
@@ -25,21 +26,37 @@ export function outlineWheel(points: ReadonlyArray<readonly [number, number]>, a
     const p = q[i];
     const r = q[(i + 1) % n];
     if (Math.hypot(p[0], p[1]) <= 1e-12 * size)
-      throw new EngineError("invalid-wheel", `The axle lies on the outline, at point ${i} (${fmt(points[i][0])}, ${fmt(points[i][1])}).`, `wheel.points[${i}]`);
+      throw new EngineError(
+        "invalid-wheel",
+        `The axle lies on the outline, at point ${i} (${fmt(points[i][0])}, ${fmt(points[i][1])}).`,
+        `wheel.points[${i}]`,
+      );
     const cross = p[0] * r[1] - p[1] * r[0];
     const dist = Math.abs(cross) / Math.hypot(r[0] - p[0], r[1] - p[1]);
     let s = angle(r) - angle(p);
     if (s > Math.PI) s -= TAU;
     if (s <= -Math.PI) s += TAU;
     if (dist <= 1e-12 * size && p[0] * r[0] + p[1] * r[1] < 0)
-      throw new EngineError("invalid-wheel", `The outline passes through the axle between points ${i} and ${(i + 1) % n}.`, `wheel.points[${i}]`);
+      throw new EngineError(
+        "invalid-wheel",
+        `The outline passes through the axle between points ${i} and ${(i + 1) % n}.`,
+        `wheel.points[${i}]`,
+      );
     sweeps.push(s);
     total += s;
   }
   if (Math.abs(total) < Math.PI)
-    throw new EngineError("invalid-wheel", `The axle (${fmt(axle.x)}, ${fmt(axle.y)}) is outside the outline.`, "wheel.axle");
+    throw new EngineError(
+      "invalid-wheel",
+      `The axle (${fmt(axle.x)}, ${fmt(axle.y)}) is outside the outline.`,
+      "wheel.axle",
+    );
   if (Math.abs(Math.abs(total) - TAU) > 1e-6)
-    throw new EngineError("invalid-wheel", `The outline winds ${fmt(Math.abs(total) / TAU)} times around the axle; it must go round exactly once.`, "wheel.points");
+    throw new EngineError(
+      "invalid-wheel",
+      `The outline winds ${fmt(Math.abs(total) / TAU)} times around the axle; it must go round exactly once.`,
+      "wheel.points",
+    );
   const orient = total > 0 ? 1 : -1;
   for (let i = 0; i < n; i++) {
     if (orient * sweeps[i] <= 0) {
@@ -92,5 +109,8 @@ export function outlineWheel(points: ReadonlyArray<readonly [number, number]>, a
     if (p.b > TAU) wrapped.push(p.sub(p.a, TAU), p.sub(0, p.b - TAU));
     else wrapped.push(p);
   }
-  return makeWheel(wrapped.filter((p) => p.b > p.a).sort((a, b) => a.a - b.a), kinks);
+  return makeWheel(
+    wrapped.filter((p) => p.b > p.a).sort((a, b) => a.a - b.a),
+    kinks,
+  );
 }

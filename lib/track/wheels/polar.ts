@@ -19,13 +19,21 @@ export function polarWheel(source: string): Wheel {
     if (!Number.isFinite(v))
       throw new EngineError("bad-formula", `r is not a finite number at theta = ${t.toFixed(4)} (r = ${v}).`, where);
     if (v <= 0)
-      throw new EngineError("bad-formula", `r must be positive over the whole turn, but r = ${v.toPrecision(6)} at theta = ${t.toFixed(4)}.`, where);
+      throw new EngineError(
+        "bad-formula",
+        `r must be positive over the whole turn, but r = ${v.toPrecision(6)} at theta = ${t.toFixed(4)}.`,
+        where,
+      );
     rMax = Math.max(rMax, v);
   }
   const r0 = f(0);
   const r1 = f(TAU);
   if (Math.abs(r1 - r0) > 1e-9 * rMax)
-    throw new EngineError("bad-formula", `The wheel does not close: r(0) = ${r0.toPrecision(8)} but r(2π) = ${r1.toPrecision(8)}.`, where);
+    throw new EngineError(
+      "bad-formula",
+      `The wheel does not close: r(0) = ${r0.toPrecision(8)} but r(2π) = ${r1.toPrecision(8)}.`,
+      where,
+    );
   // Evaluate at the wrapped angle so the piece sees t ∈ [0, 2π] only.
   return makeWheel([smoothPiece("smooth", f, 0, TAU)], []);
 }

@@ -39,7 +39,11 @@ export function polygonWheel(p: PolygonInput): Wheel {
   const A = polygonInradius(p);
   const rho = p.cornerRadius ?? 0;
   if (rho >= A)
-    throw new EngineError("invalid-wheel", `The corner radius (${rho}) must be smaller than the inradius (${A}).`, "wheel.cornerRadius");
+    throw new EngineError(
+      "invalid-wheel",
+      `The corner radius (${rho}) must be smaller than the inradius (${A}).`,
+      "wheel.cornerRadius",
+    );
   const half = Math.PI / n;
   const pieces: WheelPiece[] = [];
   const corners: number[] = [];

@@ -13,7 +13,8 @@ export class ComparePage {
     const escaped = label.replace(/[.*+?^${}()|[\]\\]/g, "\\$&");
     const row = this.page.getByRole("row", { name: new RegExp(`^${escaped} `) });
     const cells = await row.getByRole("cell").allInnerTexts();
-    if (cells.length !== 3) throw new Error(`the figure "${label}" has ${cells.length} cells, not a label and two values`);
+    if (cells.length !== 3)
+      throw new Error(`the figure "${label}" has ${cells.length} cells, not a label and two values`);
     return [cells[1], cells[2]];
   }
 

@@ -28,7 +28,10 @@ export class CutPlanPage {
   }
 
   async waitForRunSummary(text: RegExp) {
-    await this.page.waitForFunction((source) => new RegExp(source).test(document.querySelector("[data-testid=run-summary]")?.textContent ?? ""), text.source);
+    await this.page.waitForFunction(
+      (source) => new RegExp(source).test(document.querySelector("[data-testid=run-summary]")?.textContent ?? ""),
+      text.source,
+    );
   }
 
   async nest(seconds: number) {

@@ -28,7 +28,11 @@ export class LoadsPanel {
   /** The cautions as shown: signal word and which check raised them. */
   async cautions(): Promise<Array<{ signal: string; check: string; text: string }>> {
     return this.page.getByTestId("loads-caution").evaluateAll((items) =>
-      items.map((li) => ({ signal: li.getAttribute("data-signal") ?? "", check: li.getAttribute("data-check") ?? "", text: li.textContent ?? "" })),
+      items.map((li) => ({
+        signal: li.getAttribute("data-signal") ?? "",
+        check: li.getAttribute("data-check") ?? "",
+        text: li.textContent ?? "",
+      })),
     );
   }
 
@@ -36,7 +40,9 @@ export class LoadsPanel {
   async waitForCautions(want: { has?: string; lacks?: string }, timeoutMs = 60_000) {
     await this.page.waitForFunction(
       ({ has, lacks }) => {
-        const checks = [...document.querySelectorAll("[data-testid=loads-caution]")].map((li) => li.getAttribute("data-check"));
+        const checks = [...document.querySelectorAll("[data-testid=loads-caution]")].map((li) =>
+          li.getAttribute("data-check"),
+        );
         if (checks.length === 0) return false;
         return (has === undefined || checks.includes(has)) && (lacks === undefined || !checks.includes(lacks));
       },

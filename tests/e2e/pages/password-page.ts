@@ -22,7 +22,9 @@ export class PasswordPage {
     await this.page.getByLabel("New password again").fill(again);
     // The form answers through a server action (a POST with a Next-Action header); its state is
     // drawn once the button no longer reads "Saving…".
-    const answered = this.page.waitForResponse((r) => r.request().method() === "POST" && !!r.request().headers()["next-action"]);
+    const answered = this.page.waitForResponse(
+      (r) => r.request().method() === "POST" && !!r.request().headers()["next-action"],
+    );
     await this.page.getByRole("button", { name: "Save" }).click();
     await answered;
     await this.page.getByRole("button", { name: "Saving…" }).waitFor({ state: "detached" });

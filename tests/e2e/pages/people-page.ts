@@ -11,7 +11,12 @@ export class PeoplePage {
   }
 
   /** Adds an account (the app mails the person their welcome) and waits for the form's answer. */
-  async addPerson(o: { name: string; email: string; role: "admin" | "fabricator" | "client" | "installer"; password: string }) {
+  async addPerson(o: {
+    name: string;
+    email: string;
+    role: "admin" | "fabricator" | "client" | "installer";
+    password: string;
+  }) {
     const form = this.page.locator("form", { has: this.page.getByRole("button", { name: "Add person" }) });
     await form.getByLabel("Name").fill(o.name);
     await form.getByLabel("E-mail").fill(o.email);

@@ -5,7 +5,13 @@ import type { ReviewProbe } from "@/components/review/mock-up-probe";
 export class SendReviewForm {
   constructor(private readonly page: Page) {}
 
-  async send(o: { revision: string; message: string; runLength?: string; endTreatment?: string; deposit?: { amount: string; currency: string } }) {
+  async send(o: {
+    revision: string;
+    message: string;
+    runLength?: string;
+    endTreatment?: string;
+    deposit?: { amount: string; currency: string };
+  }) {
     const form = this.page.getByTestId("send-review-form");
     await form.getByLabel("Revision", { exact: true }).selectOption({ label: o.revision });
     await form.getByLabel("Message to the client").fill(o.message);
@@ -33,13 +39,21 @@ export class ReviewPage {
   }
 
   probe(): Promise<ReviewProbe | undefined> {
-    return this.page.evaluate(() => window.__axlewrightReview && { ...window.__axlewrightReview, axleTrace: [...window.__axlewrightReview.axleTrace] });
+    return this.page.evaluate(
+      () =>
+        window.__axlewrightReview && {
+          ...window.__axlewrightReview,
+          axleTrace: [...window.__axlewrightReview.axleTrace],
+        },
+    );
   }
 
   /** Waits until at least `frames` more frames have been drawn while playing. */
   async watch(frames: number) {
     const start = (await this.probe())?.frames ?? 0;
-    await this.page.waitForFunction((n) => (window.__axlewrightReview?.frames ?? 0) >= n, start + frames, { timeout: 30_000 });
+    await this.page.waitForFunction((n) => (window.__axlewrightReview?.frames ?? 0) >= n, start + frames, {
+      timeout: 30_000,
+    });
   }
 
   pause() {
@@ -47,7 +61,10 @@ export class ReviewPage {
   }
 
   async scrubTo(share: number) {
-    await this.page.getByRole("group", { name: "Playback" }).getByLabel("Position", { exact: true }).fill(String(share));
+    await this.page
+      .getByRole("group", { name: "Playback" })
+      .getByLabel("Position", { exact: true })
+      .fill(String(share));
   }
 
   /** Pins the next comment where the wheel is now (the keyboard-friendly way), then posts it. */

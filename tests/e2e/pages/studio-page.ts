@@ -19,7 +19,11 @@ export class StudioPage {
   }
 
   async waitForResult() {
-    await this.page.getByRole("heading", { name: "Parameters" }).or(this.page.getByText("No revision has been saved yet.")).first().waitFor();
+    await this.page
+      .getByRole("heading", { name: "Parameters" })
+      .or(this.page.getByText("No revision has been saved yet."))
+      .first()
+      .waitFor();
     await this.page.waitForFunction(() => (window.__axlewrightStudio?.frames ?? 0) > 0, undefined, { timeout: 30_000 });
   }
 
@@ -35,7 +39,11 @@ export class StudioPage {
 
   /** The value beside a readout label on the canvas ("period", "axle height", …). */
   async readout(label: string): Promise<string> {
-    return this.readoutList().locator("dt", { hasText: new RegExp(`^${label}$`) }).first().locator("xpath=following-sibling::dd[1]").innerText();
+    return this.readoutList()
+      .locator("dt", { hasText: new RegExp(`^${label}$`) })
+      .first()
+      .locator("xpath=following-sibling::dd[1]")
+      .innerText();
   }
 
   async readoutText(): Promise<string> {
@@ -44,10 +52,14 @@ export class StudioPage {
 
   /** Waits until the canvas readout no longer reads `before` (a new result has been drawn). */
   async waitForReadoutChange(before: string) {
-    await this.page.waitForFunction((text) => {
-      const now = document.querySelector("[data-studio-canvas] dl")?.textContent;
-      return now !== undefined && now !== text;
-    }, before, { timeout: 30_000 });
+    await this.page.waitForFunction(
+      (text) => {
+        const now = document.querySelector("[data-studio-canvas] dl")?.textContent;
+        return now !== undefined && now !== text;
+      },
+      before,
+      { timeout: 30_000 },
+    );
   }
 
   probe(): Promise<StudioProbe | undefined> {
@@ -78,7 +90,10 @@ export class StudioPage {
   /** Opens a saved revision from the list, read-only. */
   async openRevision(n: number) {
     await this.page.getByRole("link", { name: `R${n}`, exact: true }).click();
-    await this.page.getByTestId("read-only-badge").filter({ hasText: `R${n}` }).waitFor();
+    await this.page
+      .getByTestId("read-only-badge")
+      .filter({ hasText: `R${n}` })
+      .waitFor();
     await this.waitForResult();
   }
 

@@ -22,7 +22,11 @@ export interface AxeFinding {
 export async function auditPage(page: Page): Promise<AxeFinding[]> {
   if (!(await page.evaluate(() => "axe" in window))) await page.addScriptTag({ path: axeSource });
   const results = await page.evaluate(
-    (tags) => (window as unknown as { axe: { run: (c: Document, o: object) => Promise<AxeResults> } }).axe.run(document, { runOnly: { type: "tag", values: tags }, resultTypes: ["violations"] }),
+    (tags) =>
+      (window as unknown as { axe: { run: (c: Document, o: object) => Promise<AxeResults> } }).axe.run(document, {
+        runOnly: { type: "tag", values: tags },
+        resultTypes: ["violations"],
+      }),
     WCAG_TAGS,
   );
   return results.violations

@@ -3,8 +3,19 @@
 // fresh test database, in db/demo-data.json's order; each page names the heading it must show, so
 // a page that moved shows up as a failure, never as a silent walk over "Not found".
 
-export const TRIKE = { id: 1, name: "Square-wheel trike run", design: { id: 1, name: "Trike run track" }, review: 1, plan: 1 } as const;
-export const SHAPES = { id: 2, name: "Rolling shapes table", design: { id: 2, name: "Hexagon lane" }, review: 2 } as const;
+export const TRIKE = {
+  id: 1,
+  name: "Square-wheel trike run",
+  design: { id: 1, name: "Trike run track" },
+  review: 1,
+  plan: 1,
+} as const;
+export const SHAPES = {
+  id: 2,
+  name: "Rolling shapes table",
+  design: { id: 2, name: "Hexagon lane" },
+  review: 2,
+} as const;
 export const TWINS = { id: 3, name: "Window twins", design: { id: 3, name: "Street-window twins" } } as const;
 type Project = typeof TRIKE | typeof SHAPES | typeof TWINS;
 
@@ -32,20 +43,67 @@ export const pages = {
   login: (): WalkPage => ({ name: "sign-in", path: "/login", heading: "Axlewright" }),
   projects: (): WalkPage => ({ name: "projects", path: "/projects", heading: "Projects" }),
   project: (p: Project): WalkPage => ({ name: `project-${p.id}`, path: `/projects/${p.id}`, heading: p.name }),
-  notMember: (p: Project): WalkPage => ({ name: `project-${p.id}-not-member`, path: `/projects/${p.id}`, heading: NOT_FOUND, status: 404 }),
+  notMember: (p: Project): WalkPage => ({
+    name: `project-${p.id}-not-member`,
+    path: `/projects/${p.id}`,
+    heading: NOT_FOUND,
+    status: 404,
+  }),
   missing: (): WalkPage => ({ name: "not-found", path: "/projects/999999", heading: NOT_FOUND, status: 404 }),
-  newDesign: (p: Project, allowed: boolean): WalkPage => ({ name: `new-design-${p.id}`, path: `/projects/${p.id}/designs/new`, heading: allowed ? "New design" : NO_ACCESS }),
-  studio: (p: Project): WalkPage => ({ name: `studio-${p.design.id}`, path: designPath(p), heading: p.design.name, ready: "studio" }),
-  revision: (p: Project): WalkPage => ({ name: `revision-${p.design.id}-r1`, path: `${designPath(p)}?revision=1`, heading: p.design.name, ready: "studio" }),
-  compare: (p: Project): WalkPage => ({ name: `compare-${p.design.id}`, path: `${designPath(p)}/compare?a=1&b=1`, heading: `${p.design.name}: R1 and R1` }),
-  compareMissing: (p: Project): WalkPage => ({ name: `compare-${p.design.id}-missing`, path: `${designPath(p)}/compare?a=1`, heading: "Compare revisions" }),
+  newDesign: (p: Project, allowed: boolean): WalkPage => ({
+    name: `new-design-${p.id}`,
+    path: `/projects/${p.id}/designs/new`,
+    heading: allowed ? "New design" : NO_ACCESS,
+  }),
+  studio: (p: Project): WalkPage => ({
+    name: `studio-${p.design.id}`,
+    path: designPath(p),
+    heading: p.design.name,
+    ready: "studio",
+  }),
+  revision: (p: Project): WalkPage => ({
+    name: `revision-${p.design.id}-r1`,
+    path: `${designPath(p)}?revision=1`,
+    heading: p.design.name,
+    ready: "studio",
+  }),
+  compare: (p: Project): WalkPage => ({
+    name: `compare-${p.design.id}`,
+    path: `${designPath(p)}/compare?a=1&b=1`,
+    heading: `${p.design.name}: R1 and R1`,
+  }),
+  compareMissing: (p: Project): WalkPage => ({
+    name: `compare-${p.design.id}-missing`,
+    path: `${designPath(p)}/compare?a=1`,
+    heading: "Compare revisions",
+  }),
   cut: (p: Project, allowed: boolean): WalkPage =>
-    allowed ? { name: `cut-${p.design.id}`, path: `${designPath(p)}/cut`, heading: p.design.name, ready: "cut" } : { name: `cut-${p.design.id}-no-access`, path: `${designPath(p)}/cut`, heading: NO_ACCESS },
-  review: (p: typeof TRIKE | typeof SHAPES): WalkPage => ({ name: `review-${p.review}`, path: `/projects/${p.id}/reviews/${p.review}`, heading: p.design.name, ready: "review" }),
-  assembly: (): WalkPage => ({ name: "assembly-sheet", path: `/projects/${TRIKE.id}/cut-plans/${TRIKE.plan}/assembly`, heading: "", ready: "assembly" }),
+    allowed
+      ? { name: `cut-${p.design.id}`, path: `${designPath(p)}/cut`, heading: p.design.name, ready: "cut" }
+      : { name: `cut-${p.design.id}-no-access`, path: `${designPath(p)}/cut`, heading: NO_ACCESS },
+  review: (p: typeof TRIKE | typeof SHAPES): WalkPage => ({
+    name: `review-${p.review}`,
+    path: `/projects/${p.id}/reviews/${p.review}`,
+    heading: p.design.name,
+    ready: "review",
+  }),
+  assembly: (): WalkPage => ({
+    name: "assembly-sheet",
+    path: `/projects/${TRIKE.id}/cut-plans/${TRIKE.plan}/assembly`,
+    heading: "",
+    ready: "assembly",
+  }),
   log: (p: Project): WalkPage => ({ name: `log-${p.id}`, path: `/projects/${p.id}/log`, heading: p.name }),
-  shop: (allowed: boolean): WalkPage => ({ name: allowed ? "shop" : "shop-no-access", path: "/shop", heading: allowed ? "Shop library" : NO_ACCESS }),
-  people: (allowed: boolean): WalkPage => ({ name: allowed ? "people" : "people-no-access", path: "/admin/users", heading: allowed ? "People" : NO_ACCESS }),
+  shop: (allowed: boolean): WalkPage => ({
+    name: allowed ? "shop" : "shop-no-access",
+    path: "/shop",
+    heading: allowed ? "Shop library" : NO_ACCESS,
+  }),
+  people: (allowed: boolean): WalkPage => ({
+    name: allowed ? "people" : "people-no-access",
+    path: "/admin/users",
+    heading: allowed ? "People" : NO_ACCESS,
+  }),
   password: (): WalkPage => ({ name: "password", path: "/account/password", heading: "Change password" }),
 };
 
@@ -55,7 +113,11 @@ function adminPages(): WalkPage[] {
     pages.projects(),
     ...[TRIKE, SHAPES, TWINS].map(pages.project),
     pages.newDesign(TRIKE, true),
-    ...[TRIKE, SHAPES, TWINS].flatMap((p) => [pages.studio(p), { ...pages.revision(p), screenshot: p === TRIKE }, { ...pages.cut(p, true), screenshot: p === TRIKE }]),
+    ...[TRIKE, SHAPES, TWINS].flatMap((p) => [
+      pages.studio(p),
+      { ...pages.revision(p), screenshot: p === TRIKE },
+      { ...pages.cut(p, true), screenshot: p === TRIKE },
+    ]),
     pages.compare(TRIKE),
     pages.compare(TWINS),
     pages.compareMissing(TRIKE),

@@ -14,11 +14,18 @@ export interface InternalName {
 export const INTERNAL_NAMES: InternalName[] = [
   // Spec keys as the engine's schema spells them (lib/track/spec.ts), and any other camelCase key:
   // two lower-case letters then a capital, which no English word or unit symbol (kPa, kN, mW) has.
-  { what: "a spec key", pattern: /\b(?:periodsPerTurn|semiMajor|semiMinor|cornerRadius|axleOffset|runLength|speedMps|riderMassKg|endTreatment)\b/ },
+  {
+    what: "a spec key",
+    pattern:
+      /\b(?:periodsPerTurn|semiMajor|semiMinor|cornerRadius|axleOffset|runLength|speedMps|riderMassKg|endTreatment)\b/,
+  },
   { what: "a camelCase key", pattern: /\b[a-z]{2,}[A-Z][A-Za-z]*\b/ },
   { what: "a snake_case key", pattern: /\b[a-z]+_[a-z][a-z_]*\b/ },
   // Paths into the spec ("wheel.points[3]", "track.amplitude"), file extensions excepted.
-  { what: "a spec path", pattern: /\b(?:wheel|track|load|partner)\.(?!(?:dxf|svg|png|csv|zip|pdf|json|txt|md)\b)[a-z][A-Za-z]*\b/ },
+  {
+    what: "a spec path",
+    pattern: /\b(?:wheel|track|load|partner)\.(?!(?:dxf|svg|png|csv|zip|pdf|json|txt|md)\b)[a-z][A-Za-z]*\b/,
+  },
   { what: "an indexed path", pattern: /\b[A-Za-z]+\[\d+\]/ },
   // The design modes and other hyphenated enum values, raw (labels: lib/track/spec.ts MODE_NAMES, lib/labels.ts).
   { what: "a raw mode", pattern: /\b(?:track-for-wheel|wheel-for-track|partner-wheel|twin-wheels)\b/ },
@@ -57,7 +64,14 @@ export function internalNamesIn(text: string): NameFinding[] {
       const at = m.index ?? 0;
       if (seen.has(at)) continue;
       seen.add(at);
-      findings.push({ what, found: m[0], context: text.slice(Math.max(0, at - 40), at + m[0].length + 40).replace(/\s+/g, " ").trim() });
+      findings.push({
+        what,
+        found: m[0],
+        context: text
+          .slice(Math.max(0, at - 40), at + m[0].length + 40)
+          .replace(/\s+/g, " ")
+          .trim(),
+      });
     }
   }
   return findings;
@@ -75,7 +89,10 @@ export async function internalNamesOnPage(page: Page): Promise<NameFinding[]> {
     }
     return { text: document.body.innerText, whole };
   }, RAW_ENUM_VALUES);
-  return [...internalNamesIn(text), ...whole.map((w) => ({ what: "a raw enum value as a whole text", found: w, context: w }))];
+  return [
+    ...internalNamesIn(text),
+    ...whole.map((w) => ({ what: "a raw enum value as a whole text", found: w, context: w })),
+  ];
 }
 
 export function describeNames(where: string, findings: NameFinding[]): string[] {

@@ -2,7 +2,16 @@
 // client and installer each of the project under test and of another project.
 import { makeProject, makeUser } from "./fixtures";
 
-export const CALLERS = ["anonymous", "admin", "fabricator member", "fabricator non-member", "client member", "client non-member", "installer member", "installer non-member"] as const;
+export const CALLERS = [
+  "anonymous",
+  "admin",
+  "fabricator member",
+  "fabricator non-member",
+  "client member",
+  "client non-member",
+  "installer member",
+  "installer non-member",
+] as const;
 export type Caller = (typeof CALLERS)[number];
 export type CallerIds = Record<Exclude<Caller, "anonymous">, number>;
 
@@ -29,14 +38,32 @@ export async function makeCallers(label: string): Promise<{ ids: CallerIds; proj
 
 /** Status tables by who may do it: any member (and admins), the shop (admin and the project's fabricator), or only the project's client. */
 export const projectView = (ok: number): Record<Caller, number> => ({
-  anonymous: 401, admin: ok, "fabricator member": ok, "fabricator non-member": 404, "client member": ok,
-  "client non-member": 404, "installer member": ok, "installer non-member": 404,
+  anonymous: 401,
+  admin: ok,
+  "fabricator member": ok,
+  "fabricator non-member": 404,
+  "client member": ok,
+  "client non-member": 404,
+  "installer member": ok,
+  "installer non-member": 404,
 });
 export const projectManage = (ok: number): Record<Caller, number> => ({
-  anonymous: 401, admin: ok, "fabricator member": ok, "fabricator non-member": 404, "client member": 403,
-  "client non-member": 404, "installer member": 403, "installer non-member": 404,
+  anonymous: 401,
+  admin: ok,
+  "fabricator member": ok,
+  "fabricator non-member": 404,
+  "client member": 403,
+  "client non-member": 404,
+  "installer member": 403,
+  "installer non-member": 404,
 });
 export const clientOnly = (ok: number): Record<Caller, number> => ({
-  anonymous: 401, admin: 403, "fabricator member": 403, "fabricator non-member": 404, "client member": ok,
-  "client non-member": 404, "installer member": 403, "installer non-member": 404,
+  anonymous: 401,
+  admin: 403,
+  "fabricator member": 403,
+  "fabricator non-member": 404,
+  "client member": ok,
+  "client non-member": 404,
+  "installer member": 403,
+  "installer non-member": 404,
 });

@@ -9,7 +9,11 @@ import { buildCutParts, nestItemsFor, shelfLayout } from "@/lib/cut";
 import { composeSettings, type PlanChoice } from "@/lib/cut-plan/compose";
 import { solve } from "@/lib/track";
 
-export const SQUARE = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 } };
+export const SQUARE = {
+  mode: "track-for-wheel",
+  units: "mm",
+  wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 },
+};
 
 async function idByName(table: typeof materials | typeof stockSheets | typeof machines, name: string) {
   const [row] = await db.select({ id: table.id }).from(table).where(eq(table.name, name));
@@ -32,5 +36,13 @@ export async function validNest(c: PlanChoice, spec: unknown = SQUARE) {
   const plan = buildCutParts(spec, result, settings);
   const items = await nestItemsFor(plan.parts, plan.settings);
   const s = plan.settings;
-  return { nest: shelfLayout({ items, sheet: { width: s.sheet.length, height: s.sheet.width }, margin: s.margin, spacing: s.spacing }), plan };
+  return {
+    nest: shelfLayout({
+      items,
+      sheet: { width: s.sheet.length, height: s.sheet.width },
+      margin: s.margin,
+      spacing: s.spacing,
+    }),
+    plan,
+  };
 }

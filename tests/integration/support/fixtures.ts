@@ -19,7 +19,8 @@ export async function makeUser(role: UserRole, label: string = role): Promise<{ 
 
 export async function makeProject(name: string, members: { userId: number; role: MemberRole }[]): Promise<number> {
   const [res] = await db.insert(projects).values({ name: `${name} ${runTag}`, site: "Test bench" });
-  for (const m of members) await db.insert(projectMembers).values({ projectId: res.insertId, userId: m.userId, role: m.role });
+  for (const m of members)
+    await db.insert(projectMembers).values({ projectId: res.insertId, userId: m.userId, role: m.role });
   return res.insertId;
 }
 
@@ -35,5 +36,8 @@ export async function auditCount(): Promise<number> {
 }
 
 export async function membershipExists(memberId: number): Promise<boolean> {
-  return (await db.select({ id: projectMembers.id }).from(projectMembers).where(eq(projectMembers.id, memberId))).length === 1;
+  return (
+    (await db.select({ id: projectMembers.id }).from(projectMembers).where(eq(projectMembers.id, memberId))).length ===
+    1
+  );
 }

@@ -14,7 +14,12 @@ export function actAs(userId: number | null, issuedAt?: number) {
 
 export const mockAuth = {
   auth: async () =>
-    state.userId ? { user: { id: String(state.userId), issuedAt: state.issuedAt ?? Math.floor(Date.now() / 1000) - 60 }, expires: "2999-01-01T00:00:00.000Z" } : null,
+    state.userId
+      ? {
+          user: { id: String(state.userId), issuedAt: state.issuedAt ?? Math.floor(Date.now() / 1000) - 60 },
+          expires: "2999-01-01T00:00:00.000Z",
+        }
+      : null,
   signIn: async () => undefined,
   signOut: async () => undefined,
   handlers: {},

@@ -37,7 +37,10 @@ describe("chooseScale", () => {
 
   it("takes the largest scale that shows a short run in one strip", () => {
     // 1410.2 mm at 1 : 10 is 400 pt; at 1 : 5 it would need two strips.
-    expect(chooseScale({ length: 1410.2, widthPt: WIDTH, pageRoom: 600, measure: always })).toMatchObject({ denominator: 10, strips: [{ x0: 0, x1: 1410.2 }] });
+    expect(chooseScale({ length: 1410.2, widthPt: WIDTH, pageRoom: 600, measure: always })).toMatchObject({
+      denominator: 10,
+      strips: [{ x0: 0, x1: 1410.2 }],
+    });
   });
 
   it("prefers strips at 1 : 20 to one strip at a smaller scale", () => {
@@ -65,13 +68,35 @@ describe("placeLabels", () => {
   const around = ["centre", "end", "start"] as const;
 
   it("centres labels with room, in the row nearest the drawing", () => {
-    const p = placeLabels([{ x: 100, width: 40, anchors: around }, { x: 300, width: 40, anchors: around }], bounds, 5, 3);
-    expect(p.map((l) => [l.row, l.anchor, l.left])).toEqual([[0, "centre", 80], [0, "centre", 280]]);
+    const p = placeLabels(
+      [
+        { x: 100, width: 40, anchors: around },
+        { x: 300, width: 40, anchors: around },
+      ],
+      bounds,
+      5,
+      3,
+    );
+    expect(p.map((l) => [l.row, l.anchor, l.left])).toEqual([
+      [0, "centre", 80],
+      [0, "centre", 280],
+    ]);
   });
 
   it("flags two close labels away from each other rather than stacking them", () => {
-    const p = placeLabels([{ x: 100, width: 40, anchors: around }, { x: 125, width: 40, anchors: around }], bounds, 5, 3);
-    expect(p.map((l) => [l.row, l.anchor])).toEqual([[0, "end"], [0, "start"]]);
+    const p = placeLabels(
+      [
+        { x: 100, width: 40, anchors: around },
+        { x: 125, width: 40, anchors: around },
+      ],
+      bounds,
+      5,
+      3,
+    );
+    expect(p.map((l) => [l.row, l.anchor])).toEqual([
+      [0, "end"],
+      [0, "start"],
+    ]);
     expect(p[1].left).toBeGreaterThanOrEqual(p[0].right + 5);
   });
 
@@ -81,12 +106,25 @@ describe("placeLabels", () => {
     expect(p.map((l) => l.row)).toEqual([0, 1, 0]);
     // The middle label's leader runs through row 0 at x = 110, which neither row-0 label covers.
     for (const o of [p[0], p[2]]) expect(110 < o.left || 110 > o.right).toBe(true);
-    const crowded = placeLabels([100, 104, 108, 112, 116].map((x) => ({ x, width: 40, anchors: around })), bounds, 5, 3);
+    const crowded = placeLabels(
+      [100, 104, 108, 112, 116].map((x) => ({ x, width: 40, anchors: around })),
+      bounds,
+      5,
+      3,
+    );
     expect(crowded.some((l) => l.forced)).toBe(true);
   });
 
   it("keeps labels inside the bounds", () => {
-    const p = placeLabels([{ x: 3, width: 40, anchors: around }, { x: 998, width: 40, anchors: around }], bounds, 5, 3);
+    const p = placeLabels(
+      [
+        { x: 3, width: 40, anchors: around },
+        { x: 998, width: 40, anchors: around },
+      ],
+      bounds,
+      5,
+      3,
+    );
     expect(p[0].left).toBeGreaterThanOrEqual(0);
     expect(p[1].right).toBeLessThanOrEqual(1000);
   });

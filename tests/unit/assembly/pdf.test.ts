@@ -4,7 +4,15 @@
 import { beforeAll, describe, expect, it } from "vitest";
 import { assemblySheetPdf } from "@/lib/assembly/pdf";
 import type { AssemblySheet, Paper } from "@/lib/assembly/sheet";
-import { darkPixels, pdffonts, pdfinfo, pdftextPages, pdfWords, type PageWords, type Word } from "./support/pdf-poppler";
+import {
+  darkPixels,
+  pdffonts,
+  pdfinfo,
+  pdftextPages,
+  pdfWords,
+  type PageWords,
+  type Word,
+} from "./support/pdf-poppler";
 import { longRun, trikeSheet, unapprovedPair } from "./support/pdf-sheets";
 
 const MM_PER_IN = 25.4; // 1 in = 25.4 mm exactly (the international inch, NIST Handbook 44 Appendix C)
@@ -107,7 +115,10 @@ describe.each([
   });
 
   it("embeds IBM Plex Sans and Mono and no other font", () => {
-    const rows = pdffonts(r.pdf).split("\n").slice(2).filter((l) => l.trim());
+    const rows = pdffonts(r.pdf)
+      .split("\n")
+      .slice(2)
+      .filter((l) => l.trim());
     expect(rows.length).toBeGreaterThan(0);
     for (const row of rows) {
       expect(row).toMatch(/^[A-Z]{6}\+IBMPlex(Sans|Mono)(-\S+)?\s+CID TrueType\s+Identity-H\s+yes yes yes/);
@@ -123,7 +134,15 @@ describe.each([
 
   it("has the cover: project, site, design and revision, reference, date, contact, cautions and the disclaimer", () => {
     const cover = flat(r.pages[0]);
-    for (const s of [sheet.project.name, sheet.project.site, `${sheet.design.name}, R1`, sheet.approval!.reference, "2026-12-02", sheet.shop.name, sheet.shop.contact])
+    for (const s of [
+      sheet.project.name,
+      sheet.project.site,
+      `${sheet.design.name}, R1`,
+      sheet.approval!.reference,
+      "2026-12-02",
+      sheet.shop.name,
+      sheet.shop.contact,
+    ])
       expect(cover).toContain(s);
     for (const c of sheet.cautions) expect(cover).toContain(flat(`${c.signal} ${c.text}`));
     expect(cover).toContain(flat(sheet.disclaimer));
@@ -131,7 +150,8 @@ describe.each([
   });
 
   it("lists every part by its engraved id with name, material, quantity and sheet", () => {
-    for (const p of sheet.parts) expect(r.text).toContain(`${p.id} ${p.name} ${p.material} ${p.quantity} ${p.sheets.join(", ")}`);
+    for (const p of sheet.parts)
+      expect(r.text).toContain(`${p.id} ${p.name} ${p.material} ${p.quantity} ${p.sheets.join(", ")}`);
   });
 
   it("gives every joint's station in mm and inches, and every support's label", () => {
@@ -149,8 +169,12 @@ describe.each([
   it("has the level and position table with ± tolerances in mm and inches beside each row", () => {
     for (const l of sheet.levels) {
       const what = l.what === "support" ? "Support" : "Joint";
-      expect(r.text).toContain(`${l.label} ${what} ${mm1(l.station)} ${mm1(l.topHeight)} ± ${l.tolerance.toFixed(2)} mm`);
-      expect(r.text).toContain(`(${in2(l.station)}) (${in2(l.topHeight)}) (± ${(l.tolerance / MM_PER_IN).toFixed(3)} in)`);
+      expect(r.text).toContain(
+        `${l.label} ${what} ${mm1(l.station)} ${mm1(l.topHeight)} ± ${l.tolerance.toFixed(2)} mm`,
+      );
+      expect(r.text).toContain(
+        `(${in2(l.station)}) (${in2(l.topHeight)}) (± ${(l.tolerance / MM_PER_IN).toFixed(3)} in)`,
+      );
     }
     expect(r.text).toContain("± 0.42 mm");
   });
@@ -162,7 +186,11 @@ describe.each([
   });
 
   it("puts the footer on every page: project, design and revision, reference, page n of N", () => {
-    r.pages.forEach((p, i) => expect(flat(p)).toContain(`Square-wheel trike run · Trike run track R1 · c1bffccc10f9/2026-11-20 page ${i + 1} of ${r.pages.length}`));
+    r.pages.forEach((p, i) =>
+      expect(flat(p)).toContain(
+        `Square-wheel trike run · Trike run track R1 · c1bffccc10f9/2026-11-20 page ${i + 1} of ${r.pages.length}`,
+      ),
+    );
   });
 
   it("draws the plan to a standard scale: label spacing is station difference × scale", () => {
@@ -178,8 +206,10 @@ describe.each([
     };
     const s1 = centre(word("S1"));
     run.supports.forEach((x, i) => expect(centre(word(`S${i + 1}`)) - s1).toBeCloseTo((x - run.supports[0]) * k, 1));
-    for (const j of sheet.joints) expect(centre(word(j.between.join("/"))) - s1).toBeCloseTo((j.station - run.supports[0]) * k, 1);
-    for (const seg of run.segments) expect(centre(word(seg.id)) - s1).toBeCloseTo(((seg.x0 + seg.x1) / 2 - run.supports[0]) * k, 1);
+    for (const j of sheet.joints)
+      expect(centre(word(j.between.join("/"))) - s1).toBeCloseTo((j.station - run.supports[0]) * k, 1);
+    for (const seg of run.segments)
+      expect(centre(word(seg.id)) - s1).toBeCloseTo(((seg.x0 + seg.x1) / 2 - run.supports[0]) * k, 1);
   });
 
   it("keeps every word on the printable part of the page", () => expectInsidePrintableArea(r));
@@ -194,7 +224,9 @@ describe("a pair of wheels nobody has approved", () => {
   it("says NOT APPROVED on the cover and in every footer, and has no layout plan", () => {
     expect(flat(r.pages[0])).toContain("NOT APPROVED — FOR REVIEW ONLY");
     expect(flat(r.pages[0])).toContain("Do not install production parts from this sheet.");
-    r.pages.forEach((p, i) => expect(flat(p)).toContain(`Trike run track R1 · NOT APPROVED page ${i + 1} of ${r.pages.length}`));
+    r.pages.forEach((p, i) =>
+      expect(flat(p)).toContain(`Trike run track R1 · NOT APPROVED page ${i + 1} of ${r.pages.length}`),
+    );
     expect(r.text).toContain("This design has no track run");
     expect(r.text).not.toMatch(/SCALE 1 :/);
     expect(r.text).not.toContain("direction of travel");
@@ -215,7 +247,12 @@ describe.each(["a4", "letter"] as const)("a 20 m run on %s", (paper) => {
 
   it("is cut into strips at one standard scale that cover the run end to end", () => {
     expect(ISO_5455).toContain(printedScale(r));
-    const strips = [...r.text.matchAll(/Strip (\d+) of (\d+) · x = ([\d.]+) to ([\d.]+) mm/g)].map((m) => ({ n: Number(m[1]), of: Number(m[2]), x0: Number(m[3]), x1: Number(m[4]) }));
+    const strips = [...r.text.matchAll(/Strip (\d+) of (\d+) · x = ([\d.]+) to ([\d.]+) mm/g)].map((m) => ({
+      n: Number(m[1]),
+      of: Number(m[2]),
+      x0: Number(m[3]),
+      x1: Number(m[4]),
+    }));
     expect(strips.length).toBeGreaterThan(1);
     strips.forEach((s, i) => {
       expect(s.n).toBe(i + 1);
@@ -228,7 +265,9 @@ describe.each(["a4", "letter"] as const)("a 20 m run on %s", (paper) => {
   it("labels every support, spaced to the scale within each strip", () => {
     const k = PT_PER_MM / printedScale(r);
     const found = run.supports.map((x, i) => {
-      const hits = planPages(r).flatMap((p) => p.words.filter((w) => w.text === `S${i + 1}`).map((w) => ({ page: p, w })));
+      const hits = planPages(r).flatMap((p) =>
+        p.words.filter((w) => w.text === `S${i + 1}`).map((w) => ({ page: p, w })),
+      );
       expect(hits, `S${i + 1}`).toHaveLength(1);
       return { x, page: hits[0].page, w: hits[0].w, strip: `${hits[0].w.page}:${stripOf(hits[0].page, hits[0].w)}` };
     });

@@ -89,7 +89,9 @@ describe("bad input", () => {
   });
 
   it("refuses a solve result that is not the spec's", () => {
-    const e = cutError(() => buildCutParts({ ...SQUARE_SPEC, wheel: { ...SQUARE_SPEC.wheel, side: 300 } }, squareResult(), DEMO_SETTINGS));
+    const e = cutError(() =>
+      buildCutParts({ ...SQUARE_SPEC, wheel: { ...SQUARE_SPEC.wheel, side: 300 } }, squareResult(), DEMO_SETTINGS),
+    );
     expect(e.field).toBe("spec");
   });
 });

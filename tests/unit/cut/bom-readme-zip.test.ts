@@ -51,7 +51,15 @@ describe("BOM, README and ZIP", () => {
     plan = buildCutParts(SQUARE_SPEC, squareResult(), { ...DEMO_SETTINGS, material }, { font: font() });
     paths = (await kerfParts(plan.parts, plan.settings)).paths;
     const nest = rowNest(plan.parts, { length: 2440, width: 1220 }, 10, 6);
-    job = { baseName: slug("Square-wheel trike run"), design: "Trike run", revision: 3, result: squareResult(), plan, toolPaths: paths, nest };
+    job = {
+      baseName: slug("Square-wheel trike run"),
+      design: "Trike run",
+      revision: 3,
+      result: squareResult(),
+      plan,
+      toolPaths: paths,
+      nest,
+    };
   });
 
   it("quotes CSV fields as RFC 4180 says", () => {
@@ -66,7 +74,12 @@ describe("BOM, README and ZIP", () => {
     const nest = rowNest(plan.parts, { length: 2440, width: 1220 }, 10, 6);
     const csv = bomCsv(plan.parts, { material: plan.settings.material, thickness: 18, units: "mm", nest });
     expect(csv.endsWith("\r\n")).toBe(true);
-    expect(csv.split("\r\n").slice(0, -1).every((l) => !l.includes("\n"))).toBe(true);
+    expect(
+      csv
+        .split("\r\n")
+        .slice(0, -1)
+        .every((l) => !l.includes("\n")),
+    ).toBe(true);
     const rows = parseCsv(csv);
     expect(rows[0]).toEqual(["part", "name", "material", "thickness (mm)", "sheet", "size L×W (mm)", "quantity"]);
     expect(rows).toHaveLength(plan.parts.length + 1);
@@ -120,7 +133,11 @@ describe("BOM, README and ZIP", () => {
       `${base}-parts-mm.dxf`,
       `${base}-parts-mm.svg`,
       `${base}-parts-preview.png`,
-      ...job.nest!.sheets.flatMap((s) => [`${base}-sheet-${s.index + 1}-mm.dxf`, `${base}-sheet-${s.index + 1}-mm.svg`, `${base}-sheet-${s.index + 1}-preview.png`]),
+      ...job.nest!.sheets.flatMap((s) => [
+        `${base}-sheet-${s.index + 1}-mm.dxf`,
+        `${base}-sheet-${s.index + 1}-mm.svg`,
+        `${base}-sheet-${s.index + 1}-preview.png`,
+      ]),
     ].map((n) => `${base}/${n}`);
     expect(listing).toEqual(expected.sort());
     execFileSync("/usr/bin/unzip", ["-tq", file]); // CRC check of every entry; throws on a bad archive

@@ -21,7 +21,12 @@ import { ezdxfCheck, type EzEntity, type EzFile } from "./support/dxf-check";
 /** Rotation about the origin by a multiple of 90°, then translation: the nester's placement, written out here on its own. */
 function place(p: readonly [number, number], deg: number, x: number, y: number): Pt {
   const q = ((Math.round(deg / 90) % 4) + 4) % 4;
-  const [c, s] = [[1, 0], [0, 1], [-1, 0], [0, -1]][q];
+  const [c, s] = [
+    [1, 0],
+    [0, 1],
+    [-1, 0],
+    [0, -1],
+  ][q];
   return [p[0] * c - p[1] * s + x, p[0] * s + p[1] * c + y];
 }
 
@@ -94,8 +99,16 @@ describe("DXF export", () => {
       parts: buildDrawing(partsRow(plan.parts, { gap: 26 }), { units: "mm" }),
       sheet: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), { units: "mm", frames: frame }),
       inches: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), { units: "in", frames: frame }),
-      kerfed: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), { units: "mm", frames: frame, toolPaths: paths }),
-      noted: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), { units: "in", frames: frame, notes: ["APPROVED R1 0123456789ab/2026-12-02 by A. Client", "Trike run track R1"] }),
+      kerfed: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), {
+        units: "mm",
+        frames: frame,
+        toolPaths: paths,
+      }),
+      noted: buildDrawing(sheetParts(plan.parts, nest.sheets[0].placements), {
+        units: "in",
+        frames: frame,
+        notes: ["APPROVED R1 0123456789ab/2026-12-02 by A. Client", "Trike run track R1"],
+      }),
     };
     const dir = mkdtempSync(join(tmpdir(), "axlewright-dxf-"));
     texts = {};
@@ -120,7 +133,10 @@ describe("DXF export", () => {
 
   it("writes notes as TEXT on REFERENCE, above the sheet and in the drawing's unit", () => {
     const notes = files[4].entities.filter((e) => e.type === "TEXT");
-    expect(notes.map((e) => e.text)).toEqual(["APPROVED R1 0123456789ab/2026-12-02 by A. Client", "Trike run track R1"]);
+    expect(notes.map((e) => e.text)).toEqual([
+      "APPROVED R1 0123456789ab/2026-12-02 by A. Client",
+      "Trike run track R1",
+    ]);
     for (const n of notes) {
       // 10 mm cap height in inches (25.4 mm to the inch), above the 1220 mm sheet.
       expect(n.height).toBeCloseTo(10 / 25.4, 9);
@@ -155,11 +171,15 @@ describe("DXF export", () => {
       for (const h of part.region.holes) check(h, "CUT_INSIDE");
       for (const d of part.drill) {
         const c = place([d.x, d.y], pl.rotation, pl.x, pl.y);
-        const e = sheet.entities.find((x) => x.type === "CIRCLE" && Math.hypot(x.center![0] - c[0], x.center![1] - c[1]) < 1e-9);
+        const e = sheet.entities.find(
+          (x) => x.type === "CIRCLE" && Math.hypot(x.center![0] - c[0], x.center![1] - c[1]) < 1e-9,
+        );
         expect(e?.radius).toBeCloseTo(d.diameter / 2, 12);
         circles++;
       }
-      for (const s of part.engrave) for (let i = 1; i < s.length; i++) lines.add(segKey(place(s[i - 1], pl.rotation, pl.x, pl.y), place(s[i], pl.rotation, pl.x, pl.y), 1));
+      for (const s of part.engrave)
+        for (let i = 1; i < s.length; i++)
+          lines.add(segKey(place(s[i - 1], pl.rotation, pl.x, pl.y), place(s[i], pl.rotation, pl.x, pl.y), 1));
     }
     expect(polys.filter((e) => e.layer !== "REFERENCE")).toHaveLength(rings);
     expect(sheet.entities.filter((e) => e.type === "CIRCLE")).toHaveLength(circles);
@@ -188,24 +208,43 @@ describe("DXF export", () => {
     const outs = kerfed.entities.filter((e) => e.layer === "CUT_OUTSIDE");
     const byId = new Map(plan.parts.map((p) => [p.id, p]));
     const expected = nest.sheets[0].placements.map((pl) => ringArea(paths.get(pl.id)!.outer)).sort((a, b) => a - b);
-    expect(outs.map((e) => e.area!).sort((a, b) => a - b).map((a) => Number(a.toFixed(3)))).toEqual(expected.map((a) => Number(a.toFixed(3))));
+    expect(
+      outs
+        .map((e) => e.area!)
+        .sort((a, b) => a - b)
+        .map((a) => Number(a.toFixed(3))),
+    ).toEqual(expected.map((a) => Number(a.toFixed(3))));
     // Each tool path is larger than its part by about perimeter × k/2 (docs/fabrication.md §4.1).
-    for (const pl of nest.sheets[0].placements) expect(ringArea(paths.get(pl.id)!.outer)).toBeGreaterThan(ringArea(byId.get(pl.id)!.region.outer));
+    for (const pl of nest.sheets[0].placements)
+      expect(ringArea(paths.get(pl.id)!.outer)).toBeGreaterThan(ringArea(byId.get(pl.id)!.region.outer));
   });
 
   it("stops on two parts drawn on top of each other instead of dropping one", () => {
     const w = plan.parts.find((p) => p.id === "W1")!;
-    expect(() => buildDrawing([{ part: w, rotation: 0, x: 500, y: 500 }, { part: w, rotation: 0, x: 500, y: 500 }], { units: "mm" })).toThrow(/on top of each other/);
+    expect(() =>
+      buildDrawing(
+        [
+          { part: w, rotation: 0, x: 500, y: 500 },
+          { part: w, rotation: 0, x: 500, y: 500 },
+        ],
+        { units: "mm" },
+      ),
+    ).toThrow(/on top of each other/);
   });
 
   it("dxf-parser reads the same file in-process", () => {
     const dxf = new DxfParser().parseSync(texts.parts)!;
     expect(dxf.header.$INSUNITS).toBe(4);
-    expect(Object.keys(dxf.tables.layer.layers)).toEqual(expect.arrayContaining(["CUT_OUTSIDE", "CUT_INSIDE", "DRILL", "ENGRAVE", "REFERENCE"]));
+    expect(Object.keys(dxf.tables.layer.layers)).toEqual(
+      expect.arrayContaining(["CUT_OUTSIDE", "CUT_INSIDE", "DRILL", "ENGRAVE", "REFERENCE"]),
+    );
     expect(dxf.entities).toHaveLength(files[0].entities.length);
-    for (const e of dxf.entities) if (e.type === "LWPOLYLINE") expect((e as unknown as { shape: boolean }).shape).toBe(true);
+    for (const e of dxf.entities)
+      if (e.type === "LWPOLYLINE") expect((e as unknown as { shape: boolean }).shape).toBe(true);
     const wheel = plan.parts.find((p) => p.id === "W1")!;
-    const polys = dxf.entities.filter((e) => e.type === "LWPOLYLINE") as unknown as Array<{ vertices: Array<{ x: number; y: number }> }>;
+    const polys = dxf.entities.filter((e) => e.type === "LWPOLYLINE") as unknown as Array<{
+      vertices: Array<{ x: number; y: number }>;
+    }>;
     // The wheel outline appears with the engine's vertex count (a square: 4 corners and the side's middle).
     expect(polys.some((p) => p.vertices.length === wheel.region.outer.length)).toBe(true);
   });

@@ -30,11 +30,22 @@ describe("npm run export", () => {
 
   it("parses its flags, and names the bad ones", () => {
     for (const sheet of ["2440x1220", "2440X1220", "2440×1220", "2440 x 1220"])
-      expect(parseArgs(["s.json", "--format", "zip", "--out", "o.zip", "--sheet", sheet]).sheet).toEqual({ length: 2440, width: 1220 });
-    expect(parseArgs(["s.json", "--format=dxf", "--out=o.dxf", "--length", "6000"])).toMatchObject({ format: "dxf", out: "o.dxf", length: 6000 });
+      expect(parseArgs(["s.json", "--format", "zip", "--out", "o.zip", "--sheet", sheet]).sheet).toEqual({
+        length: 2440,
+        width: 1220,
+      });
+    expect(parseArgs(["s.json", "--format=dxf", "--out=o.dxf", "--length", "6000"])).toMatchObject({
+      format: "dxf",
+      out: "o.dxf",
+      length: 6000,
+    });
     expect(usage(["s.json", "--format", "pdf", "--out", "x"])).toBe('--format must be dxf, svg or zip, not "pdf".');
-    expect(usage(["s.json", "--format", "dxf", "--out", "x", "--sheet", "big"])).toMatch(/--sheet must look like 2440x1220/);
-    expect(usage(["s.json", "--format", "dxf", "--out", "x", "--length", "-5"])).toMatch(/--length needs a positive number/);
+    expect(usage(["s.json", "--format", "dxf", "--out", "x", "--sheet", "big"])).toMatch(
+      /--sheet must look like 2440x1220/,
+    );
+    expect(usage(["s.json", "--format", "dxf", "--out", "x", "--length", "-5"])).toMatch(
+      /--length needs a positive number/,
+    );
     expect(usage(["s.json", "--format", "dxf"])).toBe("Give --out FILE.");
     expect(usage(["--format", "dxf", "--out", "x"])).toBe("Give a spec file.");
     expect(usage(["s.json", "--format", "dxf", "--out", "x", "--colour", "red"])).toBe("Unknown flag --colour.");
@@ -63,7 +74,19 @@ describe("npm run export", () => {
 
   it("writes a nested DXF in mm for a 1.5 m run on 2440 × 1220 sheets", () => {
     const out = join(dir, "run.dxf");
-    const r = run([spec, "--format", "dxf", "--out", out, "--length", "1500", "--sheet", "2440×1220", "--seconds", "1"]);
+    const r = run([
+      spec,
+      "--format",
+      "dxf",
+      "--out",
+      out,
+      "--length",
+      "1500",
+      "--sheet",
+      "2440×1220",
+      "--seconds",
+      "1",
+    ]);
     expect(r.status, r.stderr).toBe(0);
     expect(existsSync(out)).toBe(true);
     const dxf = new DxfParser().parseSync(readFileSync(out, "utf8"))!;

@@ -10,7 +10,14 @@ import { parseCutSettings } from "@/lib/cut/settings";
 import { DEMO_SETTINGS, SQUARE_SPEC, squareResult } from "./support/fixtures";
 
 // An L: 100 × 100 with the top-right 50 × 50 removed; the reflex vertex is (50, 50).
-const L: Pt[] = [[0, 0], [100, 0], [100, 50], [50, 50], [50, 100], [0, 100]];
+const L: Pt[] = [
+  [0, 0],
+  [100, 0],
+  [100, 50],
+  [50, 50],
+  [50, 100],
+  [0, 100],
+];
 
 describe("inside corners", () => {
   it("finds the L's one concave corner and calls it sharp", () => {
@@ -32,7 +39,7 @@ describe("inside corners", () => {
     const ring: Pt[] = [[0, 0], [100, 0], [100, 50], ...arc, [50, 100], [0, 100]];
     const c = concaveCorners(ring, { closed: true, material: "left", limit: 3 });
     expect(c).toHaveLength(1);
-    expect(c[0].radius).toBeCloseTo(rho * (12 * Math.sin(Math.PI / 48)) / (Math.PI / 4), 6); // chord length over turn
+    expect(c[0].radius).toBeCloseTo((rho * (12 * Math.sin(Math.PI / 48))) / (Math.PI / 4), 6); // chord length over turn
     expect(Math.abs(c[0].radius - rho) / rho).toBeLessThan(0.002);
     expect(concaveCorners(ring, { closed: true, material: "left", limit: 1.5 })).toHaveLength(0);
   });

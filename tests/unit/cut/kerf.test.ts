@@ -14,7 +14,12 @@ beforeAll(async () => {
   lib = await loadClipper();
 });
 
-const rect: Ring = [[0, 0], [100, 0], [100, 50], [0, 50]];
+const rect: Ring = [
+  [0, 0],
+  [100, 0],
+  [100, 50],
+  [0, 50],
+];
 
 describe("kerf offsets", () => {
   it("grows a 100 × 50 rectangle by d = 1.5 to A + P·d + πd² = 5457.0686 (docs/fabrication.md §6.1)", () => {
@@ -79,7 +84,9 @@ describe("kerf offsets", () => {
       engrave: [],
       grainAlongX: false,
     };
-    const { paths, warnings } = await kerfParts([part], { machine: { kind: "router", kerf: 6, bed: { length: 2500, width: 1250 }, minInsideRadius: 0 } });
+    const { paths, warnings } = await kerfParts([part], {
+      machine: { kind: "router", kerf: 6, bed: { length: 2500, width: 1250 }, minInsideRadius: 0 },
+    });
     expect(paths.get("X1")!.holes).toHaveLength(0); // a 4 mm hole under a 6 mm cutter
     expect(warnings[0].code).toBe("hole-too-small");
   });

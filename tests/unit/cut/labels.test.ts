@@ -26,9 +26,18 @@ describe("single-stroke labels", () => {
     // 'H' is drawn from y = 0 to 662 (d="M 220 662 L 220 0 …"); its top is the cap height used.
     expect(f.capHeight).toBe(662);
     expect(f.glyphs.get("A")!.strokes).toEqual([
-      [[378, 662], [126, 0]],
-      [[378, 662], [630, 0]],
-      [[220, 220], [536, 220]],
+      [
+        [378, 662],
+        [126, 0],
+      ],
+      [
+        [378, 662],
+        [630, 0],
+      ],
+      [
+        [220, 220],
+        [536, 220],
+      ],
     ]); // glyph A: d="M 378 662 L 126 0 M 378 662 L 630 0 M 220 220 L 536 220"
     expect(f.glyphs.get("A")!.advance).toBe(adv("A"));
     expect(f.glyphs.get('"')).toBeDefined(); // unicode="&#x22;"
@@ -68,7 +77,12 @@ describe("single-stroke labels", () => {
   });
 
   it("keeps every part's label inside the part, clear of edges, holes and drill holes", () => {
-    const plan = buildCutParts(SQUARE_SPEC, squareResult(), { ...DEMO_SETTINGS, lightening: { count: 4, rim: 25 } }, { font: f });
+    const plan = buildCutParts(
+      SQUARE_SPEC,
+      squareResult(),
+      { ...DEMO_SETTINGS, lightening: { count: 4, rim: 25 } },
+      { font: f },
+    );
     const margin = 6; // max(3, kerf) in lib/cut/track-parts.ts
     for (const p of plan.parts) {
       expect(p.engrave.length).toBeGreaterThan(0);
@@ -78,7 +92,8 @@ describe("single-stroke labels", () => {
           expect(pointInRing(q, p.region.outer)).toBe(true);
           expect(jDistance(jPoint(q), edge)).toBeGreaterThan(margin - 1e-6);
           for (const h of p.region.holes) expect(jDistance(jPoint(q), jRing(h))).toBeGreaterThan(margin - 1e-6);
-          for (const d of p.drill) expect(Math.hypot(q[0] - d.x, q[1] - d.y)).toBeGreaterThan(d.diameter / 2 + margin - 1e-6);
+          for (const d of p.drill)
+            expect(Math.hypot(q[0] - d.x, q[1] - d.y)).toBeGreaterThan(d.diameter / 2 + margin - 1e-6);
         }
     }
     expect(plan.warnings.filter((w) => w.code.startsWith("label"))).toEqual([]);

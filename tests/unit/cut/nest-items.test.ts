@@ -43,7 +43,10 @@ describe("nest items and the shelf layout", () => {
       expect(it.polygon.length).toBeLessThan(tool.length);
       expect(it.rotations).toEqual(p.kind === "track" ? [0, 180] : [0, 90, 180, 270]);
     }
-    const noGrain = await nestItemsFor(plan.parts, { ...plan.settings, sheet: { ...plan.settings.sheet, grain: "none" } });
+    const noGrain = await nestItemsFor(plan.parts, {
+      ...plan.settings,
+      sheet: { ...plan.settings.sheet, grain: "none" },
+    });
     expect(noGrain[0].rotations).toEqual([0, 90, 180, 270]);
     const fixed = await nestItemsFor(plan.parts, { ...plan.settings, rotations: "none" });
     expect(fixed.every((x) => x.rotations.length === 1 && x.rotations[0] === 0)).toBe(true);
@@ -60,7 +63,15 @@ describe("nest items and the shelf layout", () => {
       const copies = nest.sheets.flatMap((s) => s.placements.filter((p) => p.id === it.id).map((p) => p.copy)).sort();
       expect(copies).toEqual([...Array(it.quantity).keys()]);
     }
-    const inner = { outer: [[margin, margin], [sheet.width - margin, margin], [sheet.width - margin, sheet.height - margin], [margin, sheet.height - margin]] as Pt[], holes: [] };
+    const inner = {
+      outer: [
+        [margin, margin],
+        [sheet.width - margin, margin],
+        [sheet.width - margin, sheet.height - margin],
+        [margin, sheet.height - margin],
+      ] as Pt[],
+      holes: [],
+    };
     for (const s of nest.sheets) {
       const placed = s.placements.map((p) => {
         expect(byId.get(p.id)!.rotations).toContain(p.rotation);
@@ -79,7 +90,17 @@ describe("nest items and the shelf layout", () => {
   });
 
   it("reports a copy too big for any sheet as unplaced", () => {
-    const big: NestItem = { id: "X", polygon: [[0, 0], [3000, 0], [3000, 10], [0, 10]], quantity: 2, rotations: [0, 90] };
+    const big: NestItem = {
+      id: "X",
+      polygon: [
+        [0, 0],
+        [3000, 0],
+        [3000, 10],
+        [0, 10],
+      ],
+      quantity: 2,
+      rotations: [0, 90],
+    };
     const nest = shelfLayout({ items: [big], sheet: { width: 2440, height: 1220 }, margin: 10, spacing: 6 });
     expect(nest.sheets).toHaveLength(0);
     expect(nest.unplaced.map((u) => u.copy)).toEqual([0, 1]);

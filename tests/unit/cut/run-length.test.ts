@@ -77,19 +77,25 @@ describe("run length", () => {
     expect(run.wheelSize.change).toBeCloseTo(A * Math.SQRT2 * (run.scale - 1), 9);
     expect(warnings.map((w) => w.code)).toContain("scaled");
     let worst = 0;
-    for (let x = 0; x <= L; x += 0.5) worst = Math.max(worst, Math.abs(yAt(run.profile, x) - catenary(x, 0, run.scale)));
+    for (let x = 0; x <= L; x += 0.5)
+      worst = Math.max(worst, Math.abs(yAt(run.profile, x) - catenary(x, 0, run.scale)));
     expect(worst).toBeLessThan(TOL * run.scale + 1e-9);
   });
 
   it("starts a wheel-for-track run at a crest (the sine's crest is at P/4)", async () => {
     const { solve } = await import("@/lib/track");
-    const r = solve({ mode: "wheel-for-track", track: { kind: "sine", amplitude: 20, period: 200 }, periodsPerTurn: 4 });
+    const r = solve({
+      mode: "wheel-for-track",
+      track: { kind: "sine", amplitude: 20, period: 200 },
+      periodsPerTurn: 4,
+    });
     const { run } = buildRun(r, parseCutSettings({ runLength: 1000 }));
     expect(run.phase).toBeCloseTo(50, 6); // y = 20 sin(2πx/200) peaks at x = 50
     expect(run.crestLevel).toBeCloseTo(20, 6);
     expect(run.periods).toBe(5);
     expect(run.eachEnd).toBe(0);
-    for (const x of [0, 37, 100, 555, 1000]) expect(yAt(run.profile, x)).toBeCloseTo(20 * Math.sin((2 * Math.PI * (x + 50)) / 200), 1);
+    for (const x of [0, 37, 100, 555, 1000])
+      expect(yAt(run.profile, x)).toBeCloseTo(20 * Math.sin((2 * Math.PI * (x + 50)) / 200), 1);
   });
 
   it("inches: converts the design ×25.4", async () => {

@@ -44,7 +44,8 @@ describe("SVG export", () => {
     });
     // Each layer its own stroke colour.
     expect(new Set(Object.values(LAYER_COLOUR)).size).toBe(5);
-    for (const [layer, colour] of Object.entries(LAYER_COLOUR)) expect(svg).toContain(`<g id="${layer}" fill="none" stroke="${colour}"`);
+    for (const [layer, colour] of Object.entries(LAYER_COLOUR))
+      expect(svg).toContain(`<g id="${layer}" fill="none" stroke="${colour}"`);
   });
 
   it("is true scale in inches", () => {
@@ -54,7 +55,12 @@ describe("SVG export", () => {
     expect(svg).toMatch(/height="48.0315in"/); // 1220 / 25.4
     expect(svg).toMatch(/viewBox="0 0 96.06299 48.0315"/);
     const ref = points(pathsIn(svg, "REFERENCE")[0]);
-    expect(ref).toEqual([[0, 48.0315], [96.06299, 48.0315], [96.06299, 0], [0, 0]]);
+    expect(ref).toEqual([
+      [0, 48.0315],
+      [96.06299, 48.0315],
+      [96.06299, 0],
+      [0, 0],
+    ]);
   });
 
   it("the preview adds a paper background and part fills", () => {

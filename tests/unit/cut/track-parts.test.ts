@@ -87,7 +87,8 @@ describe("square-wheel trike run: track parts", () => {
     }
     // Greedy: no segment could have reached the next crest.
     const reach = keyShape(plan.settings.joint).reach + 6;
-    for (let i = 0; i + 1 < track.length; i++) expect(track[i].station!.x1 + P - track[i].station!.x0 + reach).toBeGreaterThan(usable);
+    for (let i = 0; i + 1 < track.length; i++)
+      expect(track[i].station!.x1 + P - track[i].station!.x0 + reach).toBeGreaterThan(usable);
     expect(track.map((p) => p.station!.x0)).toEqual([0, ...run.cuts]);
     expect(track[track.length - 1].station!.x1).toBe(6000);
   });
@@ -112,7 +113,8 @@ describe("square-wheel trike run: track parts", () => {
   it("keys mate: tongue and slot do not overlap, and the pieces cover the run less clearance and dogbones", () => {
     const run = plan.run!;
     const ringsRun = track.map((p) => ({ outer: inRun(p), holes: [] as Pt[][] }));
-    for (let i = 0; i + 1 < ringsRun.length; i++) expect(pcIntersectionArea(ringsRun[i], ringsRun[i + 1])).toBeLessThan(1e-6);
+    for (let i = 0; i + 1 < ringsRun.length; i++)
+      expect(pcIntersectionArea(ringsRun[i], ringsRun[i + 1])).toBeLessThan(1e-6);
     // The whole band under the engine's profile, as one polygon.
     const band: Pt[] = [[0, run.baseY], [6000, run.baseY], ...run.profile.slice().reverse()];
     const k = keyShape(plan.settings.joint);
@@ -138,26 +140,39 @@ describe("square-wheel trike run: track parts", () => {
 
   it("keeps support holes clear of the joints and on the base band's centre line", () => {
     const run = plan.run!;
-    for (const x of run.supports) for (const c of run.cuts) {
-      const [a, b] = jointZone(c, plan.settings);
-      expect(x <= a || x >= b).toBe(true);
-    }
+    for (const x of run.supports)
+      for (const c of run.cuts) {
+        const [a, b] = jointZone(c, plan.settings);
+        expect(x <= a || x >= b).toBe(true);
+      }
     const spans = run.supports.slice(1).map((x, i) => x - run.supports[i]);
     expect(Math.max(...spans)).toBeLessThanOrEqual(600 + 1e-9); // the default support spacing
     for (const p of track) for (const d of p.drill) expect(d.y).toBeCloseTo(40, 9); // 80 mm base band / 2
   });
 
   it("dowel joints: holes on a shared centre line, matching the splice plate", () => {
-    const d = buildCutParts(SQUARE_SPEC, squareResult(), { ...DEMO_SETTINGS, joint: { kind: "dowel" } }, { font: font() });
+    const d = buildCutParts(
+      SQUARE_SPEC,
+      squareResult(),
+      { ...DEMO_SETTINGS, joint: { kind: "dowel" } },
+      { font: font() },
+    );
     const plate = d.parts.find((p) => p.kind === "splice")!;
     const segs = d.parts.filter((p) => p.kind === "track");
     expect(plate.quantity).toBe(2 * 2 * d.run!.cuts.length); // two faces × two track lines × joints
     const g = spliceGeometry(d.settings);
     d.run!.cuts.forEach((cut, i) => {
       // Holes of both segments near the joint, in run coordinates.
-      const near = [segs[i], segs[i + 1]].flatMap((p) => p.drill.map((h) => [h.x + p.runOffset![0], h.y + p.runOffset![1]] as Pt)).filter(([x]) => Math.abs(x - cut) < g.half);
+      const near = [segs[i], segs[i + 1]]
+        .flatMap((p) => p.drill.map((h) => [h.x + p.runOffset![0], h.y + p.runOffset![1]] as Pt))
+        .filter(([x]) => Math.abs(x - cut) < g.half);
       const plateHoles = plate.drill.map((h) => [h.x - g.half + cut, h.y] as Pt);
-      expect(near.map((p) => p[0]).sort((a, b) => a - b)).toEqual(plateHoles.map((p) => p[0]).sort((a, b) => a - b).map((x) => expect.closeTo(x, 9)));
+      expect(near.map((p) => p[0]).sort((a, b) => a - b)).toEqual(
+        plateHoles
+          .map((p) => p[0])
+          .sort((a, b) => a - b)
+          .map((x) => expect.closeTo(x, 9)),
+      );
       for (const [, y] of near) expect(y).toBeCloseTo(d.run!.centreY, 9);
     });
     // Straight vertical ends: each segment is exactly the band between its stations.

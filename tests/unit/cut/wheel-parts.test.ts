@@ -50,19 +50,31 @@ describe("wheel parts", () => {
     // As large as the rims allow: the binding rim is met within the polygon's chord tolerance.
     const gaps = holes.flatMap((h, i) => {
       const g = jPolygon({ outer: h, holes: [] });
-      return [jDistance(g, outline), jDistance(g, bore), jDistance(g, jPolygon({ outer: holes[(i + 1) % holes.length], holes: [] }))];
+      return [
+        jDistance(g, outline),
+        jDistance(g, bore),
+        jDistance(g, jPolygon({ outer: holes[(i + 1) % holes.length], holes: [] })),
+      ];
     });
     expect(Math.min(...gaps)).toBeLessThan(rim + 0.02);
     // The label stays clear of every hole.
-    for (const s2 of w.engrave) for (const p of s2) for (const h of w.region.holes) expect(jDistance(jPoint(p), jRing(h))).toBeGreaterThan(1);
+    for (const s2 of w.engrave)
+      for (const p of s2) for (const h of w.region.holes) expect(jDistance(jPoint(p), jRing(h))).toBeGreaterThan(1);
   });
 
   it("partner and twin modes: two wheel parts and no track", () => {
-    const spec = { mode: "partner-wheel", wheel: { kind: "ellipse", semiMajor: 100, semiMinor: 60, axle: "focus" }, lobes: 1 } as const;
+    const spec = {
+      mode: "partner-wheel",
+      wheel: { kind: "ellipse", semiMajor: 100, semiMinor: 60, axle: "focus" },
+      lobes: 1,
+    } as const;
     const r = solve(spec);
     const plan = buildCutParts(spec, r, { wheelCount: 1, boreDiameter: 10 });
     expect(plan.run).toBeNull();
-    expect(plan.parts.map((p) => [p.id, p.kind])).toEqual([["W1", "wheel"], ["P1", "partner"]]);
+    expect(plan.parts.map((p) => [p.id, p.kind])).toEqual([
+      ["W1", "wheel"],
+      ["P1", "partner"],
+    ]);
     // Both outlines about their own axle: the partner's radii lie in [a − rMax, a − rMin] (Litvin et al. 2009: r₂ = a − r₁).
     const p1 = plan.parts[1].region.outer.map(([x, y]) => Math.hypot(x, y));
     expect(Math.min(...p1)).toBeCloseTo(r.centreDistance! - r.wheel.rMax, 6);

@@ -9,10 +9,24 @@ import { solve, type SolveResult } from "@/lib/track";
 
 const SPECS: Record<string, unknown> = {
   square: { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 } },
-  hexagon: { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 6, inradius: 100, cornerRadius: 0 } },
-  "sine track": { mode: "wheel-for-track", units: "mm", track: { kind: "sine", amplitude: 15, period: 200 }, periodsPerTurn: 4 },
+  hexagon: {
+    mode: "track-for-wheel",
+    units: "mm",
+    wheel: { kind: "polygon", sides: 6, inradius: 100, cornerRadius: 0 },
+  },
+  "sine track": {
+    mode: "wheel-for-track",
+    units: "mm",
+    track: { kind: "sine", amplitude: 15, period: 200 },
+    periodsPerTurn: 4,
+  },
   twins: { mode: "twin-wheels", units: "mm", track: { kind: "sine", amplitude: 20, period: 300 }, periodsPerTurn: 2 },
-  partner: { mode: "partner-wheel", units: "mm", wheel: { kind: "ellipse", semiMajor: 120, semiMinor: 80, axle: "focus" }, lobes: 1 },
+  partner: {
+    mode: "partner-wheel",
+    units: "mm",
+    wheel: { kind: "ellipse", semiMajor: 120, semiMinor: 80, axle: "focus" },
+    lobes: 1,
+  },
 };
 
 const results: Record<string, SolveResult> = {};

@@ -28,9 +28,33 @@ describe("cosSin", () => {
 
 describe("rotate, then translate", () => {
   it("turns (1, 0) to (0, 1) exactly by a quarter turn, straight edges staying straight", () => {
-    expect(rotateRing([[1, 0], [2, 3]], 90)).toEqual([[0, 1], [-3, 2]]);
-    const square = rotateRing([[0, 0], [10, 0], [10, 5], [0, 5]], 270);
-    expect(square).toEqual([[0, 0], [0, -10], [5, -10], [5, 0]]);
+    expect(
+      rotateRing(
+        [
+          [1, 0],
+          [2, 3],
+        ],
+        90,
+      ),
+    ).toEqual([
+      [0, 1],
+      [-3, 2],
+    ]);
+    const square = rotateRing(
+      [
+        [0, 0],
+        [10, 0],
+        [10, 5],
+        [0, 5],
+      ],
+      270,
+    );
+    expect(square).toEqual([
+      [0, 0],
+      [0, -10],
+      [5, -10],
+      [5, 0],
+    ]);
   });
 
   it("turns by hand-worked values at 30°: (2, 0) → (√3, 1)", () => {
@@ -40,9 +64,18 @@ describe("rotate, then translate", () => {
   });
 
   it("rotates about the part's own origin first, then moves (not the other way round)", () => {
-    const ring: Pt[] = [[1, 0], [1, 1]];
-    expect(placeRing(ring, 90, 10, 20)).toEqual([[10, 21], [9, 21]]);
+    const ring: Pt[] = [
+      [1, 0],
+      [1, 1],
+    ];
+    expect(placeRing(ring, 90, 10, 20)).toEqual([
+      [10, 21],
+      [9, 21],
+    ]);
     expect(placeRing(ring, 90, 10, 20)).toEqual(translate(rotateRing(ring, 90), 10, 20));
-    expect(ring.map(placer(180, -1, 1))).toEqual([[-2, 1], [-2, 0]]);
+    expect(ring.map(placer(180, -1, 1))).toEqual([
+      [-2, 1],
+      [-2, 0],
+    ]);
   });
 });

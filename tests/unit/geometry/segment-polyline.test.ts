@@ -18,7 +18,12 @@ describe("distances", () => {
   });
 
   it("to a ring's edges, closed or open", () => {
-    const square: Pt[] = [[0, 0], [4, 0], [4, 4], [0, 4]];
+    const square: Pt[] = [
+      [0, 0],
+      [4, 0],
+      [4, 4],
+      [0, 4],
+    ];
     expect(distToRing([1, 2], square)).toBe(1);
     // Open, the closing edge from (0, 4) back to (0, 0) is not there.
     expect(distToRing([1, 2], square, false)).toBe(2);
@@ -26,7 +31,12 @@ describe("distances", () => {
 });
 
 describe("a left-to-right polyline", () => {
-  const poly: Pt[] = [[0, 0], [10, 5], [20, 5], [30, -5]];
+  const poly: Pt[] = [
+    [0, 0],
+    [10, 5],
+    [20, 5],
+    [30, -5],
+  ];
 
   it("y at x by linear interpolation, held flat past the ends", () => {
     expect(yAt(poly, 5)).toBe(2.5);
@@ -37,6 +47,11 @@ describe("a left-to-right polyline", () => {
   });
 
   it("the stretch between two x, with exact end points", () => {
-    expect(sliceByX(poly, 5, 25)).toEqual([[5, 2.5], [10, 5], [20, 5], [25, 0]]);
+    expect(sliceByX(poly, 5, 25)).toEqual([
+      [5, 2.5],
+      [10, 5],
+      [20, 5],
+      [25, 0],
+    ]);
   });
 });

@@ -36,7 +36,12 @@ describe("the helper", () => {
     expect(after.grip.ok).toBe(true);
     expect(after.cautions.some((c) => c.check === "grip")).toBe(false);
     // One side fewer does not clear it: the suggestion is the smallest such change.
-    const fewer = checkLoads(loadsInputSchema.parse({ ...base, spec: { ...base.spec as object, wheel: { kind: "polygon", sides: 13, side: 400 } } }));
+    const fewer = checkLoads(
+      loadsInputSchema.parse({
+        ...base,
+        spec: { ...(base.spec as object), wheel: { kind: "polygon", sides: 13, side: 400 } },
+      }),
+    );
     expect(fewer.grip.ok).toBe(false);
   });
 
@@ -49,16 +54,28 @@ describe("the helper", () => {
 
   it("a corner radius for steel on steel: the smallest that clears the contact check", () => {
     const steel = { modulusGpa: 200, poisson: 0.3, allowableMpa: 250 };
-    const base = input({ use: "push-along", spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: 6, inradius: 100 } }, wheel: { ...steel, treadWidthMm: 10 }, track: { ...steel, widthMm: 40, depthMm: 40, supportSpanMm: 300 } });
+    const base = input({
+      use: "push-along",
+      spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: 6, inradius: 100 } },
+      wheel: { ...steel, treadWidthMm: 10 },
+      track: { ...steel, widthMm: 40, depthMm: 40, supportSpanMm: 300 },
+    });
     const report = checkLoads(base);
     expect(report.contact.radiusMm).toBe(0);
-    expect(report.cautions.find((c) => c.check === "contact")?.avoid).toMatch(/Needs a corner radius: round the wheel's corners to at least/);
+    expect(report.cautions.find((c) => c.check === "contact")?.avoid).toMatch(
+      /Needs a corner radius: round the wheel's corners to at least/,
+    );
     const s = suggestFixes(base, report).find((x) => x.check === "contact" && x.spec);
     expect(s).toBeDefined();
     const rc = (s!.spec!.wheel as { cornerRadius: number }).cornerRadius;
     expect(rc).toBe(report.contact.cornerRadiusNeeded);
     expect(checkLoads(applied(base, s!)).contact.ok).toBe(true);
-    const smaller = checkLoads(loadsInputSchema.parse({ ...base, spec: { ...(s!.spec as object), wheel: { ...(s!.spec!.wheel as object), cornerRadius: rc - 0.5 } } }));
+    const smaller = checkLoads(
+      loadsInputSchema.parse({
+        ...base,
+        spec: { ...(s!.spec as object), wheel: { ...(s!.spec!.wheel as object), cornerRadius: rc - 0.5 } },
+      }),
+    );
     expect(smaller.contact.ok).toBe(false);
   });
 
@@ -72,7 +89,13 @@ describe("the helper", () => {
   });
 
   it("a lower design speed when the wheel's own inertia tips the grip over", () => {
-    const base = input({ mu: 1.35, traction: 0, use: "push-along", speedMps: 3, wheel: { ...plywood, treadWidthMm: 36, densityKgM3: 680 } });
+    const base = input({
+      mu: 1.35,
+      traction: 0,
+      use: "push-along",
+      speedMps: 3,
+      wheel: { ...plywood, treadWidthMm: 36, densityKgM3: 680 },
+    });
     expect(checkLoads(loadsInputSchema.parse({ ...base, speedMps: 0.1 })).grip.ok).toBe(true);
     const report = checkLoads(base);
     expect(report.grip.ok).toBe(false);

@@ -58,11 +58,13 @@ describe("Hertz line contact", () => {
   });
 
   it("a circle of 150 mm on its flat road, steel on steel, 1000 N over 50 mm (the derived vector of docs/safety.md §2.3: E* 115.4 GPa, a 0.182 mm, p₀ 70.0 MPa, τ 21.0 MPa at 0.143 mm)", () => {
-    const report = checkLoads(input({ spec: { mode: "track-for-wheel", wheel: { kind: "circle", radius: 150 } }, load: { wheelLoadN: 1000 } }));
+    const report = checkLoads(
+      input({ spec: { mode: "track-for-wheel", wheel: { kind: "circle", radius: 150 } }, load: { wheelLoadN: 1000 } }),
+    );
     const c = report.contact;
     expect(rel(c.radiusMm, 150)).toBeLessThan(1e-9);
     // Closed form a = √(4P′R/(πE*)), p₀ = √(P′E*/(πR)) (Johnson 1985 §4.2), worked here by hand:
-    const eStar = 1 / (2 * (1 - 0.09) / 210e3);
+    const eStar = 1 / ((2 * (1 - 0.09)) / 210e3);
     expect(Math.abs(eStar - 115.4e3)).toBeLessThan(50);
     expect(rel(c.halfWidthMm, Math.sqrt((4 * 20 * 150) / (Math.PI * eStar)))).toBeLessThan(1e-9);
     expect(rel(c.pMaxMpa!, Math.sqrt((20 * eStar) / (Math.PI * 150)))).toBeLessThan(1e-9);
@@ -93,13 +95,22 @@ describe("grip", () => {
     [5, 0.7265],
     [6, 0.5774],
     [8, 0.4142],
-  ])("T5: a regular %i-gon under a vertical load needs μ = tan(π/n) = %f (friction cone; docs/safety.md T5)", (n, mu) => {
-    const report = checkLoads(input({ spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: n, inradius: 100 } } }));
-    expect(Math.abs(report.grip.needed - mu)).toBeLessThan(5e-5);
-  });
+  ])(
+    "T5: a regular %i-gon under a vertical load needs μ = tan(π/n) = %f (friction cone; docs/safety.md T5)",
+    (n, mu) => {
+      const report = checkLoads(
+        input({ spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: n, inradius: 100 } } }),
+      );
+      expect(Math.abs(report.grip.needed - mu)).toBeLessThan(5e-5);
+    },
+  );
 
   it("T6: an ellipse about its centre, a/b = 2, needs 0.75 = (a² − b²)/(2ab) at a tilt of 36.87°", () => {
-    const report = checkLoads(input({ spec: { mode: "track-for-wheel", wheel: { kind: "ellipse", semiMajor: 200, semiMinor: 100, axle: "centre" } } }));
+    const report = checkLoads(
+      input({
+        spec: { mode: "track-for-wheel", wheel: { kind: "ellipse", semiMajor: 200, semiMinor: 100, axle: "centre" } },
+      }),
+    );
     expect(Math.abs(report.grip.needed - 0.75)).toBeLessThan(1e-6);
     expect(Math.abs((Math.atan(report.grip.needed) * 180) / Math.PI - 36.87)).toBeLessThan(0.005);
   });
@@ -138,17 +149,34 @@ describe("dynamics", () => {
   });
 
   it("the polar second moment of a disc is πR⁴/2 and of a square s⁴/6 (standard section tables)", () => {
-    const disc = Array.from({ length: 4000 }, (_, i): [number, number] => [Math.cos((2 * Math.PI * i) / 4000), Math.sin((2 * Math.PI * i) / 4000)]);
+    const disc = Array.from({ length: 4000 }, (_, i): [number, number] => [
+      Math.cos((2 * Math.PI * i) / 4000),
+      Math.sin((2 * Math.PI * i) / 4000),
+    ]);
     expect(rel(polarSecondMoment(disc), Math.PI / 2)).toBeLessThan(1e-5);
-    expect(rel(polarSecondMoment([[-1, -1], [1, -1], [1, 1], [-1, 1]]), 16 / 6)).toBeLessThan(1e-14);
+    expect(
+      rel(
+        polarSecondMoment([
+          [-1, -1],
+          [1, -1],
+          [1, 1],
+          [-1, 1],
+        ]),
+        16 / 6,
+      ),
+    ).toBeLessThan(1e-14);
   });
 
   it("the wheel's own inertia adds to the traction the corner needs (the example of docs/safety.md §2.1: I 0.5 kg·m², 1.5 m/s, r 0.15 m, 400 N → h 0.29)", () => {
     // H = I·α/ρ with α = v² tan ψ / ρ² at the corner ρ = r√2: 0.5 × 50 / 0.2121 / 400 = 0.295.
     const h = (0.5 * alphaAt(1.5, 0.15 * Math.SQRT2, 1)) / (0.15 * Math.SQRT2) / 400;
     expect(Math.abs(h - 0.29)).toBeLessThan(0.01);
-    const still = checkLoads(input({ speedMps: 0.01, wheel: { modulusGpa: 9, poisson: 0.3, treadWidthMm: 18, densityKgM3: 680 } }));
-    const fast = checkLoads(input({ speedMps: 3, wheel: { modulusGpa: 9, poisson: 0.3, treadWidthMm: 18, densityKgM3: 680 } }));
+    const still = checkLoads(
+      input({ speedMps: 0.01, wheel: { modulusGpa: 9, poisson: 0.3, treadWidthMm: 18, densityKgM3: 680 } }),
+    );
+    const fast = checkLoads(
+      input({ speedMps: 3, wheel: { modulusGpa: 9, poisson: 0.3, treadWidthMm: 18, densityKgM3: 680 } }),
+    );
     expect(still.grip.tractionShare).toBeLessThan(1e-4);
     expect(fast.grip.tractionShare).toBeGreaterThan(0.01);
     expect(fast.grip.needed).toBeGreaterThan(still.grip.needed);
@@ -162,18 +190,26 @@ describe("track deflection", () => {
     expect(Math.abs(d.point - 1.715)).toBeLessThan(0.0005); // PL³/48EI (Gere, Table G-2)
     expect(Math.abs(deflectionLimit(600, null) - 1.667)).toBeLessThan(0.0005); // IBC Table 1604.3
     const report = checkLoads(
-      input({ load: { wheelLoadN: 500 }, spec: { mode: "track-for-wheel", wheel: { kind: "circle", radius: 100 } }, track: { modulusGpa: 9, poisson: 0.3, widthMm: 300, depthMm: 18, supportSpanMm: 600 } }),
+      input({
+        load: { wheelLoadN: 500 },
+        spec: { mode: "track-for-wheel", wheel: { kind: "circle", radius: 100 } },
+        track: { modulusGpa: 9, poisson: 0.3, widthMm: 300, depthMm: 18, supportSpanMm: 600 },
+      }),
     );
     expect(report.deflection.ok).toBe(false);
     expect(report.cautions.some((c) => c.check === "deflection")).toBe(true);
     // The longest span that passes: PL³/48EI = L/360 → L = √(48EI/(360P)) = 587.9 mm (solved by hand).
-    expect(Math.abs(longestSpan(beam, 500, null) - Math.sqrt((48 * 9000 * ((300 * 18 ** 3) / 12)) / (360 * 500)))).toBeLessThan(0.1);
+    expect(
+      Math.abs(longestSpan(beam, 500, null) - Math.sqrt((48 * 9000 * ((300 * 18 ** 3) / 12)) / (360 * 500))),
+    ).toBeLessThan(0.1);
   });
 
   it("its own weight: 5wL⁴/384EI (Gere, Table G-2), w from the density", () => {
     const beam = { width: 300, depth: 18, modulus: 9000, density: 680 };
     const w = (680 * 9.80665 * 300 * 18) / 1e9;
-    expect(rel(deflections(beam, 600, 0).self, (5 * w * 600 ** 4) / (384 * 9000 * ((300 * 18 ** 3) / 12)))).toBeLessThan(1e-12);
+    expect(
+      rel(deflections(beam, 600, 0).self, (5 * w * 600 ** 4) / (384 * 9000 * ((300 * 18 ** 3) / 12))),
+    ).toBeLessThan(1e-12);
   });
 
   it("the hump's share: a shallow hump tightens the limit below L/360 (5 % of the hump: common practice)", () => {
@@ -184,11 +220,17 @@ describe("track deflection", () => {
 
 describe("interference and units", () => {
   it("T11: the triangle's vertex cuts the next hump (the sampled check of docs/safety.md T11: 0.095 r), and it is flagged", () => {
-    const report = checkLoads(input({ spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: 3, inradius: 1 } } }));
+    const report = checkLoads(
+      input({ spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: 3, inradius: 1 } } }),
+    );
     const c = report.cautions.find((x) => x.check === "interference");
     expect(c).toBeDefined();
     expect(c!.signal).toBe("CAUTION"); // push-along; WARNING on a ride-on
-    expect(checkLoads(input({ use: "ride-on", spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: 3, inradius: 1 } } })).cautions.find((x) => x.check === "interference")!.signal).toBe("WARNING");
+    expect(
+      checkLoads(
+        input({ use: "ride-on", spec: { mode: "track-for-wheel", wheel: { kind: "polygon", sides: 3, inradius: 1 } } }),
+      ).cautions.find((x) => x.check === "interference")!.signal,
+    ).toBe("WARNING");
     // The 0.095 r of docs/safety.md T11 is how far the vertex dips below the road, measured straight down; the
     // engine measures along the ray from the axle, which is shorter for a vertex coming in at a
     // slant (0.064 r), and more than the shortest distance to the road (0.032 r, sampled by hand).

@@ -12,8 +12,12 @@ const tsx = join(root, "node_modules/tsx/dist/cli.mjs");
 
 function nest(...args: string[]): Promise<{ code: number; stdout: string; stderr: string }> {
   return new Promise((resolve) => {
-    execFile(process.execPath, [tsx, "scripts/nest.ts", ...args], { cwd: root, timeout: 60_000 }, (error, stdout, stderr) =>
-      resolve({ code: error ? ((error as { code?: number }).code ?? 1) : 0, stdout, stderr }),
+    execFile(
+      process.execPath,
+      [tsx, "scripts/nest.ts", ...args],
+      { cwd: root, timeout: 60_000 },
+      (error, stdout, stderr) =>
+        resolve({ code: error ? ((error as { code?: number }).code ?? 1) : 0, stdout, stderr }),
     );
   });
 }
@@ -36,13 +40,29 @@ describe("scripts/nest.ts", () => {
 
   it.each([
     ["a missing file", () => join(dir, "nope.json"), /does not exist/],
-    ["a file over 5 MB", () => (writeFileSync(join(dir, "big.json"), " ".repeat(5 * 1024 * 1024 + 1)), join(dir, "big.json")), /limited to 5 MB/],
-    ["a file that is not JSON", () => (writeFileSync(join(dir, "bad.json"), "{ items: "), join(dir, "bad.json")), /not valid JSON/],
-    ["an instance without items", () => (writeFileSync(join(dir, "empty.json"), '{"strip_height": 4, "items": []}'), join(dir, "empty.json")), /no items/],
-  ])("refuses %s with exit code 1", async (_what, file, message) => {
-    const r = await nest(file());
-    expect(r.code).toBe(1);
-    expect(r.stdout).toBe("");
-    expect(r.stderr).toMatch(message);
-  }, 30_000);
+    [
+      "a file over 5 MB",
+      () => (writeFileSync(join(dir, "big.json"), " ".repeat(5 * 1024 * 1024 + 1)), join(dir, "big.json")),
+      /limited to 5 MB/,
+    ],
+    [
+      "a file that is not JSON",
+      () => (writeFileSync(join(dir, "bad.json"), "{ items: "), join(dir, "bad.json")),
+      /not valid JSON/,
+    ],
+    [
+      "an instance without items",
+      () => (writeFileSync(join(dir, "empty.json"), '{"strip_height": 4, "items": []}'), join(dir, "empty.json")),
+      /no items/,
+    ],
+  ])(
+    "refuses %s with exit code 1",
+    async (_what, file, message) => {
+      const r = await nest(file());
+      expect(r.code).toBe(1);
+      expect(r.stdout).toBe("");
+      expect(r.stderr).toMatch(message);
+    },
+    30_000,
+  );
 });

@@ -22,7 +22,12 @@ export interface Checked {
 }
 
 /** Every copy once, rotations from the allowed set, no overlaps, inside `container`. */
-export function expectValidLayout(items: readonly NestItem[], placements: readonly Placement[], container: Box, gapOfInterest = 0): Checked {
+export function expectValidLayout(
+  items: readonly NestItem[],
+  placements: readonly Placement[],
+  container: Box,
+  gapOfInterest = 0,
+): Checked {
   const byId = new Map(items.map((it) => [it.id, it]));
   const seen = new Set<string>();
   for (const p of placements) {
@@ -36,7 +41,10 @@ export function expectValidLayout(items: readonly NestItem[], placements: readon
     expect(it!.rotations, `${key} rotation ${p.rotation}`).toContain(p.rotation);
     expect(Number.isFinite(p.x) && Number.isFinite(p.y)).toBe(true);
   }
-  const parts = placements.map((p) => ({ label: `${p.id}#${p.copy}`, ring: placedRing(byId.get(p.id)!.polygon as XY[], p.rotation, p.x, p.y) }));
+  const parts = placements.map((p) => ({
+    label: `${p.id}#${p.copy}`,
+    ring: placedRing(byId.get(p.id)!.polygon as XY[], p.rotation, p.x, p.y),
+  }));
   const report = checkLayout(parts, container, gapOfInterest);
   expect(report.worstOverlap, `overlap ${report.worstOverlapPair?.join(" / ")}`).toBeLessThanOrEqual(AREA_TOLERANCE);
   expect(report.worstOutside, `outside the container: ${report.worstOutsidePart}`).toBeLessThanOrEqual(AREA_TOLERANCE);
@@ -44,7 +52,11 @@ export function expectValidLayout(items: readonly NestItem[], placements: readon
 }
 
 /** Strip layouts: every copy of every item placed exactly once, inside [0, length] × [0, height]. */
-export function expectValidStrip(items: readonly NestItem[], result: { placements: Placement[]; length: number; utilisation: number }, height: number): Checked {
+export function expectValidStrip(
+  items: readonly NestItem[],
+  result: { placements: Placement[]; length: number; utilisation: number },
+  height: number,
+): Checked {
   const copies = items.reduce((s, it) => s + it.quantity, 0);
   expect(result.placements.length).toBe(copies);
   const checked = expectValidLayout(items, result.placements, { minX: 0, minY: 0, maxX: result.length, maxY: height });

@@ -5,10 +5,15 @@ import { loadInstance, MAX_TOTAL_COPIES } from "@/lib/nest";
 import { areaOf, type XY } from "../../support/independent-geometry";
 import { readFixture } from "./layout-check";
 
-type Raw = { name: string; strip_height: number; items: Array<{ id: number; demand: number; allowed_orientations: number[]; shape: { type: string; data: XY[] } }> };
+type Raw = {
+  name: string;
+  strip_height: number;
+  items: Array<{ id: number; demand: number; allowed_orientations: number[]; shape: { type: string; data: XY[] } }>;
+};
 
 const rawArea = (raw: Raw) => raw.items.reduce((s, it) => s + it.demand * areaOf(it.shape.data), 0);
-const loadedArea = (inst: ReturnType<typeof loadInstance>) => inst.items.reduce((s, it) => s + it.quantity * areaOf(it.polygon as XY[]), 0);
+const loadedArea = (inst: ReturnType<typeof loadInstance>) =>
+  inst.items.reduce((s, it) => s + it.quantity * areaOf(it.polygon as XY[]), 0);
 
 /** The OR-Datasets (PascalCase) form of an instance in the sparrow (snake_case) form. */
 function toPascalCase(raw: Raw) {
@@ -54,8 +59,31 @@ describe("loadInstance", () => {
       });
       expect(twice).toBeGreaterThan(0);
     });
-    const clockwise = loadInstance({ name: "cw", strip_height: 5, items: [{ demand: 1, shape: { type: "simple_polygon", data: [[0, 0], [0, 2], [3, 2], [3, 0], [0, 0]] } }] });
-    expect(clockwise.items[0].polygon).toEqual([[3, 0], [3, 2], [0, 2], [0, 0]]);
+    const clockwise = loadInstance({
+      name: "cw",
+      strip_height: 5,
+      items: [
+        {
+          demand: 1,
+          shape: {
+            type: "simple_polygon",
+            data: [
+              [0, 0],
+              [0, 2],
+              [3, 2],
+              [3, 0],
+              [0, 0],
+            ],
+          },
+        },
+      ],
+    });
+    expect(clockwise.items[0].polygon).toEqual([
+      [3, 0],
+      [3, 2],
+      [0, 2],
+      [0, 0],
+    ]);
     expect(clockwise.items[0].id).toBe("0"); // no id in the file: the item's index
     expect(clockwise.items[0].rotations).toEqual([0]);
   });
@@ -69,20 +97,97 @@ describe("loadInstance", () => {
     }
   });
 
-  const square = { demand: 1, shape: { type: "simple_polygon", data: [[0, 0], [1, 0], [1, 1], [0, 1]] } };
+  const square = {
+    demand: 1,
+    shape: {
+      type: "simple_polygon",
+      data: [
+        [0, 0],
+        [1, 0],
+        [1, 1],
+        [0, 1],
+      ],
+    },
+  };
   it.each([
     ["not an object", [], /JSON object/],
     ["no items", { strip_height: 10 }, /no items/],
     ["an empty item list", { strip_height: 10, items: [] }, /no items/],
     ["no strip height", { items: [square] }, /strip height/],
     ["a negative strip height", { strip_height: -1, items: [square] }, /strip height/],
-    ["a non-numeric point", { strip_height: 10, items: [{ demand: 1, shape: { data: [[0, 0], ["1", 0], [1, 1]] } }] }, /item 0: point 1 is not a pair of finite numbers/],
-    ["fewer than 3 points", { strip_height: 10, items: [{ demand: 1, shape: { data: [[0, 0], [1, 0], [0, 0]] } }] }, /at least 3 distinct points/],
-    ["zero area", { strip_height: 10, items: [{ demand: 1, shape: { data: [[0, 0], [1, 1], [2, 2]] } }] }, /zero area/],
-    ["demand below 1", { strip_height: 10, items: [{ ...square, demand: 0 }] }, /demand must be a whole number of at least 1/],
+    [
+      "a non-numeric point",
+      {
+        strip_height: 10,
+        items: [
+          {
+            demand: 1,
+            shape: {
+              data: [
+                [0, 0],
+                ["1", 0],
+                [1, 1],
+              ],
+            },
+          },
+        ],
+      },
+      /item 0: point 1 is not a pair of finite numbers/,
+    ],
+    [
+      "fewer than 3 points",
+      {
+        strip_height: 10,
+        items: [
+          {
+            demand: 1,
+            shape: {
+              data: [
+                [0, 0],
+                [1, 0],
+                [0, 0],
+              ],
+            },
+          },
+        ],
+      },
+      /at least 3 distinct points/,
+    ],
+    [
+      "zero area",
+      {
+        strip_height: 10,
+        items: [
+          {
+            demand: 1,
+            shape: {
+              data: [
+                [0, 0],
+                [1, 1],
+                [2, 2],
+              ],
+            },
+          },
+        ],
+      },
+      /zero area/,
+    ],
+    [
+      "demand below 1",
+      { strip_height: 10, items: [{ ...square, demand: 0 }] },
+      /demand must be a whole number of at least 1/,
+    ],
     ["a fractional demand", { strip_height: 10, items: [{ ...square, demand: 1.5 }] }, /demand/],
-    ["too many copies", { strip_height: 10, items: [{ ...square, demand: MAX_TOTAL_COPIES + 1 }] }, /more than 5000 copies/],
-    ["an unknown shape type", { strip_height: 10, items: [{ demand: 1, shape: { type: "circle", data: [] } }] }, /not supported/],
+    [
+      "too many copies",
+      { strip_height: 10, items: [{ ...square, demand: MAX_TOTAL_COPIES + 1 }] },
+      /more than 5000 copies/,
+    ],
+    [
+      "an unknown shape type",
+      { strip_height: 10, items: [{ demand: 1, shape: { type: "circle", data: [] } }] },
+      /not supported/,
+    ],
     ["a bad orientation", { strip_height: 10, items: [{ ...square, allowed_orientations: ["up"] }] }, /orientation/],
   ])("refuses %s with a plain message", (_what, json, message) => {
     expect(() => loadInstance(json)).toThrow(message);

@@ -17,7 +17,12 @@ beforeAll(async () => {
 });
 
 const S = 1000; // integer steps per unit in these tests
-const sq = (x: number, y: number, s: number): XY[] => [[x, y], [x + s, y], [x + s, y + s], [x, y + s]];
+const sq = (x: number, y: number, s: number): XY[] => [
+  [x, y],
+  [x + s, y],
+  [x + s, y + s],
+  [x, y + s],
+];
 const netArea = (paths: clipper.Paths) => paths.reduce((s, p) => s + lib.area(p), 0) / (S * S);
 
 /** Winding of the NFP at q: +1 inside an outer ring, −1 inside a hole; null on a boundary. */
@@ -43,13 +48,46 @@ describe("Minkowski sum", () => {
   });
 
   it("a × b box ⊕ −(c × d box) has area (a + c)(b + d) (closed form)", () => {
-    const nfp = noFitPolygon(lib, toPath([[0, 0], [7, 0], [7, 3], [0, 3]], S), toPath([[0, 0], [2, 0], [2, 5], [0, 5]], S));
+    const nfp = noFitPolygon(
+      lib,
+      toPath(
+        [
+          [0, 0],
+          [7, 0],
+          [7, 3],
+          [0, 3],
+        ],
+        S,
+      ),
+      toPath(
+        [
+          [0, 0],
+          [2, 0],
+          [2, 5],
+          [0, 5],
+        ],
+        S,
+      ),
+    );
     expect(netArea(nfp)).toBeCloseTo(9 * 8, 9);
   });
 
   it("keeps a genuine hole: a 4 × 4 square inside the 6 × 6 cavity of a 10 × 10 block has 2 × 2 of free positions", () => {
     // The block's cavity (2..8 × 2..8) opens to the right edge through a slot 1 wide, too narrow for the square.
-    const block: XY[] = [[0, 0], [10, 0], [10, 4.5], [8, 4.5], [8, 2], [2, 2], [2, 8], [8, 8], [8, 5.5], [10, 5.5], [10, 10], [0, 10]];
+    const block: XY[] = [
+      [0, 0],
+      [10, 0],
+      [10, 4.5],
+      [8, 4.5],
+      [8, 2],
+      [2, 2],
+      [2, 8],
+      [8, 8],
+      [8, 5.5],
+      [10, 5.5],
+      [10, 10],
+      [0, 10],
+    ];
     const nfp = noFitPolygon(lib, toPath(block, S), toPath(sq(0, 0, 4), S));
     const holes = nfp.filter((p) => lib.area(p) < 0);
     expect(holes).toHaveLength(1);
@@ -63,7 +101,9 @@ describe("no-fit polygon of benchmark pieces, checked with jsts", () => {
   const jakobs = loadInstance(readFixture("jakobs1"));
   const shapes = loadInstance(readFixture("shapes0"));
   // Large and small, convex and not: jakobs1 pieces (octagon, L, crosses, small triangles) and all of shapes0.
-  const pieces = [...jakobs.items.filter((_, i) => [0, 1, 6, 8, 15, 16, 22, 23].includes(i)), ...shapes.items].map((it) => it.polygon as XY[]);
+  const pieces = [...jakobs.items.filter((_, i) => [0, 1, 6, 8, 15, 16, 22, 23].includes(i)), ...shapes.items].map(
+    (it) => it.polygon as XY[],
+  );
 
   /** Deterministic pseudo-random pairs and rotations (a fixed linear congruential sequence). */
   // Two fixed big, moving small pairs first: their NFP has an interior the swept boundary alone misses.
@@ -94,10 +134,16 @@ describe("no-fit polygon of benchmark pieces, checked with jsts", () => {
     let tried = 0;
     for (let i = 0; i <= 12; i++)
       for (let j = 0; j <= 12; j++) {
-        const q = { x: Math.round(x0 + ((x1 - x0) * (i + 0.37)) / 12.5), y: Math.round(y0 + ((y1 - y0) * (j + 0.61)) / 12.5) };
+        const q = {
+          x: Math.round(x0 + ((x1 - x0) * (i + 0.37)) / 12.5),
+          y: Math.round(y0 + ((y1 - y0) * (j + 0.61)) / 12.5),
+        };
         const inNfp = inside(nfp, q);
         if (inNfp === null) continue;
-        const overlap = intersectionArea(a, b.map(([x, y]) => [x + q.x / S, y + q.y / S] as XY));
+        const overlap = intersectionArea(
+          a,
+          b.map(([x, y]) => [x + q.x / S, y + q.y / S] as XY),
+        );
         if (inNfp) expect(overlap).toBeGreaterThan(tiny);
         else expect(overlap).toBeLessThanOrEqual(tiny);
         tried++;
@@ -112,26 +158,63 @@ describe("sliver holes and penetration depth", () => {
   // steps per unit, as the nester first built it), and the Minkowski sum gets a sliver hole.
   const M = 1e6;
   const fixed = toPath(
-    [[-10.999999, -18], [-8.999999, -23.999999], [-2, -23.999999], [0, -18], [-0.000001, -18], [-0.000001, -6], [-2.000001, -0.000001], [-9, -0.000001], [-11, -6], [-10.999999, -6]],
+    [
+      [-10.999999, -18],
+      [-8.999999, -23.999999],
+      [-2, -23.999999],
+      [0, -18],
+      [-0.000001, -18],
+      [-0.000001, -6],
+      [-2.000001, -0.000001],
+      [-9, -0.000001],
+      [-11, -6],
+      [-10.999999, -6],
+    ],
     M,
   );
-  const moving: XY[] = [[-2, -24], [0, -18], [0, -6], [-2, 0], [-9, 0], [-11, -6], [-11, -18], [-9, -24]];
+  const moving: XY[] = [
+    [-2, -24],
+    [0, -18],
+    [0, -6],
+    [-2, 0],
+    [-9, 0],
+    [-11, -6],
+    [-11, -18],
+    [-9, -24],
+  ];
 
   it("a sliver hole, where the parts would overlap, is filled; the area stays 4 × the octagon's (closed form for a centrally symmetric convex part)", () => {
-    const raw = minkowskiSum(lib, fixed, toPath(moving, M).map((q) => ({ x: -q.x, y: -q.y })));
+    const raw = minkowskiSum(
+      lib,
+      fixed,
+      toPath(moving, M).map((q) => ({ x: -q.x, y: -q.y })),
+    );
     const slivers = raw.filter((p) => lib.area(p) < 0);
     expect(slivers.length).toBeGreaterThan(0);
     // Placed at a sliver's vertex, the part overlaps the fixed one almost entirely (jsts).
     const v = slivers[0][0];
     const fixedRing = fixed.map((q) => [q.x / M, q.y / M] as XY);
-    expect(intersectionArea(fixedRing, moving.map(([x, y]) => [x + v.x / M, y + v.y / M] as XY))).toBeGreaterThan(0.9 * areaOf(moving));
+    expect(
+      intersectionArea(
+        fixedRing,
+        moving.map(([x, y]) => [x + v.x / M, y + v.y / M] as XY),
+      ),
+    ).toBeGreaterThan(0.9 * areaOf(moving));
     const nfp = noFitPolygon(lib, fixed, toPath(moving, M));
     expect(nfp.filter((p) => lib.area(p) < 0)).toHaveLength(0);
     expect(nfp.reduce((s, p) => s + lib.area(p), 0) / (M * M)).toBeCloseTo(4 * areaOf(moving), 3);
   });
 
   it("penetration depth is the distance to the NFP boundary: 10 × 10 fixed, 5 × 5 moving (closed form)", () => {
-    const set = buildShapes(lib, [{ id: "a", polygon: sq(0, 0, 10), quantity: 1, rotations: [0] }, { id: "b", polygon: sq(0, 0, 5), quantity: 1, rotations: [0] }], S, 0);
+    const set = buildShapes(
+      lib,
+      [
+        { id: "a", polygon: sq(0, 0, 10), quantity: 1, rotations: [0] },
+        { id: "b", polygon: sq(0, 0, 5), quantity: 1, rotations: [0] },
+      ],
+      S,
+      0,
+    );
     const nfp = new NoFitCache(lib, set).get(0, 1); // NFP = [−5, 10] × [−5, 10], less the one-step shrink
     const step = 1 / S;
     expect(penetrationDepth(nfp, 2.5 * S, 2.5 * S) / S).toBeCloseTo(7.5, 2);

@@ -7,7 +7,12 @@ import { expectValidLayout, readFixture } from "./layout-check";
 const sheet = { width: 2440, height: 1220 }; // 8 × 4 ft plywood (docs/fabrication.md §4.3)
 const rect = (id: string, w: number, h: number, quantity: number, rotations = [0, 90]): NestItem => ({
   id,
-  polygon: [[0, 0], [w, 0], [w, h], [0, h]],
+  polygon: [
+    [0, 0],
+    [w, 0],
+    [w, h],
+    [0, h],
+  ],
   quantity,
   rotations,
 });
@@ -24,7 +29,9 @@ function expectValidSheets(items: NestItem[], result: SheetNestResult, margin: n
     if (s.placements.length > 1) expect(report.minGap).toBeGreaterThanOrEqual(spacing - 1e-5);
     placed += s.placements.length;
   });
-  const keys = result.sheets.flatMap((s) => s.placements.map((p) => `${p.id}#${p.copy}`)).concat(result.unplaced.map((u) => `${u.id}#${u.copy}`));
+  const keys = result.sheets
+    .flatMap((s) => s.placements.map((p) => `${p.id}#${p.copy}`))
+    .concat(result.unplaced.map((u) => `${u.id}#${u.copy}`));
   expect(new Set(keys).size).toBe(keys.length); // each copy once, placed or not
   expect(keys.length).toBe(items.reduce((s, it) => s + it.quantity, 0));
   return placed;
@@ -49,7 +56,9 @@ describe("nestOnSheets", () => {
     const result = await nestOnSheets({ items, sheet, margin: 10, spacing: 6, seconds: 1 });
     expect(result.unplaced).toHaveLength(1);
     expect(result.unplaced[0]).toMatchObject({ id: "T03", copy: 0 });
-    expect(result.unplaced[0].reason).toBe("T03 is 2650 × 143 mm; the sheet's usable area is 2420 × 1200 mm in every allowed rotation");
+    expect(result.unplaced[0].reason).toBe(
+      "T03 is 2650 × 143 mm; the sheet's usable area is 2420 × 1200 mm in every allowed rotation",
+    );
     expect(expectValidSheets(items, result, 10, 6)).toBe(2);
   });
 
@@ -67,9 +76,20 @@ describe("nestOnSheets", () => {
     const rotations = new Set(result.sheets.flatMap((s) => s.placements.map((p) => p.rotation)));
     expect([...rotations].every((r) => r === 0 || r === 180)).toBe(true);
     // Per-sheet utilisation is that sheet's part area over the sheet area.
-    const area = new Map(items.map((it) => [it.id, it.polygon.reduce((s, [x, y], k, r) => s + (x * r[(k + 1) % r.length][1] - r[(k + 1) % r.length][0] * y) / 2, 0)]));
+    const area = new Map(
+      items.map((it) => [
+        it.id,
+        it.polygon.reduce(
+          (s, [x, y], k, r) => s + (x * r[(k + 1) % r.length][1] - r[(k + 1) % r.length][0] * y) / 2,
+          0,
+        ),
+      ]),
+    );
     for (const s of result.sheets)
-      expect(s.utilisation).toBeCloseTo(s.placements.reduce((t, p) => t + area.get(p.id)!, 0) / (sheet.width * sheet.height), 9);
+      expect(s.utilisation).toBeCloseTo(
+        s.placements.reduce((t, p) => t + area.get(p.id)!, 0) / (sheet.width * sheet.height),
+        9,
+      );
   });
 
   it("stops at maxSheets and says which copies found no room", async () => {

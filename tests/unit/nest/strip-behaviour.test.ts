@@ -19,7 +19,12 @@ describe("nestStrip", () => {
   it("keeps parts `spacing` apart and inside [0, height]", async () => {
     const spacing = 0.5;
     const result = await nestStrip({ items: fu.items, height: fu.height, spacing, seconds: 2, seed: 1 });
-    const { report } = expectValidLayout(fu.items, result.placements, { minX: 0, minY: 0, maxX: result.length, maxY: fu.height }, 2 * spacing);
+    const { report } = expectValidLayout(
+      fu.items,
+      result.placements,
+      { minX: 0, minY: 0, maxX: result.length, maxY: fu.height },
+      2 * spacing,
+    );
     // The gap may fall short of `spacing` by the nester's integer step (≤ 1e-6 of the height here; common practice).
     expect(report.minGap).toBeGreaterThanOrEqual(spacing - 1e-6 * fu.height);
   });
@@ -37,7 +42,13 @@ describe("nestStrip", () => {
       const controller = new AbortController();
       const started = performance.now();
       const timer = setTimeout(() => controller.abort(), after);
-      const result = await nestStrip({ items: jakobs2.items, height: jakobs2.height, seconds: 60, seed: 1, signal: controller.signal });
+      const result = await nestStrip({
+        items: jakobs2.items,
+        height: jakobs2.height,
+        seconds: 60,
+        seed: 1,
+        signal: controller.signal,
+      });
       clearTimeout(timer);
       const waited = performance.now() - started - after;
       expect(result.cancelled).toBe(true);
@@ -57,7 +68,21 @@ describe("nestStrip", () => {
   });
 
   it("names an item that is wider than the strip in every allowed rotation", async () => {
-    const items = [{ id: "W7", polygon: [[0, 0], [50, 0], [50, 45], [0, 45]] as [number, number][], quantity: 1, rotations: [0, 90] }];
-    await expect(nestStrip({ items, height: 40, seconds: 1 })).rejects.toThrow(/W7 is 50 × 45; it does not fit across the strip \(40\)/);
+    const items = [
+      {
+        id: "W7",
+        polygon: [
+          [0, 0],
+          [50, 0],
+          [50, 45],
+          [0, 45],
+        ] as [number, number][],
+        quantity: 1,
+        rotations: [0, 90],
+      },
+    ];
+    await expect(nestStrip({ items, height: 40, seconds: 1 })).rejects.toThrow(
+      /W7 is 50 × 45; it does not fit across the strip \(40\)/,
+    );
   });
 });

@@ -14,7 +14,13 @@ const SHAPES0_ITERATIONS = 40_000;
 describe("strip nesting targets (fixed iteration budget)", () => {
   it("jakobs1 (rotations 0/90/180/270 from the file): utilisation ≥ 85 %", async () => {
     const inst = loadInstance(readFixture("jakobs1"));
-    const result = await nestStrip({ items: inst.items, height: inst.height, seconds: 600, maxIterations: JAKOBS1_ITERATIONS, seed: 1 });
+    const result = await nestStrip({
+      items: inst.items,
+      height: inst.height,
+      seconds: 600,
+      maxIterations: JAKOBS1_ITERATIONS,
+      seed: 1,
+    });
     const { utilisation } = expectValidStrip(inst.items, result, inst.height);
     // It stopped on the count, not on the (generous) clock: the result does not depend on the machine.
     expect(result.iterations).toBe(JAKOBS1_ITERATIONS);
@@ -30,7 +36,13 @@ describe("strip nesting targets (fixed iteration budget)", () => {
   it("shapes0 (rotation 0 only): utilisation ≥ 63 %", async () => {
     const inst = loadInstance(readFixture("shapes0"));
     expect(inst.items.every((it) => it.rotations.length === 1 && it.rotations[0] === 0)).toBe(true);
-    const result = await nestStrip({ items: inst.items, height: inst.height, seconds: 600, maxIterations: SHAPES0_ITERATIONS, seed: 1 });
+    const result = await nestStrip({
+      items: inst.items,
+      height: inst.height,
+      seconds: 600,
+      maxIterations: SHAPES0_ITERATIONS,
+      seed: 1,
+    });
     const { utilisation } = expectValidStrip(inst.items, result, inst.height);
     expect(result.iterations).toBe(SHAPES0_ITERATIONS);
     // Target 63 %, acceptance requirement. Published: arXiv:2509.13329, 68.59 % average (issue text 68.6 %).

@@ -35,10 +35,25 @@ describe("CSV points", () => {
   });
 
   it("says which line is bad", () => {
-    refused(load("points-bad.csv", { want: "wheel", tolerance: 0.01 }), /CSV line 5: "ten" in column 1 is not a number/);
-    refused(importOutline({ name: "p.csv", text: "0,0\n1,2,3\n" }, { want: "wheel", tolerance: 1 }), /CSV line 2: expected two numbers \(x, y\) but found 3 columns/);
-    refused(importOutline({ name: "p.csv", text: "0,0\n0x10,2\n" }, { want: "wheel", tolerance: 1 }), /CSV line 2: "0x10"/);
-    refused(importOutline({ name: "p.csv", text: "0,0\nInfinity,2\n" }, { want: "wheel", tolerance: 1 }), /CSV line 2: "Infinity"/);
-    refused(importOutline({ name: "p.csv", text: "\n\n# nothing\n" }, { want: "wheel", tolerance: 1 }), /no rows of numbers/);
+    refused(
+      load("points-bad.csv", { want: "wheel", tolerance: 0.01 }),
+      /CSV line 5: "ten" in column 1 is not a number/,
+    );
+    refused(
+      importOutline({ name: "p.csv", text: "0,0\n1,2,3\n" }, { want: "wheel", tolerance: 1 }),
+      /CSV line 2: expected two numbers \(x, y\) but found 3 columns/,
+    );
+    refused(
+      importOutline({ name: "p.csv", text: "0,0\n0x10,2\n" }, { want: "wheel", tolerance: 1 }),
+      /CSV line 2: "0x10"/,
+    );
+    refused(
+      importOutline({ name: "p.csv", text: "0,0\nInfinity,2\n" }, { want: "wheel", tolerance: 1 }),
+      /CSV line 2: "Infinity"/,
+    );
+    refused(
+      importOutline({ name: "p.csv", text: "\n\n# nothing\n" }, { want: "wheel", tolerance: 1 }),
+      /no rows of numbers/,
+    );
   });
 });

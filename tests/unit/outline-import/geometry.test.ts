@@ -50,23 +50,57 @@ describe("SVG 1.1 F.6.5 endpoint-to-centre conversion", () => {
 describe("placeAxleDefault and isStarShapedAbout", () => {
   it("puts the axle at the area centroid", () => {
     // Triangle: the centroid is the mean of the vertices (classical result).
-    expect(placeAxleDefault([[0, 0], [6, 0], [0, 3]])).toEqual({ x: 2, y: 1 });
+    expect(
+      placeAxleDefault([
+        [0, 0],
+        [6, 0],
+        [0, 3],
+      ]),
+    ).toEqual({ x: 2, y: 1 });
     // L shape of a 2×1 and a 1×1 square: centroid ((2·1)(1, 0.5) + (1)(0.5, 1.5)) / 3 = (5/6, 5/6), derived.
-    const c = placeAxleDefault([[0, 0], [2, 0], [2, 1], [1, 1], [1, 2], [0, 2]]);
+    const c = placeAxleDefault([
+      [0, 0],
+      [2, 0],
+      [2, 1],
+      [1, 1],
+      [1, 2],
+      [0, 2],
+    ]);
     expect(c.x).toBeCloseTo(5 / 6, 12);
     expect(c.y).toBeCloseTo(5 / 6, 12);
     // Far from the origin, where a naive formula loses digits.
-    const far = placeAxleDefault([[1e8, 1e8], [1e8 + 6, 1e8], [1e8, 1e8 + 3]]);
+    const far = placeAxleDefault([
+      [1e8, 1e8],
+      [1e8 + 6, 1e8],
+      [1e8, 1e8 + 3],
+    ]);
     expect(far.x - 1e8).toBeCloseTo(2, 6);
   });
 
   // A C-shaped outline (counter-clockwise): the notch makes rays from some points cross three times.
-  const C: [number, number][] = [[0, 0], [10, 0], [10, 3], [3, 3], [3, 7], [10, 7], [10, 10], [0, 10]];
+  const C: [number, number][] = [
+    [0, 0],
+    [10, 0],
+    [10, 3],
+    [3, 3],
+    [3, 7],
+    [10, 7],
+    [10, 10],
+    [0, 10],
+  ];
 
   // A square with a triangular notch cut into its left side, tip at (3, 5): star-shaped about (7, 5)
   // (every ray from there meets the outline once), not about (1, 8) (straight down it crosses the
   // notch's two edges and the bottom: three times).
-  const N: [number, number][] = [[0, 0], [10, 0], [10, 10], [0, 10], [0, 6], [3, 5], [0, 4]];
+  const N: [number, number][] = [
+    [0, 0],
+    [10, 0],
+    [10, 10],
+    [0, 10],
+    [0, 6],
+    [3, 5],
+    [0, 4],
+  ];
 
   it("says where a ray from the axle crosses more than once", () => {
     expect(isStarShapedAbout(N, { x: 7, y: 5 })).toEqual({ ok: true });
@@ -75,17 +109,37 @@ describe("placeAxleDefault and isStarShapedAbout", () => {
     if (bad.ok) return;
     expect(N.some(([x, y]) => x === bad.at.x && y === bad.at.y)).toBe(true);
     // The angle is the ray's direction, counter-clockwise from straight down, in [0, 2π).
-    const expected = (((Math.atan2(bad.at.y - 8, bad.at.x - 1) + Math.PI / 2) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
+    const expected =
+      (((Math.atan2(bad.at.y - 8, bad.at.x - 1) + Math.PI / 2) % (2 * Math.PI)) + 2 * Math.PI) % (2 * Math.PI);
     expect(bad.angle).toBeCloseTo(expected, 12);
     expect(isStarShapedAbout(N, { x: 20, y: 5 }).ok).toBe(false); // outside
     expect(isStarShapedAbout(N, { x: 0, y: 0 }).ok).toBe(false); // on the outline
     expect(isStarShapedAbout(C, { x: 1.5, y: 5 }).ok).toBe(false); // a C has no point that sees all of it
     // Clockwise input is judged the same as counter-clockwise.
-    expect(isStarShapedAbout([[0, 0], [0, 1], [1, 1], [1, 0]], { x: 0.5, y: 0.5 }).ok).toBe(true);
+    expect(
+      isStarShapedAbout(
+        [
+          [0, 0],
+          [0, 1],
+          [1, 1],
+          [1, 0],
+        ],
+        { x: 0.5, y: 0.5 },
+      ).ok,
+    ).toBe(true);
   });
 
   it("agrees with the engine's own outline check (lib/track/wheels/outline.ts)", () => {
-    const shapes: [number, number][][] = [C, N, [[0, 0], [4, 0], [4, 4], [0, 4]]];
+    const shapes: [number, number][][] = [
+      C,
+      N,
+      [
+        [0, 0],
+        [4, 0],
+        [4, 4],
+        [0, 4],
+      ],
+    ];
     const axles = [
       { x: 1.5, y: 5 },
       { x: 8, y: 1.5 },
@@ -126,7 +180,12 @@ describe("results fit the engine's schema (lib/track/spec.ts)", () => {
     expect(trackSchema.safeParse({ kind: "profile", points: t.points }).success).toBe(true);
     expect(MAX_POINTS).toBe(20000);
     // A result straight from a circle file goes to the engine unchanged.
-    const c = ok(importOutline({ name: "c.svg", text: '<svg xmlns="http://www.w3.org/2000/svg"><circle cx="3" cy="4" r="10"/></svg>' }, { want: "wheel", tolerance: 0.001 }));
+    const c = ok(
+      importOutline(
+        { name: "c.svg", text: '<svg xmlns="http://www.w3.org/2000/svg"><circle cx="3" cy="4" r="10"/></svg>' },
+        { want: "wheel", tolerance: 0.001 },
+      ),
+    );
     expect(() => outlineWheel(c.points, placeAxleDefault(c.points))).not.toThrow();
   });
 });

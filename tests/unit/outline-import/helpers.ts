@@ -2,7 +2,8 @@ import { readFileSync } from "node:fs";
 import { expect } from "vitest";
 import { importOutline, type ImportOptions, type ImportResult } from "@/lib/outline-import";
 
-export const fixture = (name: string): Uint8Array => new Uint8Array(readFileSync(new URL(`../../fixtures/outlines/${name}`, import.meta.url)));
+export const fixture = (name: string): Uint8Array =>
+  new Uint8Array(readFileSync(new URL(`../../fixtures/outlines/${name}`, import.meta.url)));
 export const fixtureText = (name: string): string => new TextDecoder().decode(fixture(name));
 
 /** Imports a fixture file by name (as bytes, as an upload arrives). */

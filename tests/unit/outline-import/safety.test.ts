@@ -7,9 +7,15 @@ const W = { want: "wheel" as const, tolerance: 0.01 };
 describe("hostile and unusable files", () => {
   it("refuses DOCTYPE and ENTITY declarations (billion laughs, external entities) without expanding them", () => {
     refused(load("entity-bomb.svg", W), /line 2: the file has a DOCTYPE declaration, which is refused/);
-    refused(importOutline({ name: "e.svg", text: '<svg xmlns="http://www.w3.org/2000/svg"><!ENTITY a "b"></svg>' }, W), /declares an ENTITY/);
+    refused(
+      importOutline({ name: "e.svg", text: '<svg xmlns="http://www.w3.org/2000/svg"><!ENTITY a "b"></svg>' }, W),
+      /declares an ENTITY/,
+    );
     // A reference to an undeclared entity is refused, not looked up.
-    refused(importOutline({ name: "e.svg", text: '<svg xmlns="http://www.w3.org/2000/svg"><path d="&xxe;"/></svg>' }, W), /&xxe; is not one of XML's predefined entities/);
+    refused(
+      importOutline({ name: "e.svg", text: '<svg xmlns="http://www.w3.org/2000/svg"><path d="&xxe;"/></svg>' }, W),
+      /&xxe; is not one of XML's predefined entities/,
+    );
   });
 
   it("ignores scripts, event handlers, foreignObject, <use>, <image> and external hrefs, and says so", () => {
@@ -56,12 +62,26 @@ describe("hostile and unusable files", () => {
     refused(importOutline({ name: "shape.png", text: svgText }, W), /Files of type \.png are not accepted/);
     refused(importOutline({ name: "shape", text: svgText }, W), /has no file extension/);
     refused(importOutline({ name: "shape.csv", text: svgText }, W), /named \.csv but its content is an SVG file/);
-    refused(importOutline({ name: "shape.svg", bytes: fixture("slot-line-arc.dxf") }, W), /named \.svg but its content is a DXF file/);
-    refused(importOutline({ name: "shape.dxf", text: "0,0\n1,0\n1,1\n" }, W), /named \.dxf but its content is plain text/);
-    refused(importOutline({ name: "shape.svg", text: "<html><body></body></html>" }, W), /XML or HTML without an <svg> element/);
-    refused(importOutline({ name: "shape.svg", type: "text/csv", text: svgText }, W), /file name says \.svg but its declared type is text\/csv/);
+    refused(
+      importOutline({ name: "shape.svg", bytes: fixture("slot-line-arc.dxf") }, W),
+      /named \.svg but its content is a DXF file/,
+    );
+    refused(
+      importOutline({ name: "shape.dxf", text: "0,0\n1,0\n1,1\n" }, W),
+      /named \.dxf but its content is plain text/,
+    );
+    refused(
+      importOutline({ name: "shape.svg", text: "<html><body></body></html>" }, W),
+      /XML or HTML without an <svg> element/,
+    );
+    refused(
+      importOutline({ name: "shape.svg", type: "text/csv", text: svgText }, W),
+      /file name says \.svg but its declared type is text\/csv/,
+    );
     expect(importOutline({ name: "SHAPE.SVG", type: "image/svg+xml", text: svgText }, W).ok).toBe(true);
-    expect(importOutline({ name: "pts.csv", type: "application/vnd.ms-excel", text: "0,0\n1,0\n1,1\n" }, W).ok).toBe(true);
+    expect(importOutline({ name: "pts.csv", type: "application/vnd.ms-excel", text: "0,0\n1,0\n1,1\n" }, W).ok).toBe(
+      true,
+    );
   });
 
   it("refuses more output points than the engine takes (lib/track/spec.ts MAX_POINTS = 20 000)", () => {
@@ -71,21 +91,54 @@ describe("hostile and unusable files", () => {
       const t = (2 * Math.PI * i) / n;
       return `${(100 * Math.cos(t)).toFixed(6)},${(100 * Math.sin(t)).toFixed(6)}`;
     }).join(" ");
-    refused(importOutline({ name: "p.svg", text: `<svg xmlns="http://www.w3.org/2000/svg"><polygon points="${pts}"/></svg>` }, W), /25,000 points after flattening, more than the engine's limit of 20,000/);
+    refused(
+      importOutline(
+        { name: "p.svg", text: `<svg xmlns="http://www.w3.org/2000/svg"><polygon points="${pts}"/></svg>` },
+        W,
+      ),
+      /25,000 points after flattening, more than the engine's limit of 20,000/,
+    );
     refused(importOutline({ name: "p.csv", text: "0,0\n".repeat(20002) }, W), /more than 20,000 points/);
     // A tolerance so fine that one circle would need millions of points is refused before they are made.
     const t0 = Date.now();
     refused(
-      importOutline({ name: "c.svg", text: '<svg xmlns="http://www.w3.org/2000/svg"><circle r="1000"/></svg>' }, { want: "wheel", tolerance: 1e-12 }),
+      importOutline(
+        { name: "c.svg", text: '<svg xmlns="http://www.w3.org/2000/svg"><circle r="1000"/></svg>' },
+        { want: "wheel", tolerance: 1e-12 },
+      ),
       /<circle> on line 1 would need .* points at this tolerance/,
     );
     expect(Date.now() - t0).toBeLessThan(5000);
   });
 
   it("bounds path commands, elements and nesting", () => {
-    refused(importOutline({ name: "p.svg", text: `<svg xmlns="http://www.w3.org/2000/svg"><path d="M0 0${" L1 1 0 0".repeat(5)}${" L1 1".repeat(100_001)}"/></svg>` }, W), /more than 100,000 path commands/);
-    refused(importOutline({ name: "g.svg", text: `<svg xmlns="http://www.w3.org/2000/svg">${"<g>".repeat(300)}${"</g>".repeat(300)}</svg>` }, W), /nested more than 256 deep/);
-    refused(importOutline({ name: "g.svg", text: `<svg xmlns="http://www.w3.org/2000/svg">${"<g/>".repeat(50_001)}</svg>` }, W), /more than 50,000 elements/);
+    refused(
+      importOutline(
+        {
+          name: "p.svg",
+          text: `<svg xmlns="http://www.w3.org/2000/svg"><path d="M0 0${" L1 1 0 0".repeat(5)}${" L1 1".repeat(100_001)}"/></svg>`,
+        },
+        W,
+      ),
+      /more than 100,000 path commands/,
+    );
+    refused(
+      importOutline(
+        {
+          name: "g.svg",
+          text: `<svg xmlns="http://www.w3.org/2000/svg">${"<g>".repeat(300)}${"</g>".repeat(300)}</svg>`,
+        },
+        W,
+      ),
+      /nested more than 256 deep/,
+    );
+    refused(
+      importOutline(
+        { name: "g.svg", text: `<svg xmlns="http://www.w3.org/2000/svg">${"<g/>".repeat(50_001)}</svg>` },
+        W,
+      ),
+      /more than 50,000 elements/,
+    );
   });
 
   it("refuses bad options instead of throwing", () => {
@@ -98,13 +151,25 @@ describe("hostile and unusable files", () => {
   });
 
   it("never throws on cut-short or mangled files", () => {
-    const names = ["square-relative.svg", "circle-two-arcs.svg", "rounded-rect-nested.svg", "hostile.svg", "stadium-lwpolyline.dxf", "slot-line-arc.dxf", "points-good.csv"];
+    const names = [
+      "square-relative.svg",
+      "circle-two-arcs.svg",
+      "rounded-rect-nested.svg",
+      "hostile.svg",
+      "stadium-lwpolyline.dxf",
+      "slot-line-arc.dxf",
+      "points-good.csv",
+    ];
     let refusals = 0;
     let runs = 0;
     for (const name of names) {
       const text = fixtureText(name);
       for (let cut = 0; cut < text.length; cut += 7) {
-        for (const t of [text.slice(0, cut), text.slice(cut), text.slice(0, cut) + "<&\"'%\u00e9" + text.slice(cut + 3)]) {
+        for (const t of [
+          text.slice(0, cut),
+          text.slice(cut),
+          text.slice(0, cut) + "<&\"'%\u00e9" + text.slice(cut + 3),
+        ]) {
           for (const want of ["wheel", "track"] as const) {
             const r = importOutline({ name, text: t }, { want, tolerance: 0.05 });
             runs++;
@@ -123,24 +188,77 @@ describe("hostile and unusable files", () => {
 });
 
 describe("the readers behind the packages (saxes, svg-pathdata, dxf-parser)", () => {
-  const svgText = (body: string) => `<svg xmlns="http://www.w3.org/2000/svg">${body}<rect width="10" height="10"/></svg>`;
-  const dxfText = (entities: string[]) => ["0", "SECTION", "2", "ENTITIES", ...entities, "0", "ENDSEC", "0", "EOF"].join("\n");
+  const svgText = (body: string) =>
+    `<svg xmlns="http://www.w3.org/2000/svg">${body}<rect width="10" height="10"/></svg>`;
+  const dxfText = (entities: string[]) =>
+    ["0", "SECTION", "2", "ENTITIES", ...entities, "0", "ENDSEC", "0", "EOF"].join("\n");
 
   it("names the line of a bare & and of an undeclared entity in text, in our words", () => {
-    refused(importOutline({ name: "a.svg", text: svgText("\n<desc>Tom & Jerry</desc>") }, W), /^line 2: a bare "&" \(write &amp;\)\.$/);
-    refused(importOutline({ name: "a.svg", text: svgText("<desc>&nbsp;</desc>") }, W), /&nbsp; is not one of XML's predefined entities/);
-    refused(importOutline({ name: "a.svg", text: svgText('<path d="M0 0" d="M1 1"/>') }, W), /<path> gives the attribute d twice/);
-    refused(importOutline({ name: "a.svg", text: svgText("<g><!DOCTYPE x></g>") }, W), /DOCTYPE declaration, which is refused/);
+    refused(
+      importOutline({ name: "a.svg", text: svgText("\n<desc>Tom & Jerry</desc>") }, W),
+      /^line 2: a bare "&" \(write &amp;\)\.$/,
+    );
+    refused(
+      importOutline({ name: "a.svg", text: svgText("<desc>&nbsp;</desc>") }, W),
+      /&nbsp; is not one of XML's predefined entities/,
+    );
+    refused(
+      importOutline({ name: "a.svg", text: svgText('<path d="M0 0" d="M1 1"/>') }, W),
+      /<path> gives the attribute d twice/,
+    );
+    refused(
+      importOutline({ name: "a.svg", text: svgText("<g><!DOCTYPE x></g>") }, W),
+      /DOCTYPE declaration, which is refused/,
+    );
   });
 
   it("skips raw text that is not XML, and reads nothing after the root closes", () => {
-    const r = ok(importOutline({ name: "a.svg", text: `\n <?xml version="1.0"?>${svgText("<style>a > b { }</style><script>if (a < b && c) {}</script>")}trailing <junk` }, W));
+    const r = ok(
+      importOutline(
+        {
+          name: "a.svg",
+          text: `\n <?xml version="1.0"?>${svgText("<style>a > b { }</style><script>if (a < b && c) {}</script>")}trailing <junk`,
+        },
+        W,
+      ),
+    );
     expect(r.points).toHaveLength(4);
   });
 
   it("reads an LWPOLYLINE as listed (vertex count and vertex identifiers aside) and refuses groups out of order", () => {
-    const square = ["0", "LWPOLYLINE", "70", "1", "10", "0", "20", "0", "91", "1", "10", "1", "20", "0", "91", "2", "10", "1", "20", "1", "10", "0", "20", "1"];
+    const square = [
+      "0",
+      "LWPOLYLINE",
+      "70",
+      "1",
+      "10",
+      "0",
+      "20",
+      "0",
+      "91",
+      "1",
+      "10",
+      "1",
+      "20",
+      "0",
+      "91",
+      "2",
+      "10",
+      "1",
+      "20",
+      "1",
+      "10",
+      "0",
+      "20",
+      "1",
+    ];
     expect(ok(importOutline({ name: "a.dxf", text: dxfText(square) }, W)).points).toHaveLength(4);
-    refused(importOutline({ name: "a.dxf", text: dxfText(["0", "LINE", "10", "0", "30", "0", "20", "0", "11", "1", "21", "1"]) }, W), /DXF line 7: in the LINE, group 10 must be followed by group 20/);
+    refused(
+      importOutline(
+        { name: "a.dxf", text: dxfText(["0", "LINE", "10", "0", "30", "0", "20", "0", "11", "1", "21", "1"]) },
+        W,
+      ),
+      /DXF line 7: in the LINE, group 10 must be followed by group 20/,
+    );
   });
 });

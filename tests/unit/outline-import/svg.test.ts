@@ -4,7 +4,8 @@ import { area, load, ok, refused } from "./helpers";
 
 const svg = (body: string, root = 'width="100mm" height="100mm" viewBox="0 0 100 100"') =>
   `<svg xmlns="http://www.w3.org/2000/svg" ${root}>${body}</svg>`;
-const wheel = (text: string, tolerance = 0.01, name = "w.svg") => importOutline({ name, text }, { want: "wheel", tolerance });
+const wheel = (text: string, tolerance = 0.01, name = "w.svg") =>
+  importOutline({ name, text }, { want: "wheel", tolerance });
 
 describe("SVG paths", () => {
   it("reads a square drawn with relative commands, flips y and runs counter-clockwise", () => {
@@ -42,7 +43,9 @@ describe("SVG paths", () => {
 
   it("converges to πR² as the tolerance goes to zero", () => {
     const R = 20;
-    const errors = [1, 0.1, 0.01, 0.001, 0.0001].map((tol) => Math.PI * R * R - area(ok(load("circle-two-arcs.svg", { want: "wheel", tolerance: tol })).points));
+    const errors = [1, 0.1, 0.01, 0.001, 0.0001].map(
+      (tol) => Math.PI * R * R - area(ok(load("circle-two-arcs.svg", { want: "wheel", tolerance: tol })).points),
+    );
     for (let i = 1; i < errors.length; i++) expect(errors[i]).toBeLessThan(errors[i - 1]);
     expect(errors[errors.length - 1] / (Math.PI * R * R)).toBeLessThan(1e-5);
   });
@@ -84,14 +87,21 @@ describe("SVG paths", () => {
     // S: first control = 2·(50,10) − (30,10) = (70,10); q: control (90,70), end (70,80);
     // t: control = 2·(70,80) − (90,70) = (50,90), end (30,80); T: control = 2·(30,80) − (50,90) = (10,70).
     type P = [number, number];
-    const cubic = (a: P, b: P, c: P, d: P) => (t: number): P => {
-      const u = 1 - t;
-      return [u * u * u * a[0] + 3 * u * u * t * b[0] + 3 * u * t * t * c[0] + t * t * t * d[0], u * u * u * a[1] + 3 * u * u * t * b[1] + 3 * u * t * t * c[1] + t * t * t * d[1]];
-    };
-    const quad = (a: P, b: P, c: P) => (t: number): P => {
-      const u = 1 - t;
-      return [u * u * a[0] + 2 * u * t * b[0] + t * t * c[0], u * u * a[1] + 2 * u * t * b[1] + t * t * c[1]];
-    };
+    const cubic =
+      (a: P, b: P, c: P, d: P) =>
+      (t: number): P => {
+        const u = 1 - t;
+        return [
+          u * u * u * a[0] + 3 * u * u * t * b[0] + 3 * u * t * t * c[0] + t * t * t * d[0],
+          u * u * u * a[1] + 3 * u * u * t * b[1] + 3 * u * t * t * c[1] + t * t * t * d[1],
+        ];
+      };
+    const quad =
+      (a: P, b: P, c: P) =>
+      (t: number): P => {
+        const u = 1 - t;
+        return [u * u * a[0] + 2 * u * t * b[0] + t * t * c[0], u * u * a[1] + 2 * u * t * b[1] + t * t * c[1]];
+      };
     const curves = [
       cubic([10, 50], [10, 30], [30, 10], [50, 10]),
       cubic([50, 10], [70, 10], [90, 30], [90, 50]),
@@ -135,28 +145,44 @@ describe("SVG paths", () => {
     const closed = ok(wheel(svg('<path d="M0 0 H10 V10 H0 V0.005"/>'), 0.01));
     expect(closed.points).toHaveLength(4);
     expect(closed.notes.join("\n")).toMatch(/ends were 0\.005 apart/);
-    refused(wheel(svg('<path d="M0 0 H10 V10 H0 V2"/>'), 0.01), /open/, /2 from where it starts/, /\(0, 0\) and \(0, -2\)/);
+    refused(
+      wheel(svg('<path d="M0 0 H10 V10 H0 V2"/>'), 0.01),
+      /open/,
+      /2 from where it starts/,
+      /\(0, 0\) and \(0, -2\)/,
+    );
   });
 
   it("refuses a self-intersecting outline and says where", () => {
     // A bow tie: (0,0) (10,10) (10,0) (0,10) crosses itself at (5, 5), i.e. (5, −5) once y is flipped.
-    refused(wheel(svg('<polygon points="0,0 10,10 10,0 0,10"/>')), /crosses or touches itself near \(5, -5\)/, /points 0 and 2/);
+    refused(
+      wheel(svg('<polygon points="0,0 10,10 10,0 0,10"/>')),
+      /crosses or touches itself near \(5, -5\)/,
+      /points 0 and 2/,
+    );
     // Lopsided: y = x meets y = 20 − 2x at x = 20/3 (derived).
     refused(wheel(svg('<polygon points="0,0 10,10 10,0 0,20"/>')), /near \(6\.66667, -6\.66667\)/);
   });
 
   it("maps the viewBox onto a physical size and converts units when asked", () => {
     // width 200 mm over a viewBox 100 wide: one user unit is 2 mm.
-    const r = ok(wheel(svg('<rect x="10" y="10" width="10" height="10"/>', 'width="200mm" height="200mm" viewBox="0 0 100 100"')));
+    const r = ok(
+      wheel(svg('<rect x="10" y="10" width="10" height="10"/>', 'width="200mm" height="200mm" viewBox="0 0 100 100"')),
+    );
     expect(r.bounds.width).toBeCloseTo(20, 12);
-    const cm = ok(wheel(svg('<rect x="10" y="10" width="10" height="10"/>', 'width="10cm" height="10cm" viewBox="0 0 100 100"')));
+    const cm = ok(
+      wheel(svg('<rect x="10" y="10" width="10" height="10"/>', 'width="10cm" height="10cm" viewBox="0 0 100 100"')),
+    );
     expect(cm.units).toBe("mm");
     expect(cm.bounds.width).toBeCloseTo(10, 12);
     // No viewBox: user units are CSS px, 96 per inch (CSS Values and Units §6.2): 96 px = 1 in.
     const inch = ok(wheel(svg('<rect x="0" y="0" width="96" height="48"/>', 'width="4in" height="4in"')));
     expect(inch.units).toBe("in");
     expect(inch.bounds.width).toBeCloseTo(1, 12);
-    const conv = importOutline({ name: "a.svg", text: svg('<rect x="0" y="0" width="25.4" height="10"/>') }, { want: "wheel", tolerance: 0.01, units: "in" });
+    const conv = importOutline(
+      { name: "a.svg", text: svg('<rect x="0" y="0" width="25.4" height="10"/>') },
+      { want: "wheel", tolerance: 0.01, units: "in" },
+    );
     expect(ok(conv).units).toBe("in");
     expect(ok(conv).bounds.width).toBeCloseTo(1, 12); // 25.4 mm = 1 in exactly (international inch)
   });
@@ -171,23 +197,39 @@ describe("SVG paths", () => {
     const rot = ok(wheel(svg('<rect x="10" y="10" width="10" height="2" transform="rotate(180 15 11)"/>')));
     expect(rot.bounds.minX).toBeCloseTo(10, 9);
     expect(rot.bounds.maxY).toBeCloseTo(-10, 9);
-    refused(wheel(svg('<rect x="0" y="0" width="10" height="10" transform="spin(3)"/>')), /line 1: <rect> has a transform that cannot be read/);
+    refused(
+      wheel(svg('<rect x="0" y="0" width="10" height="10" transform="spin(3)"/>')),
+      /line 1: <rect> has a transform that cannot be read/,
+    );
   });
 
   it("ignores shapes inside <defs> and hidden ones, with a note", () => {
-    const r = ok(wheel(svg('<defs><rect width="90" height="90"/></defs><g style="display:none"><rect width="80" height="80"/></g><rect width="10" height="10"/>')));
+    const r = ok(
+      wheel(
+        svg(
+          '<defs><rect width="90" height="90"/></defs><g style="display:none"><rect width="80" height="80"/></g><rect width="10" height="10"/>',
+        ),
+      ),
+    );
     expect(Math.abs(area(r.points))).toBeCloseTo(100, 9);
     expect(r.notes.join("\n")).toMatch(/inside <defs>/);
     expect(r.notes.join("\n")).toMatch(/hidden/);
   });
 
   it("refuses bad path data, naming the element and the character", () => {
-    refused(wheel(svg('<path id="lobe" d="M0 0 L10 10 X 5"/>')), /<path id="lobe"> on line 1/, /unexpected "X" at character 13/);
+    refused(
+      wheel(svg('<path id="lobe" d="M0 0 L10 10 X 5"/>')),
+      /<path id="lobe"> on line 1/,
+      /unexpected "X" at character 13/,
+    );
     refused(wheel(svg('<path d="L0 0 10 10"/>')), /must begin with a moveto/);
     refused(wheel(svg('<path d="M0 0 A5 5 0 2 0 10 0"/>')), /expected an arc flag/);
     refused(wheel(svg('<polygon points="0,0 10,0 10"/>')), /odd count of numbers/);
     refused(wheel(svg('<rect width="-1" height="4"/>')), /negative width/);
-    refused(wheel('<svg xmlns="http://www.w3.org/2000/svg"><g><rect width="1" height="1"/></svg>'), /<\/svg> does not match <g> opened on line 1/);
+    refused(
+      wheel('<svg xmlns="http://www.w3.org/2000/svg"><g><rect width="1" height="1"/></svg>'),
+      /<\/svg> does not match <g> opened on line 1/,
+    );
     refused(wheel('<svg xmlns="http://www.w3.org/2000/svg"><g>'), /cut short/);
   });
 });
@@ -207,12 +249,16 @@ describe("SVG tracks", () => {
   });
 
   it("turns a right-to-left profile round, and refuses one that doubles back or steps vertically", () => {
-    const t = (points: string) => importOutline({ name: "t.svg", text: svg(`<polyline points="${points}"/>`) }, { want: "track", tolerance: 0.01 });
+    const t = (points: string) =>
+      importOutline({ name: "t.svg", text: svg(`<polyline points="${points}"/>`) }, { want: "track", tolerance: 0.01 });
     expect(ok(t("10,0 5,3 0,0")).points[0]).toEqual([0, 0]);
     expect(ok(t("10,0 5,3 0,0")).notes.join("\n")).toMatch(/reversed to run left to right/);
     refused(t("0,0 5,3 4,4 10,0"), /doubles back at x = 5/);
     refused(t("0,0 5,3 5,4 10,0"), /vertical step at x = 5/);
     refused(t("0,0 5,3 10,1"), /must end at the height it starts/);
-    refused(importOutline({ name: "t.svg", text: svg('<rect width="5" height="5"/>') }, { want: "track", tolerance: 0.01 }), /only closed shapes/);
+    refused(
+      importOutline({ name: "t.svg", text: svg('<rect width="5" height="5"/>') }, { want: "track", tolerance: 0.01 }),
+      /only closed shapes/,
+    );
   });
 });

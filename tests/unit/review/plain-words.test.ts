@@ -9,7 +9,11 @@ import { runScene } from "@/lib/review/run-scene";
 import { summarise } from "@/lib/revision-summary";
 import { solve, specHash } from "@/lib/track";
 
-const SQUARE = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 } } as const;
+const SQUARE = {
+  mode: "track-for-wheel",
+  units: "mm",
+  wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 },
+} as const;
 
 describe("plain figures", () => {
   it("say the engine's figures, and mark a square's grip as needing care", () => {
@@ -30,7 +34,11 @@ describe("plain figures", () => {
   it("say how deep a wheel cuts in, where it does", () => {
     // A triangle on its own catenary road cuts in: its corners get "stuck in the ruts" (S. Wagon,
     // Mathematica in Action, 2nd ed., Springer/TELOS 2000).
-    const r = solve({ mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 3, circumradius: 100, cornerRadius: 0 } });
+    const r = solve({
+      mode: "track-for-wheel",
+      units: "mm",
+      wheel: { kind: "polygon", sides: 3, circumradius: 100, cornerRadius: 0 },
+    });
     expect(r.check.interference.depth).toBeGreaterThan(0);
     const cut = plainFigures({ mode: r.mode, units: r.units, check: r.check }).find((x) => x.key === "cut-in")!;
     expect(cut.ok).toBe(false);
@@ -38,9 +46,18 @@ describe("plain figures", () => {
   });
 
   it("speak of steady turning for a partner pair, and show inches with millimetres", () => {
-    const pair = solve({ mode: "partner-wheel", units: "mm", wheel: { kind: "ellipse", semiMajor: 120, semiMinor: 80, axle: "focus" }, lobes: 1 });
+    const pair = solve({
+      mode: "partner-wheel",
+      units: "mm",
+      wheel: { kind: "ellipse", semiMajor: 120, semiMinor: 80, axle: "focus" },
+      lobes: 1,
+    });
     expect(plainFigures({ mode: pair.mode, units: "mm", check: pair.check })[0].label).toBe("Steady turning");
-    const inch = solve({ mode: "track-for-wheel", units: "in", wheel: { kind: "polygon", sides: 6, inradius: 4, cornerRadius: 0 } });
+    const inch = solve({
+      mode: "track-for-wheel",
+      units: "in",
+      wheel: { kind: "polygon", sides: 6, inradius: 4, cornerRadius: 0 },
+    });
     const level = plainFigures({ mode: inch.mode, units: "in", check: inch.check })[0];
     expect(level.text).toMatch(/\d\.\d{4} in \(\d\.\d{3} mm\)/);
   });
@@ -78,10 +95,20 @@ describe("the view", () => {
 describe("the sign-off reference", () => {
   it("is the spec hash's first 12 hex digits and the UTC date", () => {
     const hash = specHash(SQUARE);
-    expect(approvalReference({ specHash: hash, signedAt: "2026-11-20T23:59:59.999Z" })).toBe(`${hash.slice(0, 12)}/2026-11-20`);
-    const stamp = { reference: "0123456789ab/2026-11-20", revision: 3, typedName: "Ada Penröse", organisation: "Northfold Discovery Centre", signedAt: "2026-11-20T10:00:00.000Z" };
+    expect(approvalReference({ specHash: hash, signedAt: "2026-11-20T23:59:59.999Z" })).toBe(
+      `${hash.slice(0, 12)}/2026-11-20`,
+    );
+    const stamp = {
+      reference: "0123456789ab/2026-11-20",
+      revision: 3,
+      typedName: "Ada Penröse",
+      organisation: "Northfold Discovery Centre",
+      signedAt: "2026-11-20T10:00:00.000Z",
+    };
     expect(approvalLine(stamp)).toBe("APPROVED R3 0123456789ab/2026-11-20 by Ada Penröse, Northfold Discovery Centre");
-    expect(approvalLine(stamp, { ascii: true })).toBe("APPROVED R3 0123456789ab/2026-11-20 by Ada Penrose, Northfold Discovery Centre");
+    expect(approvalLine(stamp, { ascii: true })).toBe(
+      "APPROVED R3 0123456789ab/2026-11-20 by Ada Penrose, Northfold Discovery Centre",
+    );
     expect(approvalLine(null)).toBe(NOT_APPROVED);
     expect(approvalLine(null, { ascii: true })).toMatch(/^[\x20-\x7e]+$/);
   });

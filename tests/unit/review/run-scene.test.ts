@@ -3,10 +3,21 @@
 // over the whole roll, and a pair keeps its centre distance.
 import { describe, expect, it } from "vitest";
 import { PERSON_HEIGHT_MM, personOutline } from "@/lib/review/person";
-import { placeOfPosition, poseOnRun, positionOfPlace, runScene, type RunChoice, type RunLayout } from "@/lib/review/run-scene";
+import {
+  placeOfPosition,
+  poseOnRun,
+  positionOfPlace,
+  runScene,
+  type RunChoice,
+  type RunLayout,
+} from "@/lib/review/run-scene";
 import { solve, tileRun, type Pt } from "@/lib/track";
 
-const SQUARE = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 } };
+const SQUARE = {
+  mode: "track-for-wheel",
+  units: "mm",
+  wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 },
+};
 
 /** The profile's height at x, read straight off its polyline. */
 function profileY(profile: Pt[], x: number): number {
@@ -24,7 +35,8 @@ function worstOffLine(spec: unknown, run: RunChoice | null, samples = 1500) {
   for (let i = 0; i <= samples; i++) {
     const pose = poseOnRun(r, scene, i / samples);
     off = Math.max(off, Math.abs(pose.offLine));
-    if (scene.kind === "run") onTrack = Math.max(onTrack, Math.abs(profileY(scene.profile, pose.contact[0]) - pose.contact[1]));
+    if (scene.kind === "run")
+      onTrack = Math.max(onTrack, Math.abs(profileY(scene.profile, pose.contact[0]) - pose.contact[1]));
   }
   return { r, scene, off, onTrack };
 }
@@ -43,7 +55,9 @@ describe("the run as built", () => {
       expect(s.profile[0][0]).toBe(0);
       expect(s.profile[s.profile.length - 1][0]).toBeCloseTo(6000, 9);
       const tile = tileRun({ runLength: 6000, period: 2 * a * Math.asinh(1) });
-      const expected = { flat: tile.flatRunOut.periods, half: tile.halfPeriod.periods, scale: tile.scaled.periods }[endTreatment];
+      const expected = { flat: tile.flatRunOut.periods, half: tile.halfPeriod.periods, scale: tile.scaled.periods }[
+        endTreatment
+      ];
       expect(s.periods).toBe(expected);
       const scale = endTreatment === "scale" ? tile.scaled.scale : 1;
       expect(s.period).toBeCloseTo(2 * a * Math.asinh(1) * scale, 6);
@@ -71,7 +85,11 @@ describe("the run as built", () => {
   });
 
   it("lays an inch design out in millimetres (25.4 mm to the inch, by definition)", () => {
-    const inch = { mode: "track-for-wheel", units: "in", wheel: { kind: "polygon", sides: 4, side: 400 / 25.4, cornerRadius: 0 } };
+    const inch = {
+      mode: "track-for-wheel",
+      units: "in",
+      wheel: { kind: "polygon", sides: 4, side: 400 / 25.4, cornerRadius: 0 },
+    };
     const { scene, off } = worstOffLine(inch, { runLength: 6000, endTreatment: "flat" });
     const mm = runScene(solve(SQUARE), { runLength: 6000, endTreatment: "flat" }) as RunLayout;
     expect((scene as RunLayout).period).toBeCloseTo(mm.period, 3);
@@ -80,8 +98,20 @@ describe("the run as built", () => {
   });
 
   it("keeps an ellipse's axle (at a focus) level on its road, and a wheel made for a sine track on it", () => {
-    expect(worstOffLine({ mode: "track-for-wheel", units: "mm", wheel: { kind: "ellipse", semiMajor: 150, semiMinor: 100, axle: "focus" } }, { runLength: 3000, endTreatment: "half" }).off).toBeLessThan(0.05);
-    const sine = worstOffLine({ mode: "wheel-for-track", units: "mm", track: { kind: "sine", amplitude: 15, period: 200 }, periodsPerTurn: 4 }, { runLength: 2000, endTreatment: "flat" });
+    expect(
+      worstOffLine(
+        {
+          mode: "track-for-wheel",
+          units: "mm",
+          wheel: { kind: "ellipse", semiMajor: 150, semiMinor: 100, axle: "focus" },
+        },
+        { runLength: 3000, endTreatment: "half" },
+      ).off,
+    ).toBeLessThan(0.05);
+    const sine = worstOffLine(
+      { mode: "wheel-for-track", units: "mm", track: { kind: "sine", amplitude: 15, period: 200 }, periodsPerTurn: 4 },
+      { runLength: 2000, endTreatment: "flat" },
+    );
     expect(sine.off).toBeLessThan(0.03);
     expect(sine.onTrack).toBeLessThan(1e-6);
     // A sine track of amplitude 15 mm has humps 30 mm from crest to trough.
@@ -89,7 +119,12 @@ describe("the run as built", () => {
   });
 
   it("rolls twin wheels on both sides of their track, each axle on its line", () => {
-    const spec = { mode: "twin-wheels", units: "mm", track: { kind: "sine", amplitude: 20, period: 300 }, periodsPerTurn: 2 };
+    const spec = {
+      mode: "twin-wheels",
+      units: "mm",
+      track: { kind: "sine", amplitude: 20, period: 300 },
+      periodsPerTurn: 2,
+    };
     const r = solve(spec);
     const s = runScene(r, { runLength: 1500, endTreatment: "flat" }) as RunLayout;
     expect(s.periods).toBe(5);
@@ -104,7 +139,12 @@ describe("the run as built", () => {
   });
 
   it("turns a partner pair on fixed axles that stay the centre distance apart", () => {
-    const r = solve({ mode: "partner-wheel", units: "mm", wheel: { kind: "ellipse", semiMajor: 120, semiMinor: 80, axle: "focus" }, lobes: 1 });
+    const r = solve({
+      mode: "partner-wheel",
+      units: "mm",
+      wheel: { kind: "ellipse", semiMajor: 120, semiMinor: 80, axle: "focus" },
+      lobes: 1,
+    });
     const s = runScene(r, null);
     expect(s.kind).toBe("pair");
     // Two equal ellipses turning about their foci mesh at a centre distance of the major axis, 2a = 240 mm
@@ -124,7 +164,15 @@ describe("places along the run", () => {
     // Off the rolled span the position holds at its ends.
     expect(positionOfPlace(s, 0)).toBe(0);
     expect(positionOfPlace(s, 6000)).toBe(1);
-    const pair = runScene(solve({ mode: "partner-wheel", units: "mm", wheel: { kind: "ellipse", semiMajor: 120, semiMinor: 80, axle: "focus" }, lobes: 1 }), null);
+    const pair = runScene(
+      solve({
+        mode: "partner-wheel",
+        units: "mm",
+        wheel: { kind: "ellipse", semiMajor: 120, semiMinor: 80, axle: "focus" },
+        lobes: 1,
+      }),
+      null,
+    );
     expect(placeOfPosition(pair, positionOfPlace(pair, 90))).toBeCloseTo(90, 9);
     expect(positionOfPlace(pair, 450)).toBeCloseTo(0.25, 12);
   });

@@ -36,7 +36,9 @@ describe("toAppError", () => {
 
   describe("the engine's errors", () => {
     it("a spec the engine refuses: 400 with the engine's sentence, no spec path in the words", () => {
-      const error = thrown(() => solve({ mode: "track-for-wheel", units: "mm", wheel: { kind: "polar", r: "100 + cos(theta" } }));
+      const error = thrown(() =>
+        solve({ mode: "track-for-wheel", units: "mm", wheel: { kind: "polar", r: "100 + cos(theta" } }),
+      );
       expect(error).toBeInstanceOf(EngineError);
       const a = toAppError(error);
       expect(a.status).toBe(400);
@@ -46,8 +48,12 @@ describe("toAppError", () => {
 
     it("keeps `where` as the field key, under the spec's place in the request", () => {
       const error = new EngineError("invalid-wheel", "The axle is outside the outline.", "wheel.points[3]");
-      expect(toAppError(error, { spec: "" }).fields).toEqual({ "wheel.points[3]": ["The axle is outside the outline."] });
-      expect(toAppError(error, { spec: "spec" }).fields).toEqual({ "spec.wheel.points[3]": ["The axle is outside the outline."] });
+      expect(toAppError(error, { spec: "" }).fields).toEqual({
+        "wheel.points[3]": ["The axle is outside the outline."],
+      });
+      expect(toAppError(error, { spec: "spec" }).fields).toEqual({
+        "spec.wheel.points[3]": ["The axle is outside the outline."],
+      });
       // A stored spec is not in the request: no field to point at.
       expect(toAppError(error).fields).toBeUndefined();
       expect(toAppError(error).message).toBe("The axle is outside the outline.");
@@ -71,7 +77,14 @@ describe("toAppError", () => {
     });
 
     it("a no-solution refusal the engine already worded is kept", () => {
-      const a = toAppError(new EngineError("no-solution", "No axle height gives a wheel that closes: try fewer periods per turn.", "periodsPerTurn"), { spec: "" });
+      const a = toAppError(
+        new EngineError(
+          "no-solution",
+          "No axle height gives a wheel that closes: try fewer periods per turn.",
+          "periodsPerTurn",
+        ),
+        { spec: "" },
+      );
       expect(a.status).toBe(400);
       expect(a.message).toMatch(/^No axle height/);
       expect(a.fields).toEqual({ periodsPerTurn: [a.message] });
@@ -97,7 +110,9 @@ describe("toAppError", () => {
   });
 
   it("a query's refusal: its own kind, words and fields", () => {
-    const taken = toAppError(new Refusal("conflict", "An account with that e-mail already exists.", { email: ["Already in use."] }));
+    const taken = toAppError(
+      new Refusal("conflict", "An account with that e-mail already exists.", { email: ["Already in use."] }),
+    );
     expect(taken.status).toBe(409);
     expect(taken.message).toBe("An account with that e-mail already exists.");
     expect(taken.fields).toEqual({ email: ["Already in use."] });
@@ -106,7 +121,9 @@ describe("toAppError", () => {
   });
 
   it("an outline-import refusal: 400 with the reader's words", () => {
-    const a = toAppError(new ImportFailure("The file declares a DOCTYPE; outlines with DOCTYPE or ENTITY declarations are refused."));
+    const a = toAppError(
+      new ImportFailure("The file declares a DOCTYPE; outlines with DOCTYPE or ENTITY declarations are refused."),
+    );
     expect(a.status).toBe(400);
     expect(a.message).toMatch(/DOCTYPE/);
   });

@@ -6,18 +6,32 @@ import { solve } from "@/lib/track";
 
 describe("convertSpec", () => {
   it("scales every length of a polygon wheel", () => {
-    const spec = convertSpec({ mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 254, cornerRadius: 12.7 } }, "in");
+    const spec = convertSpec(
+      { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 254, cornerRadius: 12.7 } },
+      "in",
+    );
     expect(spec.units).toBe("in");
     expect(spec.wheel).toEqual({ kind: "polygon", sides: 4, side: 10, cornerRadius: 0.5 });
   });
 
   it("goes there and back without drift", () => {
-    const original = { mode: "wheel-for-track" as const, units: "mm" as const, track: { kind: "sine" as const, amplitude: 10, period: 100 }, periodsPerTurn: 4, tolerance: 0.01 };
+    const original = {
+      mode: "wheel-for-track" as const,
+      units: "mm" as const,
+      track: { kind: "sine" as const, amplitude: 10, period: 100 },
+      periodsPerTurn: 4,
+      tolerance: 0.01,
+    };
     expect(convertSpec(convertSpec(original, "in"), "mm")).toEqual(original);
   });
 
   it("rewrites a track formula so the solved track is the same curve in inches", () => {
-    const mm = { mode: "wheel-for-track" as const, units: "mm" as const, track: { kind: "function" as const, y: "10*sin(2*pi*x/100)", period: 100 }, periodsPerTurn: 4 };
+    const mm = {
+      mode: "wheel-for-track" as const,
+      units: "mm" as const,
+      track: { kind: "function" as const, y: "10*sin(2*pi*x/100)", period: 100 },
+      periodsPerTurn: 4,
+    };
     const a = solve(mm);
     const b = solve(convertSpec(mm, "in"));
     // Sine track closed form (standard integral tables): ∫₀ᴾ dx/(h − A sin(2πx/P)) = P/√(h² − A²),
@@ -29,7 +43,11 @@ describe("convertSpec", () => {
   });
 
   it("rewrites a polar formula so the wheel keeps its size", () => {
-    const mm = { mode: "track-for-wheel" as const, units: "mm" as const, wheel: { kind: "polar" as const, r: "100 + 20*cos(3*theta)" } };
+    const mm = {
+      mode: "track-for-wheel" as const,
+      units: "mm" as const,
+      wheel: { kind: "polar" as const, r: "100 + 20*cos(3*theta)" },
+    };
     const a = solve(mm);
     const b = solve(convertSpec(mm, "in"));
     // r = 100 + 20 cos 3θ has rMax = 120 and rMin = 80 (read off the formula).

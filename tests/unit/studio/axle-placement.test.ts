@@ -9,7 +9,15 @@ import { engineError } from "../track/engine-error";
 
 // A 200 mm square with a triangular notch in its left side, tip at (60, 100): star-shaped about
 // (140, 100) but not about (140, 40) (the kernel is 360 − x ≤ 3y ≤ x + 240, from the notch's edges).
-const NOTCHED: [number, number][] = [[0, 0], [200, 0], [200, 200], [0, 200], [0, 120], [60, 100], [0, 80]];
+const NOTCHED: [number, number][] = [
+  [0, 0],
+  [200, 0],
+  [200, 200],
+  [0, 200],
+  [0, 120],
+  [60, 100],
+  [0, 80],
+];
 
 describe("axle placement", () => {
   it("finds the outline point under a screen point, for a turned and moved wheel", () => {
@@ -43,9 +51,13 @@ describe("axle placement", () => {
     expect(axleRefusal(NOTCHED, { x: 140, y: 100 })).toBeUndefined();
     const refusal = axleRefusal(NOTCHED, { x: 140, y: 40 });
     expect(refusal).toMatch(/not star-shaped about the axle/);
-    const engine = engineError(() => solve({ mode: "track-for-wheel", wheel: { kind: "outline", points: NOTCHED, axle: { x: 140, y: 40 } } }));
+    const engine = engineError(() =>
+      solve({ mode: "track-for-wheel", wheel: { kind: "outline", points: NOTCHED, axle: { x: 140, y: 40 } } }),
+    );
     expect(refusal).toBe(engine.message);
     expect(axleRefusal(NOTCHED, { x: 260, y: 100 })).toMatch(/outside the outline/);
-    expect(() => solve({ mode: "track-for-wheel", wheel: { kind: "outline", points: NOTCHED, axle: { x: 140, y: 100 } } })).not.toThrow();
+    expect(() =>
+      solve({ mode: "track-for-wheel", wheel: { kind: "outline", points: NOTCHED, axle: { x: 140, y: 100 } } }),
+    ).not.toThrow();
   });
 });

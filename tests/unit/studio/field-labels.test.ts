@@ -22,7 +22,9 @@ describe("field labels", () => {
     }
     // The sentence already names the field, so nothing is added to it.
     expect(message).toBe("Wheel for a track needs the number of periods per turn (a whole number from 1).");
-    expect(studioMessage({ message: "wheel.points[3]: The outline passes through the axle.", where: "wheel.points[3]" })).toBe("The outline passes through the axle. (Outline, point 4)");
+    expect(
+      studioMessage({ message: "wheel.points[3]: The outline passes through the axle.", where: "wheel.points[3]" }),
+    ).toBe("The outline passes through the axle. (Outline, point 4)");
     expect(message).not.toMatch(/periodsPerTurn/);
   });
 });

@@ -155,7 +155,11 @@ describe("a triangle on its own track cuts in, and the view can point at it", ()
 describe("partner wheel: identical ellipses about their foci", () => {
   let r: SolveResult;
   beforeAll(() => {
-    r = solve({ mode: "partner-wheel", wheel: { kind: "ellipse", semiMajor: 100, semiMinor: 80, axle: "focus" }, lobes: 1 });
+    r = solve({
+      mode: "partner-wheel",
+      wheel: { kind: "ellipse", semiMajor: 100, semiMinor: 80, axle: "focus" },
+      lobes: 1,
+    });
   });
 
   it("has the textbook centre distance and speed-ratio range", () => {
@@ -180,9 +184,9 @@ describe("partner wheel: identical ellipses about their foci", () => {
   });
 
   it("turns the partner the other way, and extends the follower by whole sectors", () => {
-    const sector = 2 * Math.PI / r.wheel.symmetry;
+    const sector = (2 * Math.PI) / r.wheel.symmetry;
     const turn = followerAt(r, sector);
-    expect(turn).toBeCloseTo(2 * Math.PI / 1, 9); // lobes 1: one partner turn per driver sector
+    expect(turn).toBeCloseTo((2 * Math.PI) / 1, 9); // lobes 1: one partner turn per driver sector
     expect(followerAt(r, sector + 1.1)).toBeCloseTo(turn + followerAt(r, 1.1), 9);
     // No slip: equal arc lengths r₁ dθ₁ = r₂ dθ₂ (Litvin et al. 2009), so near the start the
     // follower's rate is r₁/r₂ = 40/160.

@@ -48,13 +48,21 @@ describe("panels render", () => {
     const html = renderToStaticMarkup(createElement(CheckPanel, { checking: true }));
     expect(html).toContain("Checking…");
     expect(html).not.toContain("data-check=");
-    const stopped = renderToStaticMarkup(createElement(CheckPanel, { error: "The computation ran past its time limit." }));
+    const stopped = renderToStaticMarkup(
+      createElement(CheckPanel, { error: "The computation ran past its time limit." }),
+    );
     expect(stopped).toContain("The rolling check stopped: The computation ran past its time limit.");
   });
 
   it("holds the options table's place while the choices are worked out", () => {
-    const geometry = solveInStages({ mode: "wheel-for-track", track: { kind: "sine", amplitude: 20, period: 200 }, periodsPerTurn: 4 }).geometry;
-    expect(renderToStaticMarkup(createElement(OptionsTable, { result: geometry, pending: true }))).toContain("Working out the choices…");
+    const geometry = solveInStages({
+      mode: "wheel-for-track",
+      track: { kind: "sine", amplitude: 20, period: 200 },
+      periodsPerTurn: 4,
+    }).geometry;
+    expect(renderToStaticMarkup(createElement(OptionsTable, { result: geometry, pending: true }))).toContain(
+      "Working out the choices…",
+    );
     // A wheel with a track made for it has no closure choice: nothing to wait for.
     expect(renderToStaticMarkup(createElement(OptionsTable, { result: triangle, pending: true }))).toBe("");
   });
@@ -77,7 +85,14 @@ describe("panels render", () => {
   it("renders the play controls with a labelled scrub bar", () => {
     const noop = () => {};
     const html = renderToStaticMarkup(
-      createElement(PlayControls, { playing: false, onPlayingChange: noop, speed: 1, onSpeedChange: noop, position: 0.25, onPositionChange: noop }),
+      createElement(PlayControls, {
+        playing: false,
+        onPlayingChange: noop,
+        speed: 1,
+        onSpeedChange: noop,
+        position: 0.25,
+        onPositionChange: noop,
+      }),
     );
     expect(html).toContain('type="range"');
     expect(html).toContain("Step one frame forward");

@@ -7,8 +7,10 @@ import type { SolveReply, SolveRequest } from "@/components/studio/solve-worker"
 import type { WorkerEvent } from "@/components/worker/worker-client";
 import { fakeWorkers } from "../../support/fake-worker";
 
-const geometryReply = (id: number) => ({ id, stage: "geometry", ok: true, geometry: { specHash: `h${id}` }, ms: 1 }) as unknown as SolveReply;
-const checkReply = (id: number) => ({ id, stage: "check", ok: true, check: { check: {}, warnings: [] }, ms: 1 }) as unknown as SolveReply;
+const geometryReply = (id: number) =>
+  ({ id, stage: "geometry", ok: true, geometry: { specHash: `h${id}` }, ms: 1 }) as unknown as SolveReply;
+const checkReply = (id: number) =>
+  ({ id, stage: "check", ok: true, check: { check: {}, warnings: [] }, ms: 1 }) as unknown as SolveReply;
 const loadsReply = (id: number) => ({ id, stage: "loads", ok: true, loads: null, ms: 1 }) as SolveReply;
 const replies = (events: WorkerEvent<SolveReply>[]) => events.flatMap((e) => (e.type === "reply" ? [e.reply] : []));
 

@@ -26,7 +26,10 @@ import {
 } from "@/lib/studio/view-math";
 
 const circle = (r: number, n: number, cx = 0, cy = 0): Pt[] =>
-  Array.from({ length: n + 1 }, (_, i) => [cx + r * Math.cos((2 * Math.PI * i) / n), cy + r * Math.sin((2 * Math.PI * i) / n)] as Pt);
+  Array.from(
+    { length: n + 1 },
+    (_, i) => [cx + r * Math.cos((2 * Math.PI * i) / n), cy + r * Math.sin((2 * Math.PI * i) / n)] as Pt,
+  );
 
 describe("geometry helpers", () => {
   it("turns clockwise with y up", () => {
@@ -36,7 +39,13 @@ describe("geometry helpers", () => {
   });
 
   it("reads how far a closed outline reaches along a ray, also through a vertex", () => {
-    const square: Pt[] = [[-1, -1], [1, -1], [1, 1], [-1, 1], [-1, -1]];
+    const square: Pt[] = [
+      [-1, -1],
+      [1, -1],
+      [1, 1],
+      [-1, 1],
+      [-1, -1],
+    ];
     expect(rayReach(square, [0, -1])).toBeCloseTo(1, 12);
     expect(rayReach(square, [1, 1])).toBeCloseTo(Math.SQRT2, 12); // straight through a corner
     expect(rayReach(circle(5, 720), [0.3, -0.7])).toBeCloseTo(5, 3);
@@ -50,7 +59,11 @@ describe("geometry helpers", () => {
   });
 
   it("tiles and reads a periodic track", () => {
-    const one: Pt[] = [[0, 0], [1, 1], [2, 0]];
+    const one: Pt[] = [
+      [0, 0],
+      [1, 1],
+      [2, 0],
+    ];
     const run = tileTrack(one, 2, 3);
     expect(run).toHaveLength(7);
     expect(run[6]).toEqual([6, 0]);
@@ -103,7 +116,11 @@ describe("plot series from engine outputs", () => {
     // r = p/(1 + e cos θ) about a focus gives r′/r = e sin θ/(1 + e cos θ), largest at cos θ = −e:
     // e/√(1 − e²) = 0.75 for e = 0.6 (semi-axes 100 and 80). Ratio r₁/(a − r₁) for two equal
     // ellipses at a = 2·100 (Litvin et al. 2009): 0.25 … 4.
-    const r = solve({ mode: "partner-wheel", wheel: { kind: "ellipse", semiMajor: 100, semiMinor: 80, axle: "focus" }, lobes: 1 });
+    const r = solve({
+      mode: "partner-wheel",
+      wheel: { kind: "ellipse", semiMajor: 100, semiMinor: 80, axle: "focus" },
+      lobes: 1,
+    });
     const f = outlineFrictionSeries(r.wheel.points, 2 * Math.PI);
     expect(Math.max(...f.y)).toBeCloseTo(0.75, 2);
     const s = speedRatioSeries(r.follower!);

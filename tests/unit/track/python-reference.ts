@@ -11,7 +11,12 @@ const SCRIPT = fileURLToPath(new URL("../../reference/rolling_reference.py", imp
 export function pythonReference<T = Record<string, number>>(cases: object[]): T[] {
   let out: string;
   try {
-    out = execFileSync(PYTHON, [SCRIPT], { input: JSON.stringify({ cases }), encoding: "utf8", timeout: 120_000, maxBuffer: 1 << 24 });
+    out = execFileSync(PYTHON, [SCRIPT], {
+      input: JSON.stringify({ cases }),
+      encoding: "utf8",
+      timeout: 120_000,
+      maxBuffer: 1 << 24,
+    });
   } catch (e) {
     const err = e as { stderr?: string; message: string };
     throw new Error(

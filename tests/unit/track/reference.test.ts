@@ -8,7 +8,16 @@ import { pythonReference } from "./python-reference";
 const rel = (a: number, b: number) => Math.abs(a - b) / Math.abs(b);
 
 // An irregular, star-shaped pentagon with the axle off-centre (an uploaded outline).
-const outline = { points: [[0, -90], [80, -40], [60, 70], [-40, 85], [-85, -20]] as [number, number][], axle: { x: 5, y: 3 } };
+const outline = {
+  points: [
+    [0, -90],
+    [80, -40],
+    [60, 70],
+    [-40, 85],
+    [-85, -20],
+  ] as [number, number][],
+  axle: { x: 5, y: 3 },
+};
 
 const cases = [
   { kind: "rounded", sides: 4, inradius: 200, cornerRadius: 30 },
@@ -43,14 +52,23 @@ describe("against SciPy / mpmath references", () => {
     [2, 4, 4],
     [3, 6, 3],
   ])("partner %i of the n = %i polygon with %i lobes: centre distance", (i, n, m) => {
-    const r = solve({ mode: "partner-wheel", wheel: { kind: "polygon", sides: n, inradius: 1 }, lobes: m, tolerance: 1e-3 });
+    const r = solve({
+      mode: "partner-wheel",
+      wheel: { kind: "polygon", sides: n, inradius: 1 },
+      lobes: m,
+      tolerance: 1e-3,
+    });
     expect(rel(r.centreDistance!, ref[i].centreDistance)).toBeLessThan(1e-9);
     expect(r.check.closureError).toBeLessThan(1e-10);
     expect(r.check.axleDeviation).toBeLessThan(1e-6);
   });
 
   it("partner of a rounded square, 2 lobes", () => {
-    const r = solve({ mode: "partner-wheel", wheel: { kind: "polygon", sides: 4, inradius: 200, cornerRadius: 30 }, lobes: 2 });
+    const r = solve({
+      mode: "partner-wheel",
+      wheel: { kind: "polygon", sides: 4, inradius: 200, cornerRadius: 30 },
+      lobes: 2,
+    });
     expect(rel(r.centreDistance!, ref[4].centreDistance)).toBeLessThan(1e-9);
   });
 
@@ -71,8 +89,16 @@ describe("against SciPy / mpmath references", () => {
 
   it("generic driver 1 + 0.3cos θ + 0.1 sin 2θ (docs/math.md §5.4 table, mpmath 1.3.0, recomputed here)", () => {
     const table = [2.0944760282156716107, 3.0730166125735512179, 4.0655111384308936829];
-    for (const [i, k] of [[7, 1], [8, 3]]) {
-      const r = solve({ mode: "partner-wheel", wheel: { kind: "polar", r: "1 + 0.3*cos(theta) + 0.1*sin(2*theta)" }, lobes: k, tolerance: 1e-3 });
+    for (const [i, k] of [
+      [7, 1],
+      [8, 3],
+    ]) {
+      const r = solve({
+        mode: "partner-wheel",
+        wheel: { kind: "polar", r: "1 + 0.3*cos(theta) + 0.1*sin(2*theta)" },
+        lobes: k,
+        tolerance: 1e-3,
+      });
       expect(rel(r.centreDistance!, ref[i].centreDistance)).toBeLessThan(1e-12);
       expect(rel(r.centreDistance!, table[k - 1])).toBeLessThan(1e-12);
     }

@@ -4,13 +4,21 @@ import { describe, expect, it } from "vitest";
 import { engineError } from "./engine-error";
 import { EngineError, solve, tileRun } from "@/lib/track";
 
-
 const ttw = (wheel: object) => () => solve({ mode: "track-for-wheel", wheel });
 
 describe("refusals", () => {
   it("an outline that is not star-shaped about the axle names the point", () => {
     // A C-shape: rays from the axle cross the notch twice.
-    const pts = [[-50, -50], [50, -50], [50, -20], [-10, -20], [-10, 20], [50, 20], [50, 50], [-50, 50]];
+    const pts = [
+      [-50, -50],
+      [50, -50],
+      [50, -20],
+      [-10, -20],
+      [-10, 20],
+      [50, 20],
+      [50, 50],
+      [-50, 50],
+    ];
     const e = engineError(ttw({ kind: "outline", points: pts, axle: { x: -30, y: 0 } }));
     expect(e.code).toBe("invalid-wheel");
     expect(e.message).toMatch(/not star-shaped/);
@@ -18,7 +26,12 @@ describe("refusals", () => {
   });
 
   it("an axle outside the outline, or on it", () => {
-    const sq = [[0, 0], [10, 0], [10, 10], [0, 10]];
+    const sq = [
+      [0, 0],
+      [10, 0],
+      [10, 10],
+      [0, 10],
+    ];
     expect(engineError(ttw({ kind: "outline", points: sq, axle: { x: 20, y: 5 } })).message).toMatch(/outside/);
     expect(engineError(ttw({ kind: "outline", points: sq, axle: { x: 0, y: 0 } })).message).toMatch(/on the outline/);
   });
@@ -31,19 +44,44 @@ describe("refusals", () => {
   });
 
   it("an ellipse axle outside, a corner radius too large, a profile running backwards", () => {
-    expect(engineError(ttw({ kind: "ellipse", semiMajor: 2, semiMinor: 1, axle: { x: 1, y: 0 } })).where).toBe("wheel.axle");
-    expect(engineError(ttw({ kind: "polygon", sides: 4, inradius: 1, cornerRadius: 1 })).where).toBe("wheel.cornerRadius");
-    const e = engineError(() => solve({ mode: "wheel-for-track", track: { kind: "profile", points: [[0, 0], [2, -1], [1, 0]] }, periodsPerTurn: 3 }));
+    expect(engineError(ttw({ kind: "ellipse", semiMajor: 2, semiMinor: 1, axle: { x: 1, y: 0 } })).where).toBe(
+      "wheel.axle",
+    );
+    expect(engineError(ttw({ kind: "polygon", sides: 4, inradius: 1, cornerRadius: 1 })).where).toBe(
+      "wheel.cornerRadius",
+    );
+    const e = engineError(() =>
+      solve({
+        mode: "wheel-for-track",
+        track: {
+          kind: "profile",
+          points: [
+            [0, 0],
+            [2, -1],
+            [1, 0],
+          ],
+        },
+        periodsPerTurn: 3,
+      }),
+    );
     expect(e.where).toBe("track.points[2]");
   });
 
   it("stops at the deadline with code timeout instead of running on", () => {
-    const e = engineError(() => solve({ mode: "twin-wheels", track: { kind: "sine", amplitude: 10, period: 100 }, periodsPerTurn: 3 }, { deadlineMs: 1 }));
+    const e = engineError(() =>
+      solve(
+        { mode: "twin-wheels", track: { kind: "sine", amplitude: 10, period: 100 }, periodsPerTurn: 3 },
+        { deadlineMs: 1 },
+      ),
+    );
     expect(e.code).toBe("timeout");
   });
 
   it("refuses a tolerance that would need too many points", () => {
-    expect(engineError(() => solve({ mode: "track-for-wheel", wheel: { kind: "circle", radius: 1000 }, tolerance: 1e-9 })).code).toBe("too-fine");
+    expect(
+      engineError(() => solve({ mode: "track-for-wheel", wheel: { kind: "circle", radius: 1000 }, tolerance: 1e-9 }))
+        .code,
+    ).toBe("too-fine");
   });
 });
 
@@ -53,7 +91,11 @@ describe("output polylines", () => {
     const e = 0.5;
     const b = a * Math.sqrt(1 - e * e);
     const tol = 0.01;
-    const r = solve({ mode: "track-for-wheel", wheel: { kind: "ellipse", semiMajor: a, semiMinor: b, axle: "focus" }, tolerance: tol });
+    const r = solve({
+      mode: "track-for-wheel",
+      wheel: { kind: "ellipse", semiMajor: a, semiMinor: b, axle: "focus" },
+      tolerance: tol,
+    });
     const y = (x: number) => -a + a * e * Math.cos(x / b); // Hall & Wagon 1992
     const pts = r.track!.points;
     let worst = 0;

@@ -7,8 +7,12 @@ import { canonicalJson, parseSpec, specHash } from "@/lib/track";
 import { compileFormula } from "@/lib/track/formula";
 import { pythonReference } from "./python-reference";
 
-const square = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400 }, tolerance: 0.01 };
-
+const square = {
+  mode: "track-for-wheel",
+  units: "mm",
+  wheel: { kind: "polygon", sides: 4, side: 400 },
+  tolerance: 0.01,
+};
 
 describe("spec", () => {
   it("fills defaults and names the failing field", () => {
@@ -19,20 +23,31 @@ describe("spec", () => {
     expect(e.where).toBe("wheel.sides");
     expect(engineError(() => parseSpec({ mode: "partner-wheel", wheel: square.wheel })).where).toBe("lobes");
     expect(engineError(() => parseSpec({ ...square, extra: 1 })).code).toBe("invalid-spec");
-    expect(engineError(() => parseSpec({ ...square, wheel: { kind: "polygon", sides: 4, side: 1, inradius: 1 } })).message).toMatch(/exactly one/);
+    expect(
+      engineError(() => parseSpec({ ...square, wheel: { kind: "polygon", sides: 4, side: 1, inradius: 1 } })).message,
+    ).toMatch(/exactly one/);
   });
 
   it("hashes the canonical JSON with SHA-256 as Python's hashlib and json do", () => {
-    const cj = canonicalJson({ tolerance: 0.01, wheel: { side: 400, sides: 4, kind: "polygon" }, units: "mm", mode: "track-for-wheel" });
+    const cj = canonicalJson({
+      tolerance: 0.01,
+      wheel: { side: 400, sides: 4, kind: "polygon" },
+      units: "mm",
+      mode: "track-for-wheel",
+    });
     expect(cj).toBe(canonicalJson(square)); // key order does not matter
-    const [py] = pythonReference<{ hex: string; canonical: string }>([{ kind: "sha256", text: cj, json: JSON.stringify(parseSpec(square)) }]);
+    const [py] = pythonReference<{ hex: string; canonical: string }>([
+      { kind: "sha256", text: cj, json: JSON.stringify(parseSpec(square)) },
+    ]);
     expect(specHash(square)).toBe(py.hex);
     expect(cj).toBe(py.canonical);
   });
 
   it("uses a SHA-256 that gives the FIPS 180-2 example digest", () => {
     // FIPS 180-2, Appendix B.1: SHA-256("abc").
-    expect(bytesToHex(sha256(utf8ToBytes("abc")))).toBe("ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad");
+    expect(bytesToHex(sha256(utf8ToBytes("abc")))).toBe(
+      "ba7816bf8f01cfea414140de5dae2223b00361a396177a9cb410ff61f20015ad",
+    );
   });
 });
 
@@ -47,14 +62,14 @@ describe("formula", () => {
     ["a = 1", /Assignment/],
     ["f(x) = x", /FunctionAssignment/],
     ["import({}, {})", /not allowed/],
-    ["evaluate(\"1\")", /not allowed/],
+    ['evaluate("1")', /not allowed/],
     ["x + y", /Unknown name "y"/],
     ["5 cm", /Unknown name "cm"/],
     ["x!", /operator "!"/],
     ["x == 1", /operator "=="/],
     ["[1, 2]", /Array/],
     ["x ? 1 : 2", /Conditional/],
-    ["\"abc\"", /Only numbers/],
+    ['"abc"', /Only numbers/],
     ["sin(x", /does not parse/],
     ["", /empty/],
     ["x+".repeat(300) + "x", /at most 500/],

@@ -29,7 +29,11 @@ describe("solving in stages", () => {
   });
 
   it("each stage keeps its own time limit", () => {
-    const staged = solveInStages({ mode: "twin-wheels", track: { kind: "sine", amplitude: 10, period: 100 }, periodsPerTurn: 3 });
+    const staged = solveInStages({
+      mode: "twin-wheels",
+      track: { kind: "sine", amplitude: 10, period: 100 },
+      periodsPerTurn: 3,
+    });
     expect(engineError(() => staged.check({ deadlineMs: 0 })).code).toBe("timeout");
     // A stage that ran out of time can be asked again with more.
     expect(staged.check().check.closureError).toBeLessThan(1e-9);

@@ -14,7 +14,12 @@ type Sent = { job: string; id: number } | { type: "cancel"; id: number };
 let workers: ReturnType<typeof fakeWorkers<Sent, Reply>>;
 const clients: WorkerClient<object, Reply>[] = [];
 function client(options: Partial<ConstructorParameters<typeof WorkerClient<object, Reply>>[0]> = {}) {
-  const c = new WorkerClient<{ job: string }, Reply>({ create: workers.create, crashMessage: "It could not start.", isLast: (r) => r.kind === "done", ...options });
+  const c = new WorkerClient<{ job: string }, Reply>({
+    create: workers.create,
+    crashMessage: "It could not start.",
+    isLast: (r) => r.kind === "done",
+    ...options,
+  });
   clients.push(c);
   return c;
 }

@@ -26,7 +26,13 @@ export default async function UsersPage() {
                 <RoleSelect userId={p.id} role={p.role} name={p.name} />
               </td>
               <td>{p.active ? <Badge tone="pass">active</Badge> : <Badge tone="caution">deactivated</Badge>}</td>
-              <td>{p.id === user.id ? <span className="text-xs text-ink-soft">you</span> : <ActiveToggle userId={p.id} active={p.active} name={p.name} />}</td>
+              <td>
+                {p.id === user.id ? (
+                  <span className="text-xs text-ink-soft">you</span>
+                ) : (
+                  <ActiveToggle userId={p.id} active={p.active} name={p.name} />
+                )}
+              </td>
             </tr>
           ))}
         </Table>

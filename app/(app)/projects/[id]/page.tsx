@@ -25,21 +25,32 @@ import { cutPlanName } from "@/lib/cut-plan/name";
 
 export const metadata: Metadata = { title: "Project" };
 
-
 /** The "Cut plan" column: the latest revision's saved plan by its name, or the way to make one. */
-function latestPlanName(plans: { designId: number; number: number; revisionNumber: number }[], designId: number, latestRevision: number): string {
+function latestPlanName(
+  plans: { designId: number; number: number; revisionNumber: number }[],
+  designId: number,
+  latestRevision: number,
+): string {
   const plan = plans.find((p) => p.designId === designId && p.revisionNumber === latestRevision);
   return plan ? cutPlanName(plan.number, plan.revisionNumber) : `Make a cut plan of R${latestRevision}`;
 }
 
 /** What the send form offers: each saved revision, the run its mock-up would show, and why it cannot go now. */
-async function sendable(projectId: number, reviews: Awaited<ReturnType<typeof listProjectReviews>>): Promise<SendableRevision[]> {
+async function sendable(
+  projectId: number,
+  reviews: Awaited<ReturnType<typeof listProjectReviews>>,
+): Promise<SendableRevision[]> {
   const revisions = await listProjectRevisions(projectId);
   return Promise.all(
     revisions.map(async (r) => {
       const mine = reviews.filter((x) => x.revisionId === r.id);
-      const blocked = mine.some((x) => x.decision?.decision === "approve") ? "approved already" : mine.some((x) => !x.decision) ? "waiting for the client" : null;
-      const plan = (await latestCutPlan(r.id))?.settings as { composed?: { runLength: number; endTreatment: "flat" | "half" | "scale" } } | undefined;
+      const blocked = mine.some((x) => x.decision?.decision === "approve")
+        ? "approved already"
+        : mine.some((x) => !x.decision)
+          ? "waiting for the client"
+          : null;
+      const plan = (await latestCutPlan(r.id))?.settings as
+        { composed?: { runLength: number; endTreatment: "flat" | "half" | "scale" } } | undefined;
       const earlier = reviews.find((x) => x.designId === r.designId && x.runLengthMm !== null);
       const run = plan?.composed
         ? { lengthMm: plan.composed.runLength, endTreatment: plan.composed.endTreatment }
@@ -51,7 +62,13 @@ async function sendable(projectId: number, reviews: Awaited<ReturnType<typeof li
   );
 }
 
-export default async function ProjectPage({ params, searchParams }: { params: Promise<{ id: string }>; searchParams: Promise<{ review?: string }> }) {
+export default async function ProjectPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string }>;
+  searchParams: Promise<{ review?: string }>;
+}) {
   await requirePageUser();
   const { id } = await params;
   const { review: askedRevision } = await searchParams;
@@ -69,7 +86,9 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
     listProjectCutPlans(access.projectId),
   ]);
   if (!project) notFound();
-  const [toSend, clients] = access.canManage ? await Promise.all([sendable(access.projectId, reviews), clientMembers(access.projectId)]) : [[], []];
+  const [toSend, clients] = access.canManage
+    ? await Promise.all([sendable(access.projectId, reviews), clientMembers(access.projectId)])
+    : [[], []];
   const memberIds = new Set(members.map((m) => m.userId));
   const people = access.canManage ? (await listAssignableUsers()).filter((u) => !memberIds.has(u.id)) : [];
 
@@ -128,13 +147,25 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
         }
       >
         {designs.length === 0 ? (
-          <p className="text-sm text-ink-soft">No designs yet.{access.canManage ? " Start one from a preset or from scratch." : ""}</p>
+          <p className="text-sm text-ink-soft">
+            No designs yet.{access.canManage ? " Start one from a preset or from scratch." : ""}
+          </p>
         ) : (
-          <Table head={access.canManage ? ["Design", "Mode", "Latest revision", "Last change", "Cut plan"] : ["Design", "Mode", "Latest revision", "Last change"]} caption="Designs">
+          <Table
+            head={
+              access.canManage
+                ? ["Design", "Mode", "Latest revision", "Last change", "Cut plan"]
+                : ["Design", "Mode", "Latest revision", "Last change"]
+            }
+            caption="Designs"
+          >
             {designs.map((d) => (
               <tr key={d.id}>
                 <td>
-                  <Link href={`/projects/${access.projectId}/designs/${d.id}`} className="font-medium underline decoration-ink-line underline-offset-2">
+                  <Link
+                    href={`/projects/${access.projectId}/designs/${d.id}`}
+                    className="font-medium underline decoration-ink-line underline-offset-2"
+                  >
                     {d.name}
                   </Link>
                 </td>
@@ -144,7 +175,10 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
                 {access.canManage ? (
                   <td>
                     {d.latestRevision ? (
-                      <Link href={`/projects/${access.projectId}/designs/${d.id}/cut`} className="text-sm underline decoration-ink-line underline-offset-2">
+                      <Link
+                        href={`/projects/${access.projectId}/designs/${d.id}/cut`}
+                        className="text-sm underline decoration-ink-line underline-offset-2"
+                      >
                         {latestPlanName(plans, d.id, d.latestRevision)}
                       </Link>
                     ) : (
@@ -161,12 +195,28 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
       <Panel title="Client review">
         <div className="flex flex-col gap-4">
           <ReviewList
-            reviews={reviews.map((r) => ({ id: r.id, projectId: r.projectId, designName: r.designName, revisionNumber: r.revisionNumber, createdAt: r.createdAt, requestedBy: r.requestedBy, status: reviewStatus(r), decision: r.decision, deposit: r.deposit }))}
+            reviews={reviews.map((r) => ({
+              id: r.id,
+              projectId: r.projectId,
+              designName: r.designName,
+              revisionNumber: r.revisionNumber,
+              createdAt: r.createdAt,
+              requestedBy: r.requestedBy,
+              status: reviewStatus(r),
+              decision: r.decision,
+              deposit: r.deposit,
+            }))}
           />
           {access.canManage ? (
             <div id="send-review" className="border-t border-paper-edge pt-4">
               <h3 className="mb-2 text-sm font-semibold">Send a revision for the client&apos;s review</h3>
-              <SendReviewForm revisions={toSend} clients={clients.map((c) => c.name)} initialRevisionId={askedRevision && /^\d{1,10}$/.test(askedRevision) ? Number(askedRevision) : undefined} />
+              <SendReviewForm
+                revisions={toSend}
+                clients={clients.map((c) => c.name)}
+                initialRevisionId={
+                  askedRevision && /^\d{1,10}$/.test(askedRevision) ? Number(askedRevision) : undefined
+                }
+              />
             </div>
           ) : null}
         </div>
@@ -174,15 +224,23 @@ export default async function ProjectPage({ params, searchParams }: { params: Pr
 
       <Panel title="Assembly sheets">
         {plans.length === 0 ? (
-          <p className="text-sm text-ink-soft">No cut plan is saved yet: the assembly sheet comes from a saved cut plan.</p>
+          <p className="text-sm text-ink-soft">
+            No cut plan is saved yet: the assembly sheet comes from a saved cut plan.
+          </p>
         ) : (
           <ul className="flex flex-col gap-1 text-sm" data-testid="assembly-sheets">
             {plans.map((p) => (
               <li key={p.id}>
-                <Link href={`/projects/${access.projectId}/cut-plans/${p.id}/assembly`} className="font-medium underline decoration-ink-line underline-offset-2">
+                <Link
+                  href={`/projects/${access.projectId}/cut-plans/${p.id}/assembly`}
+                  className="font-medium underline decoration-ink-line underline-offset-2"
+                >
                   Assembly sheet: {p.designName} R{p.revisionNumber}
                 </Link>{" "}
-                <span className="text-xs text-ink-soft">({cutPlanName(p.number, p.revisionNumber, { midSentence: true })}, {String((p.summary as { purpose?: string }).purpose ?? "review")})</span>
+                <span className="text-xs text-ink-soft">
+                  ({cutPlanName(p.number, p.revisionNumber, { midSentence: true })},{" "}
+                  {String((p.summary as { purpose?: string }).purpose ?? "review")})
+                </span>
               </li>
             ))}
           </ul>

@@ -15,4 +15,8 @@ export const GET = route<{ id: string }>(async (_request, params) => {
   return { review: reviewJson(detail, { withOrigin: a.canManage }) };
 });
 
-export const { PUT, PATCH, DELETE } = refuseChanges(access, "GET", "A review request is kept as it was sent; comment on it, or send the revision again.");
+export const { PUT, PATCH, DELETE } = refuseChanges(
+  access,
+  "GET",
+  "A review request is kept as it was sent; comment on it, or send the revision again.",
+);

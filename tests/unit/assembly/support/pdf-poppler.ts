@@ -8,7 +8,8 @@ import path from "node:path";
 
 function tool(name: string): string {
   const file = `/usr/bin/${name}`;
-  if (!existsSync(file)) throw new Error(`${file} is missing: install Debian's poppler-utils (apt-get install poppler-utils)`);
+  if (!existsSync(file))
+    throw new Error(`${file} is missing: install Debian's poppler-utils (apt-get install poppler-utils)`);
   return file;
 }
 
@@ -30,7 +31,8 @@ export const pdfinfo = (pdf: Buffer) => withFile(pdf, (f) => run("pdfinfo", ["-i
 export const pdffonts = (pdf: Buffer) => withFile(pdf, (f) => run("pdffonts", [f]).toString("utf8"));
 
 /** The text in reading layout, pages split on form feeds. */
-export const pdftextPages = (pdf: Buffer) => withFile(pdf, (f) => run("pdftotext", ["-layout", "-enc", "UTF-8", f, "-"]).toString("utf8").split("\f"));
+export const pdftextPages = (pdf: Buffer) =>
+  withFile(pdf, (f) => run("pdftotext", ["-layout", "-enc", "UTF-8", f, "-"]).toString("utf8").split("\f"));
 
 export interface Word {
   page: number;
@@ -47,7 +49,13 @@ export interface PageWords {
   words: Word[];
 }
 
-const decode = (s: string) => s.replace(/&lt;/g, "<").replace(/&gt;/g, ">").replace(/&quot;/g, '"').replace(/&#39;/g, "'").replace(/&amp;/g, "&");
+const decode = (s: string) =>
+  s
+    .replace(/&lt;/g, "<")
+    .replace(/&gt;/g, ">")
+    .replace(/&quot;/g, '"')
+    .replace(/&#39;/g, "'")
+    .replace(/&amp;/g, "&");
 
 /** Every word with its box in pt from the page's top-left (pdftotext -bbox). */
 export function pdfWords(pdf: Buffer): PageWords[] {
@@ -55,7 +63,9 @@ export function pdfWords(pdf: Buffer): PageWords[] {
   const pages: PageWords[] = [];
   for (const m of html.matchAll(/<page width="([\d.]+)" height="([\d.]+)">([\s\S]*?)<\/page>/g)) {
     const page = pages.length;
-    const words = [...m[3].matchAll(/<word xMin="([\d.-]+)" yMin="([\d.-]+)" xMax="([\d.-]+)" yMax="([\d.-]+)">([^<]*)<\/word>/g)].map((w) => ({
+    const words = [
+      ...m[3].matchAll(/<word xMin="([\d.-]+)" yMin="([\d.-]+)" xMax="([\d.-]+)" yMax="([\d.-]+)">([^<]*)<\/word>/g),
+    ].map((w) => ({
       page,
       xMin: Number(w[1]),
       yMin: Number(w[2]),
@@ -71,7 +81,24 @@ export function pdfWords(pdf: Buffer): PageWords[] {
 /** How many pixels are darker than mid-grey in a box of a page rendered at 72 dpi (1 px = 1 pt). */
 export function darkPixels(pdf: Buffer, page: number, box: { x: number; y: number; w: number; h: number }): number {
   const pgm = withFile(pdf, (f) =>
-    run("pdftoppm", ["-gray", "-r", "72", "-f", String(page), "-l", String(page), "-x", String(box.x), "-y", String(box.y), "-W", String(box.w), "-H", String(box.h), f]),
+    run("pdftoppm", [
+      "-gray",
+      "-r",
+      "72",
+      "-f",
+      String(page),
+      "-l",
+      String(page),
+      "-x",
+      String(box.x),
+      "-y",
+      String(box.y),
+      "-W",
+      String(box.w),
+      "-H",
+      String(box.h),
+      f,
+    ]),
   );
   // Binary PGM (P5): three header lines (magic, size, maxval), then one byte a pixel.
   let at = 0;

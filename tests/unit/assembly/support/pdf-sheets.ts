@@ -33,16 +33,41 @@ export function longRun(length: number): AssemblySheet {
     segments.push({ id: `T${String(i + 1).padStart(2, "0")}`, x0: x, x1: Math.min(x + 2 * period, total) });
   const supports: number[] = [];
   for (let x = 60; x < total - 30; x += 600) supports.push(x);
-  const joints: SheetJoint[] = segments.slice(1).map((s, i) => ({ station: s.x0, between: [segments[i].id, s.id], kind: "key", detail: trikeSheet.joints[0].detail }));
+  const joints: SheetJoint[] = segments.slice(1).map((s, i) => ({
+    station: s.x0,
+    between: [segments[i].id, s.id],
+    kind: "key",
+    detail: trikeSheet.joints[0].detail,
+  }));
   const levels: LevelRow[] = [
-    ...supports.map((x, i) => ({ what: "support" as const, label: `S${i + 1}`, station: x, topHeight: 160, tolerance: 1 })),
-    ...joints.map((j) => ({ what: "joint" as const, label: j.between.join("/"), station: j.station, topHeight: 162.8, tolerance: 0.42 })),
+    ...supports.map((x, i) => ({
+      what: "support" as const,
+      label: `S${i + 1}`,
+      station: x,
+      topHeight: 160,
+      tolerance: 1,
+    })),
+    ...joints.map((j) => ({
+      what: "joint" as const,
+      label: j.between.join("/"),
+      station: j.station,
+      topHeight: 162.8,
+      tolerance: 0.42,
+    })),
   ].sort((a, b) => a.station - b.station);
   return {
     ...trikeSheet,
     run: { ...run, length: total, periods, profile, segments, supports },
     joints,
     levels,
-    parts: segments.map((s, i) => ({ id: s.id, name: `Track segment ${i + 1} of ${segments.length}`, material: "Birch plywood 18 mm", quantity: 2, sheets: [1 + Math.floor(i / 3)] })).concat(trikeSheet.parts.filter((p) => p.id.startsWith("W"))),
+    parts: segments
+      .map((s, i) => ({
+        id: s.id,
+        name: `Track segment ${i + 1} of ${segments.length}`,
+        material: "Birch plywood 18 mm",
+        quantity: 2,
+        sheets: [1 + Math.floor(i / 3)],
+      }))
+      .concat(trikeSheet.parts.filter((p) => p.id.startsWith("W"))),
   };
 }

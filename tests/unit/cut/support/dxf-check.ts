@@ -39,6 +39,8 @@ export function ezdxfCheck(paths: string[]): EzFile[] {
     return (JSON.parse(out) as { files: EzFile[] }).files;
   } catch (e) {
     const err = e as { stderr?: string; message: string };
-    throw new Error(`The DXF check needs ${PYTHON} with python3-ezdxf (apt-get install python3-ezdxf). It failed: ${err.stderr || err.message}`);
+    throw new Error(
+      `The DXF check needs ${PYTHON} with python3-ezdxf (apt-get install python3-ezdxf). It failed: ${err.stderr || err.message}`,
+    );
   }
 }

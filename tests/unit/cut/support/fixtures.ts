@@ -7,7 +7,11 @@ import type { SheetNestResult } from "@/lib/nest/types";
 import type { Part } from "@/lib/cut/types";
 import { bounds } from "@/lib/geometry/box";
 
-export const SQUARE_SPEC = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 } } as const;
+export const SQUARE_SPEC = {
+  mode: "track-for-wheel",
+  units: "mm",
+  wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 },
+} as const;
 
 export const DEMO_SETTINGS = {
   project: "Square-wheel trike run",
@@ -31,7 +35,12 @@ export function font(): GlyphTable {
  * A trivial layout of our own for the export tests (not the nester, not lib/cut's shelf layout):
  * every copy at rotation 0 in its own row, rows stacked up the sheet, a new sheet when one is full.
  */
-export function rowNest(parts: Part[], sheet: { length: number; width: number }, margin: number, gap: number): SheetNestResult {
+export function rowNest(
+  parts: Part[],
+  sheet: { length: number; width: number },
+  margin: number,
+  gap: number,
+): SheetNestResult {
   const sheets: SheetNestResult["sheets"] = [];
   let y = margin;
   let index = 0;

@@ -17,7 +17,8 @@ const closed = (ring: readonly Pt[]) => [...ring, ring[0]].map(([x, y]) => new C
 
 export const jRing = (ring: readonly Pt[]): Geometry => gf.createLinearRing(closed(ring));
 export const jPoint = (p: readonly [number, number]): Geometry => gf.createPoint(new Coordinate(p[0], p[1]));
-export const jPolygon = (r: Pick<Region, "outer" | "holes">): Geometry => gf.createPolygon(jRing(r.outer), r.holes.map(jRing));
+export const jPolygon = (r: Pick<Region, "outer" | "holes">): Geometry =>
+  gf.createPolygon(jRing(r.outer), r.holes.map(jRing));
 
 export function jBuffer(g: Geometry, d: number, quadSegs = 256): Geometry {
   const p = new BufferParameters();
@@ -26,10 +27,12 @@ export function jBuffer(g: Geometry, d: number, quadSegs = 256): Geometry {
 }
 
 export const jDistance = (a: Geometry, b: Geometry) => DistanceOp.distance(a, b);
-export const jHausdorff = (a: Geometry, b: Geometry, densify?: number) => DiscreteHausdorffDistance.distance(a, b, densify);
+export const jHausdorff = (a: Geometry, b: Geometry, densify?: number) =>
+  DiscreteHausdorffDistance.distance(a, b, densify);
 
 type Poly = [number, number][][];
-const pc = (r: Pick<Region, "outer" | "holes">): Poly => [r.outer, ...r.holes].map((ring) => [...ring, ring[0]].map(([x, y]) => [x, y] as [number, number]));
+const pc = (r: Pick<Region, "outer" | "holes">): Poly =>
+  [r.outer, ...r.holes].map((ring) => [...ring, ring[0]].map(([x, y]) => [x, y] as [number, number]));
 
 function multiArea(m: [number, number][][][]): number {
   let a = 0;
@@ -42,6 +45,9 @@ function multiArea(m: [number, number][][][]): number {
   return a;
 }
 
-export const pcIntersectionArea = (a: Pick<Region, "outer" | "holes">, b: Pick<Region, "outer" | "holes">) => multiArea(polyclip.intersection(pc(a), pc(b)));
-export const pcUnionArea = (rs: Array<Pick<Region, "outer" | "holes">>) => multiArea(polyclip.union(pc(rs[0]), ...rs.slice(1).map(pc)));
-export const pcDifferenceArea = (a: Pick<Region, "outer" | "holes">, b: Pick<Region, "outer" | "holes">) => multiArea(polyclip.difference(pc(a), pc(b)));
+export const pcIntersectionArea = (a: Pick<Region, "outer" | "holes">, b: Pick<Region, "outer" | "holes">) =>
+  multiArea(polyclip.intersection(pc(a), pc(b)));
+export const pcUnionArea = (rs: Array<Pick<Region, "outer" | "holes">>) =>
+  multiArea(polyclip.union(pc(rs[0]), ...rs.slice(1).map(pc)));
+export const pcDifferenceArea = (a: Pick<Region, "outer" | "holes">, b: Pick<Region, "outer" | "holes">) =>
+  multiArea(polyclip.difference(pc(a), pc(b)));

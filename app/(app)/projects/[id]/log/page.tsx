@@ -19,7 +19,10 @@ export default async function BuildLogPage({ params }: { params: Promise<{ id: s
     if (e instanceof AppError && e.kind === "not_found") notFound();
     throw e;
   });
-  const [project, entries] = await Promise.all([getProjectSummary(access.projectId), listLog(access.projectId, { limit: 300 })]);
+  const [project, entries] = await Promise.all([
+    getProjectSummary(access.projectId),
+    listLog(access.projectId, { limit: 300 }),
+  ]);
   const writer = access.canManage || access.memberRole === "installer";
   const client = access.memberRole === "client";
   return (
@@ -30,7 +33,11 @@ export default async function BuildLogPage({ params }: { params: Promise<{ id: s
       <h1 className="text-2xl font-semibold tracking-tight">Build log: {project?.name}</h1>
       {writer || client ? (
         <Panel title={writer ? "Add an entry" : "Add a note"}>
-          <LogEntryForm projectId={access.projectId} kinds={writer ? [...PEOPLE_LOG_KINDS] : ["note"]} photos={writer} />
+          <LogEntryForm
+            projectId={access.projectId}
+            kinds={writer ? [...PEOPLE_LOG_KINDS] : ["note"]}
+            photos={writer}
+          />
         </Panel>
       ) : null}
       <LogList entries={entries} />

@@ -10,12 +10,21 @@ export const GET = route<{ id: string }>(async (request, params) => {
   const access = await requireSheetAccess(idParam(params.id, "cut plan"));
   const q = new URL(request.url).searchParams;
   const paper = (q.get("paper") ?? "a4").toLowerCase();
-  if (!(paper in PAPER_SIZES)) throw new AppError("bad_request", 'The paper must be "a4" or "letter".', { paper: ["a4 or letter"] });
+  if (!(paper in PAPER_SIZES))
+    throw new AppError("bad_request", 'The paper must be "a4" or "letter".', { paper: ["a4 or letter"] });
   const units = q.get("units");
-  const sheet = await assemblySheetFor(access.plan, access, { inches: units === "in" ? true : units === "mm" ? false : undefined, bumpLimit: bumpLimitParam(q.get("limit")) });
+  const sheet = await assemblySheetFor(access.plan, access, {
+    inches: units === "in" ? true : units === "mm" ? false : undefined,
+    bumpLimit: bumpLimitParam(q.get("limit")),
+  });
   const pdf = await assemblySheetPdf(sheet, { paper: paper as Paper });
   const name = `${revisionBaseName(sheet.design.revision, sheet.project.name, sheet.design.name)}-assembly-${paper}.pdf`;
   return new Response(new Uint8Array(pdf), {
-    headers: { "content-type": "application/pdf", "content-disposition": `attachment; filename="${name}"`, "cache-control": "private, no-store", "x-content-type-options": "nosniff" },
+    headers: {
+      "content-type": "application/pdf",
+      "content-disposition": `attachment; filename="${name}"`,
+      "cache-control": "private, no-store",
+      "x-content-type-options": "nosniff",
+    },
   });
 });

@@ -4,7 +4,9 @@ import { created, idParam, jsonBody, route } from "@/lib/server/route";
 import { tickSchema } from "@/lib/validation/build-log";
 
 /** The plan's installation progress: each part and joint, ticked or not (any member). */
-export const GET = route<{ id: string }>(async (_request, params) => ticksOf(await requireSheetAccess(idParam(params.id, "cut plan"))));
+export const GET = route<{ id: string }>(async (_request, params) =>
+  ticksOf(await requireSheetAccess(idParam(params.id, "cut plan"))),
+);
 
 /** Ticks (or unticks) a part or a joint as installed; each writes a build-log entry. The crew, the shop, admins. */
 export const POST = route<{ id: string }>(async (request, params) => {

@@ -7,9 +7,14 @@ import { created, idParam, route } from "@/lib/server/route";
 export const GET = route<{ id: string }>(async (request, params) => {
   const access = await requireProjectAccess(idParam(params.id, "project"));
   const before = Number(new URL(request.url).searchParams.get("before"));
-  const entries = await listLog(access.projectId, { before: Number.isSafeInteger(before) && before > 0 ? before : undefined });
+  const entries = await listLog(access.projectId, {
+    before: Number.isSafeInteger(before) && before > 0 ? before : undefined,
+  });
   return {
-    entries: entries.map((e) => ({ ...e, photos: e.photos.map((p) => ({ ...p, url: `/api/photos/${p.id}`, thumbUrl: `/api/photos/${p.id}?size=thumb` })) })),
+    entries: entries.map((e) => ({
+      ...e,
+      photos: e.photos.map((p) => ({ ...p, url: `/api/photos/${p.id}`, thumbUrl: `/api/photos/${p.id}?size=thumb` })),
+    })),
   };
 });
 

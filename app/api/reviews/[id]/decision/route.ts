@@ -23,4 +23,8 @@ export const POST = route<{ id: string }>(async (request, params) => {
   return created({ signOff: signOffJson(signOff, { withOrigin: false }), payment });
 });
 
-export const { PUT, PATCH, DELETE } = refuseChanges(access, "GET, POST", "A decision is permanent: it cannot be changed or removed.");
+export const { PUT, PATCH, DELETE } = refuseChanges(
+  access,
+  "GET, POST",
+  "A decision is permanent: it cannot be changed or removed.",
+);

@@ -13,6 +13,10 @@ export const GET = route<{ id: string }>(async (_request, params) => {
   if (!found) throw new AppError("not_found", "No such revision.");
   const picture = await animatedPreview(solveStored(found.revision.spec));
   return new Response(new Uint8Array(picture.data), {
-    headers: { "content-type": picture.contentType, "cache-control": "private, max-age=31536000, immutable", "x-content-type-options": "nosniff" },
+    headers: {
+      "content-type": picture.contentType,
+      "cache-control": "private, max-age=31536000, immutable",
+      "x-content-type-options": "nosniff",
+    },
   });
 });

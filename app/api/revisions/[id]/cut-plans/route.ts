@@ -15,6 +15,12 @@ export const GET = route<{ id: string }>(async (_request, params) => {
 export const POST = route<{ id: string }>(async (request, params) => {
   const access = await requireCutPlanAccess(idParam(params.id, "revision"));
   const { nest, purpose, reason, ...choice } = await jsonBody(request, newCutPlanSchema, CUT_PLAN_BODY_LIMIT);
-  const stored = await storeCutPlan(access.user, { revision: access.revision, projectId: access.projectId }, choice, nest, { purpose, reason });
+  const stored = await storeCutPlan(
+    access.user,
+    { revision: access.revision, projectId: access.projectId },
+    choice,
+    nest,
+    { purpose, reason },
+  );
   return created({ cutPlan: stored });
 });

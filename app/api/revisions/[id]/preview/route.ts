@@ -9,7 +9,9 @@ import { idParam, route } from "@/lib/server/route";
 export const GET = route<{ id: string }>(async (_request, params) => {
   const { revision } = await requireRevisionAccess(idParam(params.id, "revision"));
   const result = solveStored(revision.spec);
-  const png = await sharp(Buffer.from(previewSvg(result))).png().toBuffer();
+  const png = await sharp(Buffer.from(previewSvg(result)))
+    .png()
+    .toBuffer();
   return new Response(new Uint8Array(png), {
     headers: { "content-type": "image/png", "cache-control": "private, max-age=31536000, immutable" },
   });

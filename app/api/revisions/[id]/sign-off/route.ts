@@ -15,4 +15,8 @@ export const GET = route<{ id: string }>(async (_request, params) => {
   return { signOff: signOffJson(signOff, { withOrigin: a.canManage }) };
 });
 
-export const { PUT, PATCH, DELETE } = refuseChanges(access, "GET", "A sign-off is permanent: it cannot be changed or removed.");
+export const { PUT, PATCH, DELETE } = refuseChanges(
+  access,
+  "GET",
+  "A sign-off is permanent: it cannot be changed or removed.",
+);

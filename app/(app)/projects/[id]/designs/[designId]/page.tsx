@@ -8,7 +8,13 @@ import { libraryMaterials } from "@/lib/server/loads";
 
 export const metadata: Metadata = { title: "Studio" };
 
-export default async function StudioPage({ params, searchParams }: { params: Promise<{ id: string; designId: string }>; searchParams: Promise<{ revision?: string }> }) {
+export default async function StudioPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string; designId: string }>;
+  searchParams: Promise<{ revision?: string }>;
+}) {
   await requirePageUser();
   const { id, designId } = await params;
   const { revision } = await searchParams;
@@ -19,16 +25,18 @@ export default async function StudioPage({ params, searchParams }: { params: Pro
   if (String(access.projectId) !== id) notFound();
   const revisionNumber = revision && /^\d{1,6}$/.test(revision) ? Number(revision) : undefined;
   // The library rows the loads panel offers (plain figures only: no ids, dates or sources cross to the browser).
-  const library = (await libraryMaterials()).map(({ name, kind, thicknessMm, densityKgM3, modulusGpa, poisson, allowableMpa, frictionStatic }) => ({
-    name,
-    kind,
-    thicknessMm,
-    densityKgM3,
-    modulusGpa,
-    poisson,
-    allowableMpa,
-    frictionStatic,
-  }));
+  const library = (await libraryMaterials()).map(
+    ({ name, kind, thicknessMm, densityKgM3, modulusGpa, poisson, allowableMpa, frictionStatic }) => ({
+      name,
+      kind,
+      thicknessMm,
+      densityKgM3,
+      modulusGpa,
+      poisson,
+      allowableMpa,
+      frictionStatic,
+    }),
+  );
   return (
     <>
       <div className="no-print flex gap-4 text-sm">
@@ -36,14 +44,22 @@ export default async function StudioPage({ params, searchParams }: { params: Pro
           ← Project
         </Link>
         {access.canManage ? (
-          <Link href={`/projects/${access.projectId}/designs/${access.design.id}/cut`} className="text-ink-soft hover:underline">
+          <Link
+            href={`/projects/${access.projectId}/designs/${access.design.id}/cut`}
+            className="text-ink-soft hover:underline"
+          >
             Cut plan →
           </Link>
         ) : null}
       </div>
       {/* The studio uses the whole width of the screen, not the reading width of other pages. */}
       <div className="relative left-1/2 w-[min(110rem,calc(100vw-2rem))] -translate-x-1/2">
-        <DesignStudio designId={access.design.id} projectId={access.projectId} revisionNumber={revisionNumber} library={library} />
+        <DesignStudio
+          designId={access.design.id}
+          projectId={access.projectId}
+          revisionNumber={revisionNumber}
+          library={library}
+        />
       </div>
     </>
   );

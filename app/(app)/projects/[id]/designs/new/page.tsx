@@ -22,7 +22,10 @@ export default async function NewDesignPage({ params }: { params: Promise<{ id: 
     <>
       <h1 className="text-2xl font-semibold tracking-tight">New design</h1>
       <Panel title="Start">
-        <NewDesignForm projectId={access.projectId} presets={PRESETS.map((p) => ({ id: p.id, label: p.label, group: MODE_LABELS[p.spec.mode] }))} />
+        <NewDesignForm
+          projectId={access.projectId}
+          presets={PRESETS.map((p) => ({ id: p.id, label: p.label, group: MODE_LABELS[p.spec.mode] }))}
+        />
       </Panel>
     </>
   );

@@ -27,7 +27,13 @@ import { AppError } from "@/lib/server/errors";
 
 export const metadata: Metadata = { title: "Review" };
 
-export default async function ReviewPage({ params, searchParams }: { params: Promise<{ id: string; reviewId: string }>; searchParams: Promise<{ deposit?: string }> }) {
+export default async function ReviewPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string; reviewId: string }>;
+  searchParams: Promise<{ deposit?: string }>;
+}) {
   await requirePageUser();
   const { id, reviewId } = await params;
   const { deposit: returned } = await searchParams;
@@ -36,7 +42,12 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
     throw e;
   });
   if (String(access.projectId) !== id) notFound();
-  const [detail, found, project, plan] = await Promise.all([reviewDetail(access.review.id), findRevision(access.review.revisionId), getProjectSummary(access.projectId), latestCutPlan(access.review.revisionId)]);
+  const [detail, found, project, plan] = await Promise.all([
+    reviewDetail(access.review.id),
+    findRevision(access.review.revisionId),
+    getProjectSummary(access.projectId),
+    latestCutPlan(access.review.revisionId),
+  ]);
   if (!detail || !found) notFound();
   const spec = found.revision.spec as { mode: string; units?: "mm" | "in" };
   const summary = found.revision.summary as unknown as RevisionSummary;
@@ -48,9 +59,14 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
   // The load-path cautions from the same check as the studio and the cut files: the revision's load
   // settings, and the stored plan's board and support spacing when there is one.
   const composed = (plan?.settings as { composed?: unknown } | undefined)?.composed;
-  const loads = await loadsForRevision(found.revision, solve(found.revision.spec), composed ? cutFactsOfSettings(parseCutSettings(composed)) : undefined);
+  const loads = await loadsForRevision(
+    found.revision,
+    solve(found.revision.spec),
+    composed ? cutFactsOfSettings(parseCutSettings(composed)) : undefined,
+  );
   const cautions = loads.report.cautions.map(cautionParts);
-  const run = detail.runLengthMm !== null ? { runLength: detail.runLengthMm, endTreatment: detail.endTreatment ?? "flat" } : null;
+  const run =
+    detail.runLengthMm !== null ? { runLength: detail.runLengthMm, endTreatment: detail.endTreatment ?? "flat" } : null;
   const deposit = detail.deposit;
 
   return (
@@ -62,22 +78,31 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
         <h1 className="text-2xl font-semibold tracking-tight">
           Review: {detail.designName} <span className="font-mono">R{detail.revisionNumber}</span>
         </h1>
-        <Badge tone={status === "approved" ? "pass" : status === "changes-requested" ? "caution" : "ink"}>{REVIEW_STATUS_LABEL[status]}</Badge>
+        <Badge tone={status === "approved" ? "pass" : status === "changes-requested" ? "caution" : "ink"}>
+          {REVIEW_STATUS_LABEL[status]}
+        </Badge>
       </div>
       <div className="flex flex-col gap-1 text-sm">
         <p className="text-ink-soft">
-          {detail.requestedBy ?? "The shop"} sent this for review on <span className="font-mono text-xs">{formatWhen(detail.createdAt)}</span>
+          {detail.requestedBy ?? "The shop"} sent this for review on{" "}
+          <span className="font-mono text-xs">{formatWhen(detail.createdAt)}</span>
           {project?.site ? <> · for {project.site}</> : null}
         </p>
-        <blockquote className="whitespace-pre-wrap rounded-plate border-l-4 border-ink bg-white/60 px-3 py-2">{detail.message}</blockquote>
+        <blockquote className="whitespace-pre-wrap rounded-plate border-l-4 border-ink bg-white/60 px-3 py-2">
+          {detail.message}
+        </blockquote>
       </div>
 
       {decision ? (
-        <div className={`rounded-plate border px-3 py-2 text-sm ${decision.decision === "approve" ? "border-pass/40 bg-white/60 text-pass" : "border-caution bg-caution-soft text-caution-ink"}`} data-testid="decision-record">
+        <div
+          className={`rounded-plate border px-3 py-2 text-sm ${decision.decision === "approve" ? "border-pass/40 bg-white/60 text-pass" : "border-caution bg-caution-soft text-caution-ink"}`}
+          data-testid="decision-record"
+        >
           {decision.decision === "approve" ? (
             <>
               <strong>Approved for fabrication</strong> by {decision.typedName}
-              {decision.organisation ? ` (${decision.organisation})` : ""} on <span className="font-mono text-xs">{formatWhen(decision.signedAt)}</span>. Reference{" "}
+              {decision.organisation ? ` (${decision.organisation})` : ""} on{" "}
+              <span className="font-mono text-xs">{formatWhen(decision.signedAt)}</span>. Reference{" "}
               <span className="font-mono" data-testid="approval-reference">
                 {approvalReference(decision)}
               </span>
@@ -85,13 +110,21 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
             </>
           ) : (
             <>
-              <strong>Changes requested</strong> by {decision.typedName} on <span className="font-mono text-xs">{formatWhen(decision.signedAt)}</span>. The shop will send a new revision.
+              <strong>Changes requested</strong> by {decision.typedName} on{" "}
+              <span className="font-mono text-xs">{formatWhen(decision.signedAt)}</span>. The shop will send a new
+              revision.
             </>
           )}
         </div>
       ) : null}
 
-      <ReviewWorkspace reviewId={detail.id} spec={found.revision.spec} run={run} pair={spec.mode === "partner-wheel"} comments={detail.comments} />
+      <ReviewWorkspace
+        reviewId={detail.id}
+        spec={found.revision.spec}
+        run={run}
+        pair={spec.mode === "partner-wheel"}
+        comments={detail.comments}
+      />
 
       <div className="grid gap-4 lg:grid-cols-2">
         <Panel title="What the checks say">
@@ -108,7 +141,9 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
             ))}
           </ul>
           <p className="mt-2 text-xs text-ink-soft">
-            Figures from the rolling check of R{detail.revisionNumber} (fingerprint <span className="font-mono">{detail.specHash.slice(0, 12)}</span>, calculation version {found.revision.engineVersion}).
+            Figures from the rolling check of R{detail.revisionNumber} (fingerprint{" "}
+            <span className="font-mono">{detail.specHash.slice(0, 12)}</span>, calculation version{" "}
+            {found.revision.engineVersion}).
           </p>
         </Panel>
         <Panel title="Cautions">
@@ -118,18 +153,29 @@ export default async function ReviewPage({ params, searchParams }: { params: Pro
 
       {deposit ? (
         <Panel title="Deposit">
-          <DepositPanel reviewId={detail.id} text={depositText(deposit)} status={deposit.status} canPay={signer} returned={returned === "paid" || returned === "cancelled" ? returned : null} />
+          <DepositPanel
+            reviewId={detail.id}
+            text={depositText(deposit)}
+            status={deposit.status}
+            canPay={signer}
+            returned={returned === "paid" || returned === "cancelled" ? returned : null}
+          />
         </Panel>
       ) : null}
 
       {status === "open" ? (
         signer ? (
           <Panel title="Your decision">
-            <DecisionForm reviewId={detail.id} revisionNumber={detail.revisionNumber} deposit={deposit ? formatMoney(deposit.amountMinor, deposit.currency) : null} />
+            <DecisionForm
+              reviewId={detail.id}
+              revisionNumber={detail.revisionNumber}
+              deposit={deposit ? formatMoney(deposit.amountMinor, deposit.currency) : null}
+            />
           </Panel>
         ) : (
           <p className="text-sm text-ink-soft" data-testid="awaiting-client">
-            Waiting for the client&apos;s decision. Only the project&apos;s client can approve this revision or ask for changes.
+            Waiting for the client&apos;s decision. Only the project&apos;s client can approve this revision or ask for
+            changes.
           </p>
         )
       ) : null}

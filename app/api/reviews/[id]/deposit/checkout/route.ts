@@ -9,7 +9,14 @@ export const GET = route<{ id: string }>(async (_request, params) => {
   const { review } = await requireReviewAccess(idParam(params.id, "review"));
   const deposit = await depositOfReview(review.id);
   if (!deposit) throw new AppError("not_found", "This review asks for no deposit.");
-  return { deposit: { amountMinor: deposit.amountMinor, currency: deposit.currency, status: deposit.status, paidAt: deposit.paidAt?.toISOString() ?? null } };
+  return {
+    deposit: {
+      amountMinor: deposit.amountMinor,
+      currency: deposit.currency,
+      status: deposit.status,
+      paidAt: deposit.paidAt?.toISOString() ?? null,
+    },
+  };
 });
 
 /** A payment page for the due deposit: only the project's client members pay it. */

@@ -18,9 +18,22 @@ export const metadata: Metadata = { title: "Assembly sheet" };
 
 const pm = (mm: number, inches: boolean) => `± ${mm.toFixed(2)} mm${inches ? ` (± ${(mm / 25.4).toFixed(3)} in)` : ""}`;
 
-function Section({ n, title, children, breakBefore }: { n: number; title: string; children: React.ReactNode; breakBefore?: boolean }) {
+function Section({
+  n,
+  title,
+  children,
+  breakBefore,
+}: {
+  n: number;
+  title: string;
+  children: React.ReactNode;
+  breakBefore?: boolean;
+}) {
   return (
-    <section className={`flex flex-col gap-2 ${breakBefore ? "print-break-before" : ""}`} aria-labelledby={`sheet-${n}`}>
+    <section
+      className={`flex flex-col gap-2 ${breakBefore ? "print-break-before" : ""}`}
+      aria-labelledby={`sheet-${n}`}
+    >
       <h2 id={`sheet-${n}`} className="border-b-2 border-ink pb-1 text-base font-semibold">
         {n}. {title}
       </h2>
@@ -29,7 +42,13 @@ function Section({ n, title, children, breakBefore }: { n: number; title: string
   );
 }
 
-export default async function AssemblySheetPage({ params, searchParams }: { params: Promise<{ id: string; planId: string }>; searchParams: Promise<{ paper?: string; units?: string; limit?: string }> }) {
+export default async function AssemblySheetPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string; planId: string }>;
+  searchParams: Promise<{ paper?: string; units?: string; limit?: string }>;
+}) {
   await requirePageUser();
   const { id, planId } = await params;
   const q = await searchParams;
@@ -48,14 +67,22 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
       return undefined;
     }
   })();
-  const [sheet, ticks] = await Promise.all([assemblySheetFor(access.plan, access, { inches: inchesAsked, bumpLimit }), ticksOf(access)]);
+  const [sheet, ticks] = await Promise.all([
+    assemblySheetFor(access.plan, access, { inches: inchesAsked, bumpLimit }),
+    ticksOf(access),
+  ]);
   const inches = sheet.inches;
   const canTick = access.canManage || access.memberRole === "installer";
   const base = `/projects/${access.projectId}/cut-plans/${access.plan.id}/assembly`;
   const limitQuery = bumpLimit !== undefined ? `&limit=${bumpLimit}` : "";
-  const link = (o: { paper?: Paper; units?: "mm" | "in" }) => `${base}?paper=${o.paper ?? paper}&units=${o.units ?? (inches ? "in" : "mm")}${limitQuery}`;
+  const link = (o: { paper?: Paper; units?: "mm" | "in" }) =>
+    `${base}?paper=${o.paper ?? paper}&units=${o.units ?? (inches ? "in" : "mm")}${limitQuery}`;
   const pdf = `/api/cut-plans/${access.plan.id}/assembly-sheet?paper=${paper}&units=${inches ? "in" : "mm"}${limitQuery}`;
-  const initial = { done: Object.fromEntries(ticks.items.map((i) => [i.item, i.done])), installed: ticks.installed, total: ticks.total };
+  const initial = {
+    done: Object.fromEntries(ticks.items.map((i) => [i.item, i.done])),
+    installed: ticks.installed,
+    total: ticks.total,
+  };
 
   return (
     <article className="assembly-sheet flex flex-col gap-6 text-sm" data-testid="assembly-sheet" data-paper={paper}>
@@ -67,7 +94,12 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
         </Link>
         <span className="text-ink-soft">Paper:</span>
         {(Object.keys(PAPER_SIZES) as Paper[]).map((p) => (
-          <Link key={p} href={link({ paper: p })} aria-current={p === paper ? "page" : undefined} className={p === paper ? "font-semibold" : "underline"}>
+          <Link
+            key={p}
+            href={link({ paper: p })}
+            aria-current={p === paper ? "page" : undefined}
+            className={p === paper ? "font-semibold" : "underline"}
+          >
             {PAPER_SIZES[p].name}
           </Link>
         ))}
@@ -84,20 +116,34 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
           <label htmlFor="bump-limit" className="text-ink-soft">
             Bump limit (mm)
           </label>
-          <input id="bump-limit" name="limit" inputMode="decimal" defaultValue={sheet.tolerance.bumpLimit} className="w-16 rounded-plate border border-ink-line bg-white/70 px-1.5 py-0.5 font-mono" title="0.1 to 10 mm" />
+          <input
+            id="bump-limit"
+            name="limit"
+            inputMode="decimal"
+            defaultValue={sheet.tolerance.bumpLimit}
+            className="w-16 rounded-plate border border-ink-line bg-white/70 px-1.5 py-0.5 font-mono"
+            title="0.1 to 10 mm"
+          />
           <button type="submit" className="underline">
             Apply
           </button>
         </form>
         <span className="flex-1" />
         <PrintButton />
-        <a href={pdf} className="rounded-plate border border-ink bg-ink px-3 py-1.5 font-medium text-paper" data-testid="download-pdf" download>
+        <a
+          href={pdf}
+          className="rounded-plate border border-ink bg-ink px-3 py-1.5 font-medium text-paper"
+          data-testid="download-pdf"
+          download
+        >
           Download PDF
         </a>
       </div>
 
       <header className="flex flex-col gap-1 border-b-4 border-ink pb-3">
-        <p className="font-mono text-xs uppercase tracking-wider text-ink-soft">Assembly sheet · {cutPlanName(sheet.cutPlanNumber, sheet.design.revision, { midSentence: true })}</p>
+        <p className="font-mono text-xs uppercase tracking-wider text-ink-soft">
+          Assembly sheet · {cutPlanName(sheet.cutPlanNumber, sheet.design.revision, { midSentence: true })}
+        </p>
         <h1 className="text-2xl font-semibold tracking-tight">{sheet.project.name}</h1>
         <dl className="grid grid-cols-[auto_1fr] gap-x-4 gap-y-0.5">
           <dt className="text-ink-soft">Site</dt>
@@ -106,7 +152,8 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
           <dd>{sheet.project.client ?? "—"}</dd>
           <dt className="text-ink-soft">Design</dt>
           <dd>
-            {sheet.design.name} <span className="font-mono">R{sheet.design.revision}</span> · fingerprint <span className="font-mono">{sheet.design.specHash.slice(0, 12)}</span>
+            {sheet.design.name} <span className="font-mono">R{sheet.design.revision}</span> · fingerprint{" "}
+            <span className="font-mono">{sheet.design.specHash.slice(0, 12)}</span>
           </dd>
           <dt className="text-ink-soft">Sign-off</dt>
           <dd data-testid="sheet-approval">
@@ -116,7 +163,9 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
                 {sheet.approval.organisation ? `, ${sheet.approval.organisation}` : ""}
               </>
             ) : (
-              <span className="rounded-plate border-2 border-caution px-2 py-0.5 font-bold text-caution-ink">NOT APPROVED — FOR REVIEW ONLY</span>
+              <span className="rounded-plate border-2 border-caution px-2 py-0.5 font-bold text-caution-ink">
+                NOT APPROVED — FOR REVIEW ONLY
+              </span>
             )}
           </dd>
           <dt className="text-ink-soft">Date</dt>
@@ -192,11 +241,19 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
           <div className="grid gap-3 sm:grid-cols-2">
             <div>
               <h3 className="font-semibold">Fasteners</h3>
-              <ul className="list-disc pl-5">{sheet.fasteners.map((f) => <li key={f}>{f}</li>)}</ul>
+              <ul className="list-disc pl-5">
+                {sheet.fasteners.map((f) => (
+                  <li key={f}>{f}</li>
+                ))}
+              </ul>
             </div>
             <div>
               <h3 className="font-semibold">Tools</h3>
-              <ul className="list-disc pl-5">{sheet.tools.map((t) => <li key={t}>{t}</li>)}</ul>
+              <ul className="list-disc pl-5">
+                {sheet.tools.map((t) => (
+                  <li key={t}>{t}</li>
+                ))}
+              </ul>
             </div>
           </div>
         </Section>
@@ -204,14 +261,18 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
         {sheet.levels.length ? (
           <Section n={5} title="Level and position" breakBefore>
             <p className="text-xs">
-              Heights of the track&apos;s top above the datum. Each row&apos;s tolerance is how far a joint may sit off its station, or a support sit low, before the axle bumps by more than{" "}
-              {sheet.tolerance.bumpLimit} mm. {sheet.tolerance.method}
+              Heights of the track&apos;s top above the datum. Each row&apos;s tolerance is how far a joint may sit off
+              its station, or a support sit low, before the axle bumps by more than {sheet.tolerance.bumpLimit} mm.{" "}
+              {sheet.tolerance.method}
             </p>
             <Table head={["Item", "Station", "Top above datum", "Tolerance", "Checked"]} caption="Level and position">
               {sheet.levels.map((r) => (
                 <tr key={`${r.what}-${r.label}`} data-testid={`level-${r.label}`}>
                   <td className="font-mono">
-                    {r.label} <span className="font-sans text-xs text-ink-soft">{r.what === "joint" ? "joint, along the run" : "support, low"}</span>
+                    {r.label}{" "}
+                    <span className="font-sans text-xs text-ink-soft">
+                      {r.what === "joint" ? "joint, along the run" : "support, low"}
+                    </span>
                   </td>
                   <td className="font-mono">{station(r.station, inches)}</td>
                   <td className="font-mono">{station(r.topHeight, inches)}</td>
@@ -237,7 +298,9 @@ export default async function AssemblySheetPage({ params, searchParams }: { para
         </div>
       </Section>
       <p className="print-only text-xs text-ink-soft">
-        {sheet.project.name} · {sheet.design.name} R{sheet.design.revision} · {sheet.approval ? `approved ${sheet.approval.reference}` : "NOT APPROVED"} · {cutPlanName(sheet.cutPlanNumber, sheet.design.revision, { midSentence: true })}
+        {sheet.project.name} · {sheet.design.name} R{sheet.design.revision} ·{" "}
+        {sheet.approval ? `approved ${sheet.approval.reference}` : "NOT APPROVED"} ·{" "}
+        {cutPlanName(sheet.cutPlanNumber, sheet.design.revision, { midSentence: true })}
       </p>
     </article>
   );

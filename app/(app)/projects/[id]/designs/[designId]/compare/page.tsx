@@ -54,7 +54,13 @@ function d(points: Pt[], dy = 0): string {
   return points.map(([x, y], i) => `${i ? "L" : "M"}${x.toFixed(2)} ${(-(y + dy)).toFixed(2)}`).join(" ") + " Z";
 }
 
-export default async function ComparePage({ params, searchParams }: { params: Promise<{ id: string; designId: string }>; searchParams: Promise<{ a?: string; b?: string }> }) {
+export default async function ComparePage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string; designId: string }>;
+  searchParams: Promise<{ a?: string; b?: string }>;
+}) {
   await requirePageUser();
   const { designId } = await params;
   const { a, b } = await searchParams;
@@ -63,14 +69,18 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
     throw e;
   });
   const numbers = [a, b].map((n) => (n && /^\d{1,6}$/.test(n) ? Number(n) : NaN));
-  const rows = await Promise.all(numbers.map((n) => (Number.isFinite(n) ? revisionByNumber(access.design.id, n) : null)));
+  const rows = await Promise.all(
+    numbers.map((n) => (Number.isFinite(n) ? revisionByNumber(access.design.id, n) : null)),
+  );
   const base = `/projects/${access.projectId}/designs/${access.design.id}`;
   if (!rows[0] || !rows[1]) {
     return (
       <>
         <h1 className="text-2xl font-semibold">Compare revisions</h1>
         <Notice tone="problem">Choose two saved revisions of this design to compare.</Notice>
-        <Link href={base} className="text-sm underline">Back to the studio</Link>
+        <Link href={base} className="text-sm underline">
+          Back to the studio
+        </Link>
       </>
     );
   }
@@ -79,7 +89,9 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
   const extent = Math.max(...all.map(([x, y]) => Math.hypot(x, y))) * 1.1;
   return (
     <>
-      <Link href={base} className="no-print text-sm text-ink-soft hover:underline">← Studio</Link>
+      <Link href={base} className="no-print text-sm text-ink-soft hover:underline">
+        ← Studio
+      </Link>
       <h1 className="text-2xl font-semibold tracking-tight">
         {access.design.name}: R{rows[0].number} and R{rows[1].number}
       </h1>
@@ -101,14 +113,27 @@ export default async function ComparePage({ params, searchParams }: { params: Pr
           </Table>
         </Panel>
         <Panel title="Wheel outlines overlaid">
-          <svg viewBox={`${-extent} ${-extent} ${2 * extent} ${2 * extent}`} className="h-80 w-full" role="img" aria-label={`Wheel of R${rows[0].number} in solid ink, R${rows[1].number} dashed`}>
+          <svg
+            viewBox={`${-extent} ${-extent} ${2 * extent} ${2 * extent}`}
+            className="h-80 w-full"
+            role="img"
+            aria-label={`Wheel of R${rows[0].number} in solid ink, R${rows[1].number} dashed`}
+          >
             <line x1={-extent} x2={extent} y1={0} y2={0} stroke="#c4cfdc" strokeWidth={extent / 400} />
             <line y1={-extent} y2={extent} x1={0} x2={0} stroke="#c4cfdc" strokeWidth={extent / 400} />
             <path d={d(results[0].wheel.points)} fill="none" stroke="#1d3557" strokeWidth={extent / 150} />
-            <path d={d(results[1].wheel.points)} fill="none" stroke="#3d5a80" strokeWidth={extent / 150} strokeDasharray={`${extent / 40} ${extent / 60}`} />
+            <path
+              d={d(results[1].wheel.points)}
+              fill="none"
+              stroke="#3d5a80"
+              strokeWidth={extent / 150}
+              strokeDasharray={`${extent / 40} ${extent / 60}`}
+            />
             <circle r={extent / 80} fill="#1d3557" />
           </svg>
-          <p className="text-xs text-ink-soft">Solid: R{rows[0].number}. Dashed: R{rows[1].number}. Both with the axle at the centre, in their start pose.</p>
+          <p className="text-xs text-ink-soft">
+            Solid: R{rows[0].number}. Dashed: R{rows[1].number}. Both with the axle at the centre, in their start pose.
+          </p>
         </Panel>
       </div>
     </>

@@ -29,12 +29,24 @@ export const metadata: Metadata = { title: "Cut plan" };
 /** Choices for a revision with no plan yet: the first sheet in the library, its material, the first router. */
 function firstIds(library: Awaited<ReturnType<typeof listShopLibrary>>) {
   // The largest sheet, as a shop would first reach for.
-  const sheet = [...library.stockSheets].sort((a, b) => b.lengthMm * b.widthMm - a.lengthMm * a.widthMm).find((s) => library.materials.some((m) => m.id === s.materialId));
+  const sheet = [...library.stockSheets]
+    .sort((a, b) => b.lengthMm * b.widthMm - a.lengthMm * a.widthMm)
+    .find((s) => library.materials.some((m) => m.id === s.materialId));
   const machine = library.machines.find((m) => m.kind === "router") ?? library.machines[0];
-  return { materialId: sheet?.materialId ?? library.materials[0]?.id ?? 0, stockSheetId: sheet?.id ?? 0, machineId: machine?.id ?? 0 };
+  return {
+    materialId: sheet?.materialId ?? library.materials[0]?.id ?? 0,
+    stockSheetId: sheet?.id ?? 0,
+    machineId: machine?.id ?? 0,
+  };
 }
 
-export default async function CutPlanPage({ params, searchParams }: { params: Promise<{ id: string; designId: string }>; searchParams: Promise<{ revision?: string }> }) {
+export default async function CutPlanPage({
+  params,
+  searchParams,
+}: {
+  params: Promise<{ id: string; designId: string }>;
+  searchParams: Promise<{ revision?: string }>;
+}) {
   await requirePageUser();
   const { id, designId } = await params;
   const { revision: asked } = await searchParams;
@@ -43,11 +55,15 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
     throw e;
   });
   if (String(access.projectId) !== id) notFound();
-  if (!access.canManage) return <NoAccess what="Cut plans and cut files are for the shop: the project's fabricator or an admin." />;
+  if (!access.canManage)
+    return <NoAccess what="Cut plans and cut files are for the shop: the project's fabricator or an admin." />;
 
   const revisions = await listRevisions(access.design.id);
   const back = (
-    <Link href={`/projects/${access.projectId}/designs/${access.design.id}`} className="no-print text-sm text-ink-soft hover:underline">
+    <Link
+      href={`/projects/${access.projectId}/designs/${access.design.id}`}
+      className="no-print text-sm text-ink-soft hover:underline"
+    >
       ← Studio
     </Link>
   );
@@ -75,9 +91,17 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
   ]);
   // With no plan yet, start from the run the client reviewed.
   const reviewed = reviews.find((r) => r.runLengthMm !== null);
-  const reviewedRun: Partial<CutSettings> = reviewed ? { runLength: reviewed.runLengthMm!, endTreatment: reviewed.endTreatment ?? "flat" } : {};
+  const reviewedRun: Partial<CutSettings> = reviewed
+    ? { runLength: reviewed.runLengthMm!, endTreatment: reviewed.endTreatment ?? "flat" }
+    : {};
   const storedChoice = plan?.settings as (PlanChoice & { composed?: CutSettings }) | undefined;
-  const ids = storedChoice ? { materialId: storedChoice.materialId, stockSheetId: storedChoice.stockSheetId, machineId: storedChoice.machineId } : firstIds(library);
+  const ids = storedChoice
+    ? {
+        materialId: storedChoice.materialId,
+        stockSheetId: storedChoice.stockSheetId,
+        machineId: storedChoice.machineId,
+      }
+    : firstIds(library);
   let saved: SavedPlanView | null = null;
   // The load-path cautions as the files will state them: the saved plan's board and spans, else the revision's settings.
   let loads = plan ? null : await loadsForRevision(revision, solve(revision.spec));
@@ -106,7 +130,11 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
         {revisions.length > 1 ? (
           <nav aria-label="Revisions" className="flex gap-2 text-sm">
             {revisions.map((r) => (
-              <Link key={r.id} href={`?revision=${r.number}`} className={r.number === revision.number ? "font-semibold" : "underline"}>
+              <Link
+                key={r.id}
+                href={`?revision=${r.number}`}
+                className={r.number === revision.number ? "font-semibold" : "underline"}
+              >
                 R{r.number}
               </Link>
             ))}
@@ -114,11 +142,19 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
         ) : null}
       </div>
       {approval ? (
-        <p className="rounded-plate border border-pass/40 bg-white/60 px-3 py-2 text-sm text-pass" data-testid="approval-reference">
-          Client approval: {approvalLine(approval)}, signed {new Date(approval.signedAt).toISOString().slice(0, 16).replace("T", " ")} UTC. Every file of this revision carries the reference.
+        <p
+          className="rounded-plate border border-pass/40 bg-white/60 px-3 py-2 text-sm text-pass"
+          data-testid="approval-reference"
+        >
+          Client approval: {approvalLine(approval)}, signed{" "}
+          {new Date(approval.signedAt).toISOString().slice(0, 16).replace("T", " ")} UTC. Every file of this revision
+          carries the reference.
         </p>
       ) : (
-        <div className="flex flex-wrap items-center gap-3 rounded-plate border border-caution bg-caution-soft px-3 py-2 text-sm text-caution-ink" data-testid="approval-reference">
+        <div
+          className="flex flex-wrap items-center gap-3 rounded-plate border border-caution bg-caution-soft px-3 py-2 text-sm text-caution-ink"
+          data-testid="approval-reference"
+        >
           <span className="font-semibold">{approvalLine(null)}</span>
           <span>The client has not approved R{revision.number}; its files are marked so.</span>
           <Link href={`/projects/${access.projectId}?review=${revision.id}#send-review`} className="underline">
@@ -129,8 +165,8 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
       <Panel title="Load-path cautions">
         {!loads!.stored ? (
           <p className="mb-2 text-sm text-ink-soft" data-testid="loads-defaults">
-            R{revision.number} was saved without load settings: these use the shop library&apos;s defaults (pushed by hand). Set the use and the load in the
-            studio&apos;s Loads panel and save a revision.
+            R{revision.number} was saved without load settings: these use the shop library&apos;s defaults (pushed by
+            hand). Set the use and the load in the studio&apos;s Loads panel and save a revision.
           </p>
         ) : null}
         <CautionList cautions={loads!.report.cautions.map(cautionParts)} disclaimer={loads!.report.disclaimer} />
@@ -143,8 +179,23 @@ export default async function CutPlanPage({ params, searchParams }: { params: Pr
           projectName={project?.name ?? ""}
           library={{
             materials: library.materials.map((m) => ({ id: m.id, name: m.name, thicknessMm: m.thicknessMm })),
-            sheets: library.stockSheets.map((s) => ({ id: s.id, name: s.name, lengthMm: s.lengthMm, widthMm: s.widthMm, grain: s.grain, materialId: s.materialId })),
-            machines: library.machines.map((k) => ({ id: k.id, name: k.name, kind: k.kind, kerfMm: k.kerfMm, bedLengthMm: k.bedLengthMm, bedWidthMm: k.bedWidthMm, minInsideRadiusMm: k.minInsideRadiusMm })),
+            sheets: library.stockSheets.map((s) => ({
+              id: s.id,
+              name: s.name,
+              lengthMm: s.lengthMm,
+              widthMm: s.widthMm,
+              grain: s.grain,
+              materialId: s.materialId,
+            })),
+            machines: library.machines.map((k) => ({
+              id: k.id,
+              name: k.name,
+              kind: k.kind,
+              kerfMm: k.kerfMm,
+              bedLengthMm: k.bedLengthMm,
+              bedWidthMm: k.bedWidthMm,
+              minInsideRadiusMm: k.minInsideRadiusMm,
+            })),
           }}
           initialForm={formFromSettings((storedChoice?.settings ?? reviewedRun) as Partial<CutSettings>, ids)}
           saved={saved}
