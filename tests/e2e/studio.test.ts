@@ -6,7 +6,7 @@ import path from "node:path";
 import type { Browser, Page } from "playwright-core";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { PRESETS } from "@/lib/studio/presets";
-import { isEngineError, solve, type DesignSpecInput, type SolveResult } from "@/lib/track";
+import { isEngineError, MODE_NAMES, solve, type DesignSpecInput, type SolveResult } from "@/lib/track";
 import { ComparePage } from "./pages/compare-page";
 import { StudioPage } from "./pages/studio-page";
 import { baseUrl, launchBrowser, screenshotPath } from "./support/browser";
@@ -145,7 +145,7 @@ describe("the studio, as the fabricator", () => {
   it.each(MODES)("$mode: a preset, a changed parameter, a level roll, a saved revision reopened", async (m) => {
     const { context, page } = await signedIn(browser, "fabricator@example.test");
     const studio = new StudioPage(page);
-    await studio.create(1, `Mode ${m.mode}`, m.preset);
+    await studio.create(1, `Studio check: ${MODE_NAMES[m.mode as keyof typeof MODE_NAMES]}`, m.preset);
     if (m.mode === "track-for-wheel") squareDesignUrl = page.url();
 
     // The preset's readouts are the engine's.
@@ -315,11 +315,15 @@ describe("the studio, as the fabricator", () => {
     // Back to a good place; then a drag into the refused region in one move is refused too.
     await axleY.fill(String(tidy(a1.y - 20)));
     await axleY.blur();
+    // Wait until the canvas shows that design again (a slow machine may still be drawing the last
+    // one), and drag by this view's own scale.
+    await expectEngineReadouts(studio, solve((await studio.workingSpec())!), ["period", "depth", "wheel r"]);
     await studio.axleHandle().waitFor();
+    const { pixelsPerUnit: s2 } = (await studio.probe())!;
     const [gx, gy] = await studio.axleHandleCentre();
     await page.mouse.move(gx, gy);
     await page.mouse.down();
-    await page.mouse.move(gx, gy + 40 * s);
+    await page.mouse.move(gx, gy + 40 * s2);
     await page.mouse.up();
     await studio.axleRefusal().waitFor();
     expect(await studio.axleRefusal().innerText()).toMatch(/not star-shaped about the axle/);
