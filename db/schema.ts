@@ -63,6 +63,14 @@ export const projects = mysqlTable("projects", {
   clientOrganisationId: int("client_organisation_id").references(() => organisations.id),
   site: varchar("site", { length: 200 }).notNull().default(""),
   status: mysqlEnum("status", PROJECT_STATUSES).notNull().default("design"),
+  // The site and the stock a new cut plan starts from (null: not set yet; the cut-plan page then uses
+  // its own defaults). Library rows are retired rather than deleted, so these keys stay valid.
+  /** The run on site, mm. */
+  siteRunLengthMm: double("site_run_length_mm"),
+  /** Parallel track lines, e.g. 2 for a trike's two rear wheels. */
+  trackLines: int("track_lines"),
+  stockSheetId: int("stock_sheet_id").references(() => stockSheets.id),
+  machineId: int("machine_id").references(() => machines.id),
   createdById: int("created_by_id").references(() => users.id),
   createdAt: timestamp("created_at").notNull().defaultNow(),
   updatedAt: timestamp("updated_at").notNull().defaultNow().onUpdateNow(),

@@ -2,9 +2,20 @@ import "server-only";
 import { and, desc, eq, inArray } from "drizzle-orm";
 import { alias } from "drizzle-orm/mysql-core";
 import { db } from "@/db";
-import { organisations, projectMembers, projects, users, type ProjectStatus } from "@/db/schema";
+import {
+  machines,
+  materials,
+  organisations,
+  projectMembers,
+  projects,
+  stockSheets,
+  users,
+  type ProjectStatus,
+} from "@/db/schema";
+import type { ProjectSiteInput } from "@/lib/validation/projects";
 import { audit } from "./audit";
 import type { CurrentUser } from "./current-user";
+import { Refusal } from "./refusal";
 import { STATUS_LABEL } from "@/lib/project-status";
 import { writeLogEntry } from "./build-log";
 import { clientOrganisationId } from "./organisations";
@@ -113,6 +124,100 @@ export async function updateProject(
         text: `Status changed from ${STATUS_LABEL[before.status]} to ${STATUS_LABEL[input.status]}.`,
         detail: { from: before.status, to: input.status },
       });
+  });
+}
+
+/** What a project records of its site and stock; a library row comes with its name and whether it is still in use. */
+export interface ProjectSite {
+  runLengthMm: number | null;
+  trackLines: number | null;
+  stockSheet: { id: number; name: string; active: boolean } | null;
+  machine: { id: number; name: string; active: boolean } | null;
+}
+
+export async function getProjectSite(projectId: number): Promise<ProjectSite | null> {
+  const [row] = await db
+    .select({
+      runLengthMm: projects.siteRunLengthMm,
+      trackLines: projects.trackLines,
+      sheetId: stockSheets.id,
+      sheetName: stockSheets.name,
+      sheetActive: stockSheets.active,
+      materialActive: materials.active,
+      machineId: machines.id,
+      machineName: machines.name,
+      machineActive: machines.active,
+    })
+    .from(projects)
+    .leftJoin(stockSheets, eq(stockSheets.id, projects.stockSheetId))
+    .leftJoin(materials, eq(materials.id, stockSheets.materialId))
+    .leftJoin(machines, eq(machines.id, projects.machineId))
+    .where(eq(projects.id, projectId))
+    .limit(1);
+  if (!row) return null;
+  return {
+    runLengthMm: row.runLengthMm,
+    trackLines: row.trackLines,
+    stockSheet:
+      row.sheetId !== null
+        ? // A sheet is usable while it and its material are both in the library.
+          { id: row.sheetId, name: row.sheetName ?? "", active: Boolean(row.sheetActive && row.materialActive) }
+        : null,
+    machine:
+      row.machineId !== null
+        ? { id: row.machineId, name: row.machineName ?? "", active: Boolean(row.machineActive) }
+        : null,
+  };
+}
+
+/**
+ * Sets the project's site and stock (null: not set). A sheet or machine must be a row the shop
+ * library still offers (a sheet's material too); the check, the change and its audit entry are one
+ * transaction, so a row retired meanwhile cannot slip in.
+ */
+export async function setProjectSite(actor: CurrentUser, projectId: number, input: ProjectSiteInput): Promise<void> {
+  await db.transaction(async (tx) => {
+    if (input.stockSheetId !== null) {
+      const [sheet] = await tx
+        .select({ id: stockSheets.id })
+        .from(stockSheets)
+        .innerJoin(materials, eq(materials.id, stockSheets.materialId))
+        .where(and(eq(stockSheets.id, input.stockSheetId), eq(stockSheets.active, true), eq(materials.active, true)))
+        .limit(1);
+      if (!sheet)
+        throw new Refusal("bad_request", "Some fields need attention.", {
+          stockSheetId: ["That sheet is not in the shop library now: choose one from the list."],
+        });
+    }
+    if (input.machineId !== null) {
+      const [machine] = await tx
+        .select({ id: machines.id })
+        .from(machines)
+        .where(and(eq(machines.id, input.machineId), eq(machines.active, true)))
+        .limit(1);
+      if (!machine)
+        throw new Refusal("bad_request", "Some fields need attention.", {
+          machineId: ["That machine is not in the shop library now: choose one from the list."],
+        });
+    }
+    const [res] = await tx
+      .update(projects)
+      .set({
+        siteRunLengthMm: input.siteRunLengthMm,
+        trackLines: input.trackLines,
+        stockSheetId: input.stockSheetId,
+        machineId: input.machineId,
+      })
+      .where(eq(projects.id, projectId));
+    if (res.affectedRows === 0) throw new Refusal("not_found", "No such project.");
+    await audit(tx, {
+      actorId: actor.id,
+      action: "update",
+      entity: "projects",
+      entityId: projectId,
+      projectId,
+      detail: { site: input },
+    });
   });
 }
 

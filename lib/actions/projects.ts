@@ -4,11 +4,11 @@
 import { revalidatePath } from "next/cache";
 import { redirect } from "next/navigation";
 import { addMember, removeMember } from "@/db/queries/members";
-import { createProject, updateProject } from "@/db/queries/projects";
+import { createProject, setProjectSite, updateProject } from "@/db/queries/projects";
 import { formAction } from "@/lib/server/action";
 import { requireProjectAccess, requireRole } from "@/lib/server/dal";
 import { idParam } from "@/lib/server/route";
-import { newMemberSchema, newProjectSchema, projectUpdateSchema } from "@/lib/validation/projects";
+import { newMemberSchema, newProjectSchema, projectSiteSchema, projectUpdateSchema } from "@/lib/validation/projects";
 import { z } from "zod";
 
 const projectOf = (raw: Record<string, FormDataEntryValue>, need: "view" | "manage") =>
@@ -38,6 +38,20 @@ const updateProjectForm = formAction(
 );
 export async function updateProjectAction(...args: Parameters<typeof updateProjectForm>) {
   return updateProjectForm(...args);
+}
+
+// The site and stock a new cut plan starts from: an admin or the project's fabricator.
+const projectSiteForm = formAction(
+  projectSiteSchema,
+  (raw) => projectOf(raw, "manage"),
+  async (input, access) => {
+    await setProjectSite(access.user, access.projectId, input);
+    revalidatePath(`/projects/${access.projectId}`);
+    return "Site and stock saved.";
+  },
+);
+export async function setProjectSiteAction(...args: Parameters<typeof projectSiteForm>) {
+  return projectSiteForm(...args);
 }
 
 const addMemberForm = formAction(

@@ -78,6 +78,67 @@ export function formFromSettings(
   };
 }
 
+/** The shop library's rows as the starting choice needs them. */
+interface StartLibrary {
+  materials: { id: number; name: string }[];
+  sheets: { id: number; materialId: number; lengthMm: number; widthMm: number }[];
+  machines: { id: number; kind: string }[];
+}
+
+/** What the project records of its site and stock (null: not set). */
+export interface ProjectStart {
+  runLengthMm: number | null;
+  trackLines: number | null;
+  stockSheetId: number | null;
+  machineId: number | null;
+}
+
+/**
+ * Where a revision's first cut plan starts: the settings and the library rows before anyone edits
+ * them. The project's figures win wherever it has them (and its sheet and machine are still in the
+ * library); then the run the client's review showed (its end treatment, and its length when the
+ * project records none: a sign-off is of the spec, not of the mock-up's run, so the site's own
+ * measure comes first); then the settings' defaults.
+ *
+ * Without a sheet from the project, the largest plywood sheet, and only failing any plywood the
+ * largest sheet of all. The largest of everything is mild steel (2500 × 1250), which the default
+ * machine (a router) cannot cut and which most of this trade's work (plywood tracks and wheels, the
+ * demo's 18 mm birch) never uses, so a new plan would start wrong for nearly everyone.
+ */
+export function startingChoice(
+  library: StartLibrary,
+  project: ProjectStart | null,
+  reviewed: Pick<Partial<CutSettings>, "runLength" | "endTreatment"> = {},
+): { settings: Partial<CutSettings>; ids: { materialId: number; stockSheetId: number; machineId: number } } {
+  // A sheet is offered only with its material (a retired material hides its sheets).
+  const usable = library.sheets.filter((s) => library.materials.some((m) => m.id === s.materialId));
+  const plywood = usable.filter((s) =>
+    /plywood/i.test(library.materials.find((m) => m.id === s.materialId)?.name ?? ""),
+  );
+  const largest = (rows: typeof usable) =>
+    rows.reduce<(typeof usable)[number] | undefined>(
+      (best, s) => (!best || s.lengthMm * s.widthMm > best.lengthMm * best.widthMm ? s : best),
+      undefined,
+    );
+  const sheet = usable.find((s) => s.id === project?.stockSheetId) ?? largest(plywood.length ? plywood : usable);
+  const machine =
+    library.machines.find((m) => m.id === project?.machineId) ??
+    library.machines.find((m) => m.kind === "router") ??
+    library.machines[0];
+
+  const settings: Partial<CutSettings> = { ...reviewed };
+  if (project?.runLengthMm != null) settings.runLength = project.runLengthMm;
+  if (project?.trackLines != null) settings.trackLines = project.trackLines;
+  return {
+    settings,
+    ids: {
+      materialId: sheet?.materialId ?? library.materials[0]?.id ?? 0,
+      stockSheetId: sheet?.id ?? 0,
+      machineId: machine?.id ?? 0,
+    },
+  };
+}
+
 /** A number as typed; blank or junk is NaN, which the schema refuses with the field's message. */
 export function typedNumber(text: string): number {
   const t = text.trim().replace(",", ".");

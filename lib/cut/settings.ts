@@ -4,6 +4,7 @@
 // a router's kerf is its cutter diameter (6 mm), edge margin 10 mm for a router; the rest
 // (base depth, joint sizes, support spacing) are starting values the user is expected to edit.
 import { z } from "zod";
+import { RUN_LENGTH_MAX_MM, RUN_LENGTH_MIN_MM, TRACK_LINES_MAX } from "@/lib/validation/limits";
 import { CutError } from "./errors";
 
 function length(what: string, min: number, max: number, def: number, opts: { zero?: boolean } = {}) {
@@ -117,12 +118,12 @@ export const cutSettingsSchema = z
         .default(""),
       /** Largest cap height of engraved label text. */
       labelHeight: length("The label height", 2, 50, 10),
-      runLength: length("The run length", 10, 100000, 2400),
+      runLength: length("The run length", RUN_LENGTH_MIN_MM, RUN_LENGTH_MAX_MM, 2400),
       endTreatment: choice("The end treatment", ["flat", "half", "scale"] as const, "flat"),
       /** Solid track below the profile's lowest point. */
       baseDepth: length("The base depth", 10, 2000, 80),
       /** Parallel tracks, e.g. 2 for a trike's two rear wheels. */
-      trackLines: count("The number of track lines", 1, 16, 2),
+      trackLines: count("The number of track lines", 1, TRACK_LINES_MAX, 2),
       /** Laminations glued face to face per track. */
       layers: count("The number of layers", 1, 10, 1),
       /** Stations along the run (mm from its start) where segments split. Default: at crests, as long as the sheet allows. */

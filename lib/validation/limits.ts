@@ -7,6 +7,15 @@ export const PASSWORD_MIN_LENGTH = 10;
 /** Poisson's ratio when none is given: 0.3, the usual figure for wood and metals (common practice; the column's default too). */
 export const DEFAULT_POISSON = 0.3;
 
+// A project's site figures and a cut plan's run (the project page's "Site and stock", lib/cut/settings.ts):
+// the same bounds for both, so the figures a project records always start a cut plan the settings accept.
+
+/** The run on site, mm: from 10 mm to 100 m (a gallery table to a long hall). */
+export const RUN_LENGTH_MIN_MM = 10;
+export const RUN_LENGTH_MAX_MM = 100_000;
+/** Parallel track lines of one run (a trike has 2). */
+export const TRACK_LINES_MAX = 16;
+
 // Request bodies, in bytes, counted as they arrive and refused (413) before anything is parsed.
 
 /** Any JSON body without a limit of its own. */

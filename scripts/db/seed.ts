@@ -2,7 +2,7 @@
 // demo scenario (db/demo-data.json: people, projects, and one design per project with a first
 // revision solved by the engine). Idempotent: each row is looked up by its natural key first, so a
 // re-run keeps what is there (including changed passwords and edited library rows) and adds nothing twice.
-import { and, eq } from "drizzle-orm";
+import { and, eq, isNull, sql } from "drizzle-orm";
 import { drizzle } from "drizzle-orm/mysql2";
 import mysql from "mysql2/promise";
 import demo from "../../db/demo-data.json";
@@ -23,6 +23,7 @@ function demoLoads(d: { loads?: unknown }): Record<string, unknown> | null {
 }
 
 const {
+  auditLog,
   organisations,
   users,
   projects,
@@ -43,6 +44,56 @@ let added = 0;
 
 async function idOf<T extends { id: number }>(rows: Promise<T[]>): Promise<number | undefined> {
   return (await rows)[0]?.id;
+}
+
+/** A demo project's site and stock, its library rows named by their natural key (db/shop-library.json). */
+interface DemoSite {
+  runLength: number;
+  trackLines: number;
+  sheet: string;
+  machine: string;
+}
+
+async function siteValues(s: DemoSite) {
+  const stockSheetId = await idOf(
+    db.select({ id: stockSheets.id }).from(stockSheets).where(eq(stockSheets.name, s.sheet)),
+  );
+  const machineId = await idOf(db.select({ id: machines.id }).from(machines).where(eq(machines.name, s.machine)));
+  if (stockSheetId === undefined) throw new Error(`demo data: no stock sheet named "${s.sheet}" in the shop library`);
+  if (machineId === undefined) throw new Error(`demo data: no machine named "${s.machine}" in the shop library`);
+  return { siteRunLengthMm: s.runLength, trackLines: s.trackLines, stockSheetId, machineId };
+}
+
+/**
+ * A demo project made before projects recorded their site (drizzle/0008_project_site.sql) gets the
+ * figures once: only while all four are unset and nobody has ever saved them (no audit entry), so a
+ * person's own figures, or their clearing them, survive every re-run.
+ */
+async function fillSiteOnce(projectId: number, values: Awaited<ReturnType<typeof siteValues>>) {
+  const [saved] = await db
+    .select({ id: auditLog.id })
+    .from(auditLog)
+    .where(
+      and(
+        eq(auditLog.entity, "projects"),
+        eq(auditLog.entityId, String(projectId)),
+        sql`json_contains_path(${auditLog.detail}, 'one', '$.site')`,
+      ),
+    )
+    .limit(1);
+  if (saved) return;
+  await db
+    .update(projects)
+    .set(values)
+    .where(
+      and(
+        eq(projects.id, projectId),
+        isNull(projects.siteRunLengthMm),
+        isNull(projects.trackLines),
+        isNull(projects.stockSheetId),
+        isNull(projects.machineId),
+      ),
+    );
 }
 
 interface DemoReview {
@@ -199,6 +250,7 @@ try {
   const adminId = userIds.get("admin@example.test");
   const fabricatorId = userIds.get("fabricator@example.test");
   for (const p of demo.projects) {
+    const site = "siteAndStock" in p && p.siteAndStock ? await siteValues(p.siteAndStock as DemoSite) : null;
     let id = await idOf(db.select({ id: projects.id }).from(projects).where(eq(projects.name, p.name)));
     if (id === undefined) {
       const [res] = await db.insert(projects).values({
@@ -207,10 +259,11 @@ try {
         status: p.status as schema.ProjectStatus,
         clientOrganisationId: orgIds.get(p.client),
         createdById: adminId,
+        ...site,
       });
       id = res.insertId;
       added++;
-    }
+    } else if (site) await fillSiteOnce(id, site);
     for (const m of p.members) {
       const userId = userIds.get(m.email)!;
       const existing = await idOf(

@@ -6,7 +6,13 @@ import * as projectRoute from "@/app/api/projects/[id]/route";
 import * as membersRoute from "@/app/api/projects/[id]/members/route";
 import * as memberRoute from "@/app/api/projects/[id]/members/[memberId]/route";
 import * as solveRoute from "@/app/api/solve/route";
-import { addMemberAction, createProjectAction, removeMemberAction, updateProjectAction } from "@/lib/actions/projects";
+import {
+  addMemberAction,
+  createProjectAction,
+  removeMemberAction,
+  setProjectSiteAction,
+  updateProjectAction,
+} from "@/lib/actions/projects";
 import { changeRoleAction, createUserAction, setActiveAction } from "@/lib/actions/users";
 import {
   saveMachineAction,
@@ -210,6 +216,17 @@ const CASES: Case[] = [
     name: "action updateProject",
     expect: projectManage(200),
     call: () => actionStatus(() => updateProjectAction({}, form({ projectId, site: `Bench ${++seq}` }))),
+  },
+  {
+    name: "action setProjectSite",
+    expect: projectManage(200),
+    call: () =>
+      actionStatus(() =>
+        setProjectSiteAction(
+          {},
+          form({ projectId, siteRunLengthMm: 1000 + ++seq, trackLines: 2, stockSheetId: "", machineId: "" }),
+        ),
+      ),
   },
   {
     name: "action addMember",

@@ -4,6 +4,7 @@ import { notFound } from "next/navigation";
 import { formatWhen, STATUS_LABEL } from "@/components/format";
 import { MODE_LABELS } from "@/components/studio/spec-form/defaults";
 import { AddMemberForm, RemoveMemberButton } from "@/components/member-forms";
+import { ProjectSiteFacts, ProjectSiteForm } from "@/components/project-site-form";
 import { Badge, Panel } from "@/components/ui/panel";
 import { Table } from "@/components/ui/table";
 import { ReviewList } from "@/components/review/review-list";
@@ -16,7 +17,8 @@ import { listDesigns, listProjectRevisions } from "@/db/queries/designs";
 import { clientMembers, listProjectReviews, projectDeposit } from "@/db/queries/reviews";
 import { reviewStatus, showsRun } from "@/lib/review/review-state";
 import { listMembers } from "@/db/queries/members";
-import { getProjectSummary } from "@/db/queries/projects";
+import { getProjectSite, getProjectSummary } from "@/db/queries/projects";
+import { listShopLibrary } from "@/db/queries/shop";
 import { listAssignableUsers } from "@/db/queries/users";
 import { requirePageUser, requireProjectAccess } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
@@ -76,8 +78,9 @@ export default async function ProjectPage({
     if (e instanceof AppError && e.kind === "not_found") notFound();
     throw e;
   });
-  const [project, members, designs, reviews, deposit, log, plans] = await Promise.all([
+  const [project, site, members, designs, reviews, deposit, log, plans] = await Promise.all([
     getProjectSummary(access.projectId),
+    getProjectSite(access.projectId),
     listMembers(access.projectId),
     listDesigns(access.projectId),
     listProjectReviews(access.projectId),
@@ -85,12 +88,14 @@ export default async function ProjectPage({
     listLog(access.projectId, { limit: 5 }),
     listProjectCutPlans(access.projectId),
   ]);
-  if (!project) notFound();
+  if (!project || !site) notFound();
   const [toSend, clients] = access.canManage
     ? await Promise.all([sendable(access.projectId, reviews), clientMembers(access.projectId)])
     : [[], []];
   const memberIds = new Set(members.map((m) => m.userId));
   const people = access.canManage ? (await listAssignableUsers()).filter((u) => !memberIds.has(u.id)) : [];
+  // The form offers what the shop library offers now (a sheet whose material is retired is not offered).
+  const library = access.canManage ? await listShopLibrary({ activeOnly: true }) : null;
 
   return (
     <>
@@ -134,6 +139,21 @@ export default async function ProjectPage({
             <AddMemberForm projectId={access.projectId} people={people} />
           </div>
         ) : null}
+      </Panel>
+
+      <Panel title="Site and stock">
+        {library ? (
+          <ProjectSiteForm
+            projectId={access.projectId}
+            site={site}
+            sheets={library.stockSheets
+              .filter((s) => library.materials.some((m) => m.id === s.materialId))
+              .map((s) => ({ id: s.id, name: s.name }))}
+            machines={library.machines.map((m) => ({ id: m.id, name: m.name }))}
+          />
+        ) : (
+          <ProjectSiteFacts site={site} />
+        )}
       </Panel>
 
       <Panel

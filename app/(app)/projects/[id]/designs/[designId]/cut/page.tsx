@@ -9,7 +9,7 @@ import { latestCutPlan } from "@/db/queries/cut-plans";
 import { findRevision, listRevisions } from "@/db/queries/designs";
 import { approvalStamp, listRevisionReviews } from "@/db/queries/reviews";
 import { approvalLine } from "@/lib/review/reference";
-import { getProjectSummary } from "@/db/queries/projects";
+import { getProjectSite, getProjectSummary } from "@/db/queries/projects";
 import { listShopLibrary } from "@/db/queries/shop";
 import { CautionList } from "@/components/review/caution-list";
 import { Panel } from "@/components/ui/panel";
@@ -19,26 +19,12 @@ import { loadsForRevision } from "@/lib/server/loads";
 import { solve } from "@/lib/track";
 import type { CutSettings } from "@/lib/cut/settings";
 import type { PlanChoice } from "@/lib/cut-plan/compose";
-import { formFromSettings } from "@/lib/cut-plan/form";
+import { formFromSettings, startingChoice } from "@/lib/cut-plan/form";
 import { jobForPlan, type CutPlanSummary } from "@/lib/server/cut-plans";
 import { requireDesignAccess, requirePageUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
 
 export const metadata: Metadata = { title: "Cut plan" };
-
-/** Choices for a revision with no plan yet: the first sheet in the library, its material, the first router. */
-function firstIds(library: Awaited<ReturnType<typeof listShopLibrary>>) {
-  // The largest sheet, as a shop would first reach for.
-  const sheet = [...library.stockSheets]
-    .sort((a, b) => b.lengthMm * b.widthMm - a.lengthMm * a.widthMm)
-    .find((s) => library.materials.some((m) => m.id === s.materialId));
-  const machine = library.machines.find((m) => m.kind === "router") ?? library.machines[0];
-  return {
-    materialId: sheet?.materialId ?? library.materials[0]?.id ?? 0,
-    stockSheetId: sheet?.id ?? 0,
-    machineId: machine?.id ?? 0,
-  };
-}
 
 export default async function CutPlanPage({
   params,
@@ -82,26 +68,37 @@ export default async function CutPlanPage({
   if (!found) notFound();
   const revision = found.revision;
 
-  const [library, plan, project, approval, reviews] = await Promise.all([
+  const [library, plan, project, site, approval, reviews] = await Promise.all([
     listShopLibrary({ activeOnly: true }),
     latestCutPlan(revision.id),
     getProjectSummary(access.projectId),
+    getProjectSite(access.projectId),
     approvalStamp(revision),
     listRevisionReviews(revision.id),
   ]);
-  // With no plan yet, start from the run the client reviewed.
-  const reviewed = reviews.find((r) => r.runLengthMm !== null);
-  const reviewedRun: Partial<CutSettings> = reviewed
-    ? { runLength: reviewed.runLengthMm!, endTreatment: reviewed.endTreatment ?? "flat" }
-    : {};
   const storedChoice = plan?.settings as (PlanChoice & { composed?: CutSettings }) | undefined;
-  const ids = storedChoice
+  // A saved plan reopens as it was saved. With no plan yet, start from the project's site and stock,
+  // then the run the client reviewed, then the defaults (lib/cut-plan/form.ts startingChoice).
+  const reviewed = reviews.find((r) => r.runLengthMm !== null);
+  const start = storedChoice
     ? {
-        materialId: storedChoice.materialId,
-        stockSheetId: storedChoice.stockSheetId,
-        machineId: storedChoice.machineId,
+        settings: storedChoice.settings as Partial<CutSettings>,
+        ids: {
+          materialId: storedChoice.materialId,
+          stockSheetId: storedChoice.stockSheetId,
+          machineId: storedChoice.machineId,
+        },
       }
-    : firstIds(library);
+    : startingChoice(
+        { materials: library.materials, sheets: library.stockSheets, machines: library.machines },
+        site && {
+          runLengthMm: site.runLengthMm,
+          trackLines: site.trackLines,
+          stockSheetId: site.stockSheet?.id ?? null,
+          machineId: site.machine?.id ?? null,
+        },
+        reviewed ? { runLength: reviewed.runLengthMm!, endTreatment: reviewed.endTreatment ?? "flat" } : {},
+      );
   let saved: SavedPlanView | null = null;
   // The load-path cautions as the files will state them: the saved plan's board and spans, else the revision's settings.
   let loads = plan ? null : await loadsForRevision(revision, solve(revision.spec));
@@ -197,7 +194,7 @@ export default async function CutPlanPage({
               minInsideRadiusMm: k.minInsideRadiusMm,
             })),
           }}
-          initialForm={formFromSettings((storedChoice?.settings ?? reviewedRun) as Partial<CutSettings>, ids)}
+          initialForm={formFromSettings(start.settings, start.ids)}
           saved={saved}
           approved={approval !== null}
         />
