@@ -60,3 +60,21 @@ export function nestFigures(nest: { nest: SheetNestResult; preview: PartsPreview
   );
   return { sheetArea, usedSheets, overall };
 }
+
+/** How the search ended, in the shop's words. */
+export function nestEnding(nest: SheetNestResult): string {
+  const bound = nest.areaBound;
+  switch (nest.ended) {
+    case "proved-best":
+      return `the best possible: the parts' area needs at least ${bound} sheet(s)`;
+    case "cancelled":
+      return "stopped early: the best layout found so far";
+    case "time":
+    case "iterations":
+      return bound
+        ? `the search time ran out; the parts' area needs at least ${bound} sheet(s)`
+        : "the search time ran out";
+    default:
+      return nest.cancelled ? "stopped early: the best layout found so far" : "";
+  }
+}

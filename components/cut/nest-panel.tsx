@@ -8,7 +8,7 @@ import { Panel } from "@/components/ui/panel";
 import { failureOf } from "@/components/api/request-json";
 import { cutPlanName } from "@/lib/cut-plan/name";
 import type { PartsPreview } from "./cut-worker";
-import { nestFigures, pct, sheetParts, usedShare } from "./nest-figures";
+import { nestEnding, nestFigures, pct, sheetParts, usedShare } from "./nest-figures";
 import { SaveButtons } from "./save-buttons";
 import { SheetView } from "./sheet-view";
 import type { NestState } from "./use-cut-worker";
@@ -127,8 +127,8 @@ function NestResult({
   return (
     <div className="mt-3 flex flex-col gap-3" data-testid="nest-result">
       <p className="text-sm" data-testid="nest-summary">
-        {usedSheets.length} sheet(s), {pct(overall)} of the stock used overall
-        {nest.nest.cancelled ? " (stopped early: the best layout found so far)" : ""}; {nest.nest.seconds.toFixed(1)} s.
+        {usedSheets.length} sheet(s), {pct(overall)} of the stock used overall ({nestEnding(nest.nest)});{" "}
+        {nest.nest.seconds.toFixed(1)} s.
       </p>
       {stale ? (
         <Notice tone="problem">The settings have changed since this nest: nest again before saving it.</Notice>

@@ -9,7 +9,6 @@ import { CutError } from "./errors";
 import { checkPartsFit } from "./fit";
 import { trackSurfaceWarnings } from "./inside-corners";
 import { kerfParts, type ToolPath } from "./kerf";
-import { nestOutline } from "./nest-outline";
 import type { GlyphTable } from "./labels/font";
 import { allowedRotations } from "./rotations";
 import { buildRun, hasTrack, type RunInfo } from "./run-length";
@@ -81,8 +80,8 @@ export function buildCutParts(
 /**
  * What the nester packs: each part's tool-centre outline (the nominal outline grown by half the
  * kerf, so parts spaced `spacing` apart keep that much stock between their cuts) and the rotations
- * its grain allows, coarsened to a containing outline of few vertices (nest-outline.ts). Pass the
- * tool paths if they are already computed.
+ * its grain allows. The nester itself packs containing outlines of fewer vertices
+ * (lib/nest/containing-outline.ts). Pass the tool paths if they are already computed.
  */
 export async function nestItemsFor(
   parts: Part[],
@@ -94,7 +93,7 @@ export async function nestItemsFor(
   for (const p of parts)
     items.push({
       id: p.id,
-      polygon: await nestOutline(paths.get(p.id)!.outer),
+      polygon: paths.get(p.id)!.outer,
       quantity: p.quantity,
       rotations: allowedRotations(p, settings),
     });

@@ -9,9 +9,11 @@ const REPORT_EVERY_MS = 200;
 const now = () => (typeof performance !== "undefined" ? performance.now() : Date.now());
 
 export class Budget {
-  private readonly t0 = now();
+  private t0 = now();
   private lastYield = this.t0;
   private lastReport = -Infinity;
+  /** The whole run's length, for progress, when this budget is one phase of it (see `phase`). */
+  private total: number;
   iterations = 0;
 
   constructor(
@@ -19,18 +21,36 @@ export class Budget {
     private readonly signal?: AbortSignal,
     private readonly maxIterations?: number,
     private readonly onProgress?: (p: NestProgress) => void,
-  ) {}
+  ) {
+    this.total = seconds;
+  }
+
+  /**
+   * A phase of this run that must end `seconds` after the run began (the same clock, cancel and
+   * progress; its own iteration count).
+   */
+  phase(seconds: number): Budget {
+    const b = new Budget(Math.min(seconds, this.seconds), this.signal, this.maxIterations, this.onProgress);
+    b.t0 = this.t0;
+    b.lastYield = this.lastYield;
+    b.total = this.seconds;
+    return b;
+  }
 
   elapsed(): number {
     return (now() - this.t0) / 1000;
   }
 
   fraction(): number {
-    return this.seconds > 0 ? Math.min(1, this.elapsed() / this.seconds) : 1;
+    return this.total > 0 ? Math.min(1, this.elapsed() / this.total) : 1;
   }
 
   get aborted(): boolean {
     return this.signal?.aborted ?? false;
+  }
+
+  get outOfIterations(): boolean {
+    return this.maxIterations !== undefined && this.iterations >= this.maxIterations;
   }
 
   /** True when the search must stop: cancelled, out of time or out of iterations. */

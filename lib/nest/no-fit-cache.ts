@@ -32,6 +32,8 @@ export class NoFitCache {
   private readonly table: (Nfp | undefined)[];
   private readonly n: number;
   computed = 0;
+  /** Time spent computing no-fit polygons, seconds. */
+  seconds = 0;
 
   constructor(
     private readonly lib: ClipperLib,
@@ -46,11 +48,13 @@ export class NoFitCache {
     const k = fixed * this.n + moving;
     let nfp = this.table[k];
     if (!nfp) {
+      const t0 = typeof performance !== "undefined" ? performance.now() : Date.now();
       const paths = noFitPolygon(this.lib, this.set.shapes[fixed].stationary, this.set.shapes[moving].orbiting);
       const box = paths.map((p) => boundsOfXY(p)).reduce((a, b) => union(a, b));
       nfp = { paths, box, edges: edgeList(paths) };
       this.table[k] = nfp;
       this.computed++;
+      this.seconds += ((typeof performance !== "undefined" ? performance.now() : Date.now()) - t0) / 1000;
     }
     return nfp;
   }

@@ -1,6 +1,7 @@
 // Collision shapes: each allowed rotation of each item as an integer Clipper polygon, inflated by
 // half the part spacing (Clipper offset with mitred joins), so that two shapes that touch leave
-// their parts `spacing` apart.
+// their parts `spacing` apart, and replaced by a containing outline of fewer vertices
+// (containing-outline.ts) whose extra area is measured and bounded.
 //
 // Exact fits: two integer polygons that fit exactly leave a feasible region of zero area, which
 // Clipper drops. The stationary copy of each shape (the one the no-fit polygons are built around)
@@ -11,7 +12,9 @@ import type { ClipperLib } from "@/lib/geometry/clipper";
 import { clipper, toPath } from "@/lib/geometry/clipper";
 import { rotateRing } from "@/lib/geometry/place";
 import { ringArea } from "@/lib/geometry/ring";
-import type { NestItem } from "./types";
+import { containingOutline } from "./containing-outline";
+import { offsetPolygon } from "./offset";
+import type { NestItem, OutlineReport } from "./types";
 
 export const EXACT_FIT_STEPS = 1;
 
@@ -34,39 +37,51 @@ export interface ShapeSet {
   shapeOf: number[][];
   /** Area of each item as given (not inflated), in the input's units². */
   itemArea: number[];
+  /** Each item's outline as packed (its first allowed rotation). */
+  outlines: OutlineReport[];
 }
 
-/** Offset of a simple polygon; keeps the outer ring of largest area (a hole closed up is filled). */
-export function offsetPolygon(lib: ClipperLib, path: clipper.Path, delta: number): clipper.Path {
-  if (delta === 0) return path;
-  const out = lib.offsetToPaths({
-    delta,
-    offsetInputs: [{ data: path, joinType: clipper.JoinType.Miter, endType: clipper.EndType.ClosedPolygon }],
-    miterLimit: 2,
-  });
-  let best: clipper.Path | undefined;
-  let bestArea = 0;
-  for (const p of out ?? []) {
-    const a = lib.area(p);
-    if (a > bestArea) [best, bestArea] = [p, a];
-  }
-  if (!best) throw new Error("offsetPolygon: the offset removed the whole polygon");
-  return best;
+/** How far an outline may be coarsened: extra area as a share of the part's, and a vertex cap. */
+export interface OutlinePolicy {
+  maxExtraShare: number;
+  maxVertices?: number;
 }
 
-export function buildShapes(lib: ClipperLib, items: readonly NestItem[], scale: number, spacing: number): ShapeSet {
+/** The fine outlines: at most 0.5 % of each part's area added (issue 13's bound). */
+export const FINE_OUTLINES: OutlinePolicy = { maxExtraShare: 0.005 };
+
+export function buildShapes(
+  lib: ClipperLib,
+  items: readonly NestItem[],
+  scale: number,
+  spacing: number,
+  policy: OutlinePolicy = FINE_OUTLINES,
+): ShapeSet {
   const half = Math.round((spacing / 2) * scale);
   const shapes: Shape[] = [];
+  const itemArea = items.map((it) => ringArea(it.polygon));
+  const outlines: OutlineReport[] = [];
   const shapeOf = items.map((item, i) =>
-    item.rotations.map((rotation) => {
+    item.rotations.map((rotation, k) => {
       const exact = toPath(rotateRing(item.polygon, rotation), scale);
       if (lib.area(exact) < 0) exact.reverse();
-      const orbiting = offsetPolygon(lib, exact, half);
+      const inflated = offsetPolygon(lib, exact, half);
+      const maxExtra = policy.maxExtraShare * itemArea[i] * scale * scale;
+      const outline = containingOutline(lib, inflated, { maxExtra, maxVertices: policy.maxVertices });
+      const orbiting = outline.path;
       // Clipper's mitred offset leaves edges one step long at the corners; they only breed slivers.
-      const stationary = lib.cleanPolygon(offsetPolygon(lib, exact, half - EXACT_FIT_STEPS), 1.5);
+      const stationary = lib.cleanPolygon(offsetPolygon(lib, orbiting, -EXACT_FIT_STEPS), 1.5);
+      if (k === 0)
+        outlines.push({
+          id: item.id,
+          vertices: item.polygon.length,
+          outlineVertices: orbiting.length,
+          extraArea: outline.extra / (scale * scale),
+          extraShare: itemArea[i] > 0 ? outline.extra / (scale * scale) / itemArea[i] : 0,
+        });
       shapes.push({ item: i, rotation, stationary, orbiting, box: boundsOfXY(orbiting) });
       return shapes.length - 1;
     }),
   );
-  return { scale, shapes, shapeOf, itemArea: items.map((it) => ringArea(it.polygon)) };
+  return { scale, shapes, shapeOf, itemArea, outlines };
 }

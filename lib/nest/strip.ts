@@ -20,7 +20,7 @@ import { bounds, boxHeight, boxWidth } from "@/lib/geometry/box";
 import { rotateRing } from "@/lib/geometry/place";
 import { normaliseRing, ringArea } from "@/lib/geometry/ring";
 import { scaleForExtent } from "./scale";
-import { buildShapes } from "./shapes";
+import { shapesWithinBudget } from "./outline-levels";
 import type { Placement, StripNestInput, StripNestResult } from "./types";
 
 /** Tuning of the search; the defaults are what the benchmarks were measured with. */
@@ -83,6 +83,9 @@ export async function nestStrip(
       seconds: budget.elapsed(),
       iterations: 0,
       cancelled: budget.aborted,
+      ended: budget.aborted ? "cancelled" : "time",
+      timings: { firstLayout: 0, noFitPolygons: 0 },
+      outlines: [],
       placements: [],
     };
 
@@ -97,7 +100,7 @@ export async function nestStrip(
   const bound = Math.min(sumWidths, (1.5 * partArea) / height + Math.max(...items.map((_, i) => widthOf(i))));
   for (const length of new Set([bound, Math.min(2 * bound, sumWidths), sumWidths])) {
     const S = scaleForExtent(Math.max(height, length) + spacing);
-    const set = buildShapes(lib, items, S, spacing);
+    const { set } = shapesWithinBudget(lib, items, S, spacing, input.seconds);
     const nfps = new NoFitCache(lib, set);
     const half = Math.round((spacing / 2) * S);
     const containerFor = (len: number) => ({
@@ -110,6 +113,7 @@ export async function nestStrip(
     const order = copies.map((_, i) => i).sort((a, b) => area[copies[b].item] - area[copies[a].item] || a - b);
     const first = await greedyLayout(setup, order, (copy) => usable[copies[copy].item], budget);
     if (first.decoded.unplacedCount > 0) continue;
+    const firstLayout = budget.elapsed();
 
     const right = set.shapes.map((sh) => boxes[sh.item][items[sh.item].rotations.indexOf(sh.rotation)].maxX);
     const lengthOf = (arr: Arrangement) => Math.max(...arr.shape.map((sh, c) => arr.x[c] / S + right[sh]));
@@ -163,6 +167,9 @@ export async function nestStrip(
       seconds: budget.elapsed(),
       iterations: budget.iterations,
       cancelled: budget.aborted,
+      ended: budget.aborted ? "cancelled" : budget.outOfIterations ? "iterations" : "time",
+      timings: { firstLayout, noFitPolygons: nfps.seconds },
+      outlines: set.outlines,
       placements,
     };
     budget.report({ fraction: 1, bestUtilisation: result.utilisation, placed: total, total, message: "done" });

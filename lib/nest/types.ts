@@ -59,6 +59,26 @@ export interface SheetNestInput extends NestControl {
   units?: string;
 }
 
+/** The outline an item was packed as (containing-outline.ts): never smaller than the part. */
+export interface OutlineReport {
+  id: string;
+  /** Vertices of the item's polygon as given, and of the outline packed. */
+  vertices: number;
+  outlineVertices: number;
+  /** Area the outline adds to the part (beyond the spacing), in units², and as a share of the part's area. */
+  extraArea: number;
+  extraShare: number;
+}
+
+/** How a run ended: the best possible reached (sheets = the area bound), the clock, the iteration cap, or a cancel. */
+export type NestEnd = "proved-best" | "time" | "iterations" | "cancelled";
+
+/** Where a run's time went, seconds. */
+export interface NestTimings {
+  firstLayout: number;
+  noFitPolygons: number;
+}
+
 export interface SheetNestResult {
   sheets: Array<{ index: number; utilisation: number; placements: SheetPlacement[] }>;
   /** Overall: part area / (sheets used × sheet area). */
@@ -66,6 +86,13 @@ export interface SheetNestResult {
   unplaced: Array<{ id: string; copy: number; reason: string }>;
   seconds: number;
   cancelled: boolean;
+  // The nester always gives these; a layout made elsewhere (the shelf layout) or saved before they
+  // existed may lack them.
+  ended?: NestEnd;
+  /** The fewest sheets the parts' area allows (a lower bound on any layout). */
+  areaBound?: number;
+  timings?: NestTimings;
+  outlines?: OutlineReport[];
 }
 
 export interface StripNestInput extends NestControl {
@@ -82,6 +109,9 @@ export interface StripNestResult {
   /** Search iterations run: with the seed, this fixes the layout whatever the machine's speed. */
   iterations: number;
   cancelled: boolean;
+  ended: Exclude<NestEnd, "proved-best">;
+  timings: NestTimings;
+  outlines: OutlineReport[];
   placements: Placement[];
 }
 

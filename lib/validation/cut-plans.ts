@@ -32,6 +32,24 @@ export const nestSchema = z.strictObject({
   seconds: z.number().finite().min(0),
   cancelled: z.boolean(),
   utilisation: z.number().finite().optional(),
+  // How the search ended and where its time went: kept with the plan as the nester reported them.
+  ended: z.enum(["proved-best", "time", "iterations", "cancelled"]).optional(),
+  areaBound: z.number().int().min(0).max(500).optional(),
+  timings: z
+    .strictObject({ firstLayout: z.number().finite().min(0), noFitPolygons: z.number().finite().min(0) })
+    .optional(),
+  outlines: z
+    .array(
+      z.strictObject({
+        id: partId,
+        vertices: z.number().int().min(0),
+        outlineVertices: z.number().int().min(0),
+        extraArea: z.number().finite(),
+        extraShare: z.number().finite(),
+      }),
+    )
+    .max(500)
+    .optional(),
 });
 
 export const CUT_PLAN_PURPOSES = ["review", "production"] as const;

@@ -101,14 +101,27 @@ describe("nestOnSheets", () => {
     expect(result.unplaced[0].reason).toMatch(/^P \(copy \d\) found no room on the 1 sheet\(s\) allowed$/);
   });
 
-  it("returns a valid layout promptly when cancelled", async () => {
+  it("stops as soon as it uses as few sheets as the area allows, and says so", async () => {
     const items = [rect("A", 300, 200, 20), rect("B", 450, 120, 20, [0, 180])];
+    const result = await nestOnSheets({ items, sheet, margin: 10, spacing: 5, seconds: 60 });
+    // 20 × 0.06 + 20 × 0.054 m² = 2.28 m² on a 2.42 × 1.20 m usable sheet: one sheet is the bound.
+    expect(result.areaBound).toBe(1);
+    expect(result.sheets).toHaveLength(1);
+    expect(result.ended).toBe("proved-best");
+    expect(result.seconds).toBeLessThan(60);
+    expect(expectValidSheets(items, result, 10, 5)).toBe(40);
+  });
+
+  it("returns a valid layout promptly when cancelled", async () => {
+    // 700 mm squares go three to a sheet, so the area bound (3 sheets) is never reached: only the cancel stops it.
+    const items = [rect("A", 700, 700, 12), rect("B", 450, 120, 20, [0, 180])];
     const controller = new AbortController();
     setTimeout(() => controller.abort(), 300);
     const started = performance.now();
     const result = await nestOnSheets({ items, sheet, margin: 10, spacing: 5, seconds: 60, signal: controller.signal });
     expect(performance.now() - started).toBeLessThan(2000);
     expect(result.cancelled).toBe(true);
-    expect(expectValidSheets(items, result, 10, 5)).toBe(40);
+    expect(result.ended).toBe("cancelled");
+    expect(expectValidSheets(items, result, 10, 5)).toBe(32);
   });
 });
