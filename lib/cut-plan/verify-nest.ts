@@ -6,7 +6,7 @@
 import { clipper, loadClipper, toPath, type ClipperLib } from "@/lib/geometry/clipper";
 import { bounds, type Box } from "@/lib/geometry/box";
 import { placeRing } from "@/lib/geometry/place";
-import type { Ring } from "@/lib/geometry/ring";
+import { orient, type Ring } from "@/lib/geometry/ring";
 import type { NestItem, SheetNestResult } from "@/lib/nest/types";
 
 /** Integer steps per model unit for the check (1 µm when the unit is the millimetre). */
@@ -27,19 +27,32 @@ function sameAngle(a: number, b: number): boolean {
   return d < 1e-6 || 360 - d < 1e-6;
 }
 
-function overlapArea(lib: ClipperLib, a: Ring, b: Ring, grow: number): number {
-  const inflate = (ring: Ring) =>
+interface Placed {
+  outer: Ring;
+  /** Holes through the part, clockwise: another part may sit inside one. */
+  holes: Ring[];
+}
+
+/** The part as Clipper paths, outer counter-clockwise and holes clockwise (NonZero: holes are empty). */
+const pathsOf = (r: Placed) => [
+  toPath(orient(r.outer, true), SCALE),
+  ...r.holes.map((h) => toPath(orient(h, false), SCALE)),
+];
+
+function overlapArea(lib: ClipperLib, a: Placed, b: Placed, grow: number): number {
+  const inflate = (r: Placed) =>
     grow > 0
-      ? // Round joins: the grown ring is every point within `grow` of the part (a Minkowski sum with a
-        // disc), so two grown parts meet exactly when the parts are closer than twice `grow`.
+      ? // Round joins: the grown part is every point within `grow` of it (a Minkowski sum with a disc;
+        // its holes shrink by as much), so two grown parts meet exactly when the parts are closer than
+        // twice `grow`.
         (lib.offsetToPaths({
           delta: grow * SCALE,
           arcTolerance: 0.001 * SCALE,
           offsetInputs: [
-            { data: toPath(ring, SCALE), joinType: clipper.JoinType.Round, endType: clipper.EndType.ClosedPolygon },
+            { data: pathsOf(r), joinType: clipper.JoinType.Round, endType: clipper.EndType.ClosedPolygon },
           ],
         }) ?? [])
-      : [toPath(ring, SCALE)];
+      : pathsOf(r);
   const out = lib.clipToPaths({
     clipType: clipper.ClipType.Intersection,
     subjectInputs: inflate(a).map((data) => ({ data, closed: true })),
@@ -47,7 +60,7 @@ function overlapArea(lib: ClipperLib, a: Ring, b: Ring, grow: number): number {
     subjectFillType: clipper.PolyFillType.NonZero,
     clipFillType: clipper.PolyFillType.NonZero,
   });
-  return (out ?? []).reduce((sum, p) => sum + Math.abs(lib.area(p)), 0) / (SCALE * SCALE);
+  return (out ?? []).reduce((sum, p) => sum + lib.area(p), 0) / (SCALE * SCALE);
 }
 
 /** Plain-English problems with the nest; an empty list means it holds. */
@@ -60,7 +73,7 @@ export async function checkNest(input: NestCheckInput): Promise<string[]> {
   const { width, height } = input.sheet;
   const m = input.margin;
   for (const sheet of input.nest.sheets) {
-    const placed: { label: string; ring: Ring; box: Box }[] = [];
+    const placed: { label: string; ring: Placed; box: Box }[] = [];
     for (const p of sheet.placements) {
       const item = byId.get(p.id);
       const label = `${p.id} (copy ${p.copy + 1})`;
@@ -79,8 +92,11 @@ export async function checkNest(input: NestCheckInput): Promise<string[]> {
         problems.push(`${label} has no proper position.`);
         continue;
       }
-      const ring = placeRing(item.polygon, p.rotation, p.x, p.y);
-      const box = bounds(ring);
+      const ring: Placed = {
+        outer: placeRing(item.polygon, p.rotation, p.x, p.y),
+        holes: (item.holes ?? []).map((h) => placeRing(h, p.rotation, p.x, p.y)),
+      };
+      const box = bounds(ring.outer);
       if (
         box.minX < m - TOLERANCE ||
         box.minY < m - TOLERANCE ||

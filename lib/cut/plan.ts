@@ -94,6 +94,8 @@ export async function nestItemsFor(
     items.push({
       id: p.id,
       polygon: paths.get(p.id)!.outer,
+      // The tool path's holes (each shrunk by half the kerf): smaller parts may be nested in them.
+      holes: paths.get(p.id)!.holes,
       quantity: p.quantity,
       rotations: allowedRotations(p, settings),
     });

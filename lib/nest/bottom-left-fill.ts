@@ -100,7 +100,50 @@ export class Bin {
         const c: Position = { x, y, k1: x + box.minX, k2: y + box.minY };
         if (better(c, best)) best = c;
       }
+    for (const c of this.holePositions(shape)) if (better(c, best)) best = c;
     return best;
+  }
+
+  /**
+   * Bottom-left candidates inside the holes of parts already placed: the shape's fit in the hole,
+   * less the no-fit polygons of every other placed shape (the host's own covers its hole).
+   */
+  private holePositions(shape: number): Position[] {
+    const out: Position[] = [];
+    const box = this.set.shapes[shape].box;
+    this.placed.forEach((host, h) => {
+      const holes = this.set.shapes[host.shape].holes;
+      for (let k = 0; k < holes.length; k++) {
+        const fit = this.nfps.holeFit(host.shape, k, shape);
+        if (!fit.box) continue;
+        const moved = fit.paths.map((path) => path.map((q) => ({ x: q.x + host.x, y: q.y + host.y })));
+        const others = this.placed.filter((_, i) => i !== h);
+        const clip: clipper.Path[] = [];
+        for (const p of others) {
+          const nfp = this.nfps.get(p.shape, shape);
+          if (
+            nfp.box.minX + p.x >= fit.box.maxX + host.x ||
+            nfp.box.maxX + p.x <= fit.box.minX + host.x ||
+            nfp.box.minY + p.y >= fit.box.maxY + host.y ||
+            nfp.box.maxY + p.y <= fit.box.minY + host.y
+          )
+            continue;
+          for (const path of nfp.paths) clip.push(path.map((q) => ({ x: q.x + p.x, y: q.y + p.y })));
+        }
+        const region = clip.length
+          ? this.lib.clipToPaths({
+              clipType: clipper.ClipType.Difference,
+              subjectInputs: moved.map((data) => ({ data, closed: true })),
+              clipInputs: [{ data: clip }],
+              subjectFillType: clipper.PolyFillType.NonZero,
+              clipFillType: clipper.PolyFillType.NonZero,
+            })
+          : moved;
+        for (const path of region)
+          for (const q of path) out.push({ x: q.x, y: q.y, k1: q.x + box.minX, k2: q.y + box.minY });
+      }
+    });
+    return out;
   }
 
   place(shape: number, at: { x: number; y: number }): void {

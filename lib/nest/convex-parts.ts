@@ -36,14 +36,27 @@ function merge(pts: readonly P[], a: number[], b: number[], i: number, j: number
   return out;
 }
 
-/** Convex pieces of a simple counter-clockwise polygon, each counter-clockwise. */
-export function convexParts(path: readonly P[]): P[][] {
+/**
+ * Convex pieces of a simple counter-clockwise polygon, each counter-clockwise. With `holes` (any
+ * orientation), of the region between the polygon and its holes.
+ */
+export function convexParts(outer: readonly P[], holes: readonly (readonly P[])[] = []): P[][] {
+  const on = outer.length;
+  if (!holes.length) {
+    if (on <= 3) return [outer.slice()];
+    if (outer.every((_, k) => turn(outer[(k + on - 1) % on], outer[k], outer[(k + 1) % on]) >= 0))
+      return [outer.slice()];
+  }
+  const path: P[] = [...outer];
+  const holeStarts: number[] = [];
+  for (const h of holes) {
+    holeStarts.push(path.length);
+    path.push(...h);
+  }
   const n = path.length;
-  if (n <= 3) return [path.slice()];
-  if (path.every((_, k) => turn(path[(k + n - 1) % n], path[k], path[(k + 1) % n]) >= 0)) return [path.slice()];
   const flat: number[] = [];
   for (const q of path) flat.push(q.x, q.y);
-  const tri = earcut(flat);
+  const tri = earcut(flat, holeStarts.length ? holeStarts : undefined);
   const pieces: (number[] | null)[] = [];
   for (let t = 0; t < tri.length; t += 3) {
     const [a, b, c] = [tri[t], tri[t + 1], tri[t + 2]];

@@ -35,6 +35,15 @@ export function checkItems(items: readonly NestItem[]): void {
     )
       throw new Error(`${it.id}: the polygon needs at least 3 points with finite coordinates`);
     if (!(ringArea(it.polygon) > 0)) throw new Error(`${it.id}: the polygon has zero area`);
+    if (
+      it.holes !== undefined &&
+      (!Array.isArray(it.holes) ||
+        it.holes.some(
+          (h: readonly (readonly number[])[]) =>
+            !Array.isArray(h) || h.length < 3 || h.some((p) => !Number.isFinite(p[0]) || !Number.isFinite(p[1])),
+        ))
+    )
+      throw new Error(`${it.id}: each hole needs at least 3 points with finite coordinates`);
   }
   if (total > MAX_TOTAL_COPIES) throw new Error(`More than ${MAX_TOTAL_COPIES} copies in total`);
 }

@@ -3,6 +3,7 @@
 import { boundsOfXY, union, type Box } from "@/lib/geometry/box";
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import type { clipper } from "@/lib/geometry/clipper";
+import { holeFit } from "./hole-fit";
 import { noFitPolygon } from "./minkowski";
 import type { ShapeSet } from "./shapes";
 
@@ -41,6 +42,22 @@ export class NoFitCache {
   ) {
     this.n = set.shapes.length;
     this.table = new Array(this.n * this.n);
+  }
+
+  private readonly holeTable = new Map<string, { paths: clipper.Paths; box: Box | null }>();
+
+  /** Positions of shape `moving` inside hole `k` of shape `host` (placed at the origin), computed once. */
+  holeFit(host: number, k: number, moving: number): { paths: clipper.Paths; box: Box | null } {
+    const key = `${host}/${k}/${moving}`;
+    let fit = this.holeTable.get(key);
+    if (!fit) {
+      const t0 = typeof performance !== "undefined" ? performance.now() : Date.now();
+      const paths = holeFit(this.lib, this.set.shapes[host].holes[k], this.set.shapes[moving].orbiting);
+      fit = { paths, box: paths.length ? paths.map((p) => boundsOfXY(p)).reduce((a, b) => union(a, b)) : null };
+      this.holeTable.set(key, fit);
+      this.seconds += ((typeof performance !== "undefined" ? performance.now() : Date.now()) - t0) / 1000;
+    }
+    return fit;
   }
 
   /** NFP of shape `moving` around shape `fixed` placed at the origin. */

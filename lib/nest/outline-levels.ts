@@ -63,11 +63,12 @@ export function shapesWithinBudget(
   scale: number,
   spacing: number,
   seconds: number,
+  holes = false,
 ): { set: ShapeSet; level: number } {
-  let set = buildShapes(lib, items, scale, spacing, LEVELS[0]);
+  let set = buildShapes(lib, items, scale, spacing, { ...LEVELS[0], holes });
   for (let level = 1; level < LEVELS.length; level++) {
     if (noFitEstimate(lib, set) <= NFP_SHARE * seconds) return { set, level: level - 1 };
-    set = buildShapes(lib, items, scale, spacing, LEVELS[level]);
+    set = buildShapes(lib, items, scale, spacing, { ...LEVELS[level], holes });
   }
   return { set, level: LEVELS.length - 1 };
 }

@@ -28,6 +28,11 @@ export interface Shape {
   orbiting: clipper.Path;
   /** Bounding box of `orbiting`, in integer steps. */
   box: Box;
+  /**
+   * The part's holes shrunk by spacing/2 (counter-clockwise): an orbiting shape inside one keeps
+   * the spacing from the hole's edge. Empty when holes are not used.
+   */
+  holes: clipper.Path[];
 }
 
 export interface ShapeSet {
@@ -45,6 +50,8 @@ export interface ShapeSet {
 export interface OutlinePolicy {
   maxExtraShare: number;
   maxVertices?: number;
+  /** Keep the items' holes for nesting small parts in them (sheet mode). */
+  holes?: boolean;
 }
 
 /** The fine outlines: at most 0.5 % of each part's area added (issue 13's bound). */
@@ -79,9 +86,31 @@ export function buildShapes(
           extraArea: outline.extra / (scale * scale),
           extraShare: itemArea[i] > 0 ? outline.extra / (scale * scale) / itemArea[i] : 0,
         });
-      shapes.push({ item: i, rotation, stationary, orbiting, box: boundsOfXY(orbiting) });
+      const holes = policy.holes ? holeContainers(lib, item, rotation, scale, half) : [];
+      shapes.push({ item: i, rotation, stationary, orbiting, box: boundsOfXY(orbiting), holes });
       return shapes.length - 1;
     }),
   );
   return { scale, shapes, shapeOf, itemArea, outlines };
+}
+
+/** The item's holes turned and scaled, counter-clockwise, shrunk by half the spacing; vanished ones dropped. */
+function holeContainers(
+  lib: ClipperLib,
+  item: NestItem,
+  rotation: number,
+  scale: number,
+  half: number,
+): clipper.Path[] {
+  const out: clipper.Path[] = [];
+  for (const ring of item.holes ?? []) {
+    const path = toPath(rotateRing(ring, rotation), scale);
+    if (lib.area(path) < 0) path.reverse();
+    try {
+      out.push(offsetPolygon(lib, path, -half));
+    } catch {
+      // The spacing closes the hole up: nothing fits in it.
+    }
+  }
+  return out;
 }

@@ -67,7 +67,7 @@ async function searchSheets(frame: Frame, items: NestItem[], area: number[], bud
   const { lib, width, height, margin, spacing, units, maxSheets } = frame;
   const copies = expandCopies(items);
   const S = scaleForExtent(Math.max(width, height) + spacing);
-  const { set } = shapesWithinBudget(lib, items, S, spacing, budget.seconds - budget.elapsed());
+  const { set } = shapesWithinBudget(lib, items, S, spacing, budget.seconds - budget.elapsed(), true);
   const nfps = new NoFitCache(lib, set);
   // The inflated collision shapes may reach spacing/2 past the margin line; the parts themselves stay inside it.
   const half = Math.round((spacing / 2) * S);
@@ -114,7 +114,9 @@ async function searchSheets(frame: Frame, items: NestItem[], area: number[], bud
   };
   // No layout can use fewer sheets than the parts' area allows: reaching that ends the search.
   const usableArea = Math.max(0, width - 2 * margin) * Math.max(0, height - 2 * margin);
-  const activeArea = active.reduce((sum, k) => sum + area[copies[k].item], 0);
+  // Net of holes: a part nested in another's hole takes none of the sheet's area.
+  const netArea = items.map((it, i) => area[i] - (it.holes ?? []).reduce((sum, h) => sum + ringArea(h), 0));
+  const activeArea = active.reduce((sum, k) => sum + Math.max(0, netArea[copies[k].item]), 0);
   const areaBound = active.length ? Math.max(1, Math.ceil(activeArea / usableArea - 1e-9)) : 0;
   const provedBest = (d: Decoded) => d.unplacedCount === 0 && d.bins.length <= areaBound;
   const placedAreaOf = (seq: Gene[], d: Decoded) =>

@@ -11,6 +11,11 @@ export interface NestItem {
   quantity: number;
   /** Allowed rotations in degrees, e.g. [0, 90, 180, 270]. */
   rotations: number[];
+  /**
+   * Holes through the part (its own frame), where smaller parts may be nested in sheet mode. Strip
+   * mode ignores them.
+   */
+  holes?: Ring[];
 }
 
 export interface NestProgress {
