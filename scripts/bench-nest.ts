@@ -9,6 +9,7 @@ import { readFileSync } from "node:fs";
 import { fileURLToPath, pathToFileURL } from "node:url";
 import { performance } from "node:perf_hooks";
 import { buildCutParts, nestItemsFor, parseCutSettings } from "../lib/cut";
+import { chooseSegmentLengths } from "../lib/cut-plan/segment-lengths";
 import { loadInstance, nestOnSheets, nestStrip, type NestInstance, type SheetNestInput } from "../lib/nest";
 import { solve } from "../lib/track";
 import { trackPartsInstance } from "./nest-fixtures/track-parts";
@@ -35,14 +36,16 @@ export interface SheetBenchCase {
 }
 
 /** The demo job (docs/product.md §3): 6.0 m of 400 mm square-wheel track, two lines, on 2440 × 1220 plywood. */
+const DEMO_SPEC = {
+  mode: "track-for-wheel",
+  units: "mm",
+  wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 },
+} as const;
+const DEMO_SETTINGS = { runLength: 6000, project: "Square-wheel trike run" };
+
 async function demoJob(seconds: number): Promise<SheetNestInput> {
-  const spec = {
-    mode: "track-for-wheel",
-    units: "mm",
-    wheel: { kind: "polygon", sides: 4, side: 400, cornerRadius: 0 },
-  } as const;
-  const settings = parseCutSettings({ runLength: 6000, project: "Square-wheel trike run" });
-  const plan = buildCutParts(spec, solve(spec), settings);
+  const settings = parseCutSettings(DEMO_SETTINGS);
+  const plan = buildCutParts(DEMO_SPEC, solve(DEMO_SPEC), settings);
   return {
     items: await nestItemsFor(plan.parts, plan.settings),
     sheet: { width: settings.sheet.length, height: settings.sheet.width },
@@ -54,6 +57,24 @@ async function demoJob(seconds: number): Promise<SheetNestInput> {
 }
 
 export const SHEET_CASES: SheetBenchCase[] = [{ name: "demo-job", input: () => demoJob(15) }];
+
+/** The demo job with the joints chosen for the sheet (lib/cut-plan/segment-lengths.ts), as the cut page does. */
+async function runDemoWithChosenJoints(seconds: number): Promise<void> {
+  const t0 = performance.now();
+  const c = await chooseSegmentLengths({
+    spec: DEMO_SPEC,
+    result: solve(DEMO_SPEC),
+    settings: DEMO_SETTINGS,
+    seconds,
+    seed: 1,
+  });
+  const wall = (performance.now() - t0) / 1000;
+  console.log(
+    `demo-job, joints chosen: ${c.chosen.sheets} sheet(s) (area bound ${c.chosen.nest.areaBound}) at ${c.chosen.cuts.join(", ")} mm` +
+      ` (${c.chosen.periods.join(" + ")} periods), default ${c.default.sheets} sheet(s) at ${c.default.cuts.map((v) => v.toFixed(1)).join(", ")} mm;` +
+      ` ${c.evaluated} of ${c.candidates} choices nested, run ${secs(wall)} (budget ${seconds} s), ended ${c.ended}`,
+  );
+}
 
 const pct = (v: number) => `${(v * 100).toFixed(2)} %`;
 const secs = (v: number) => `${v.toFixed(1).padStart(5)} s`;
@@ -110,6 +131,7 @@ async function main(argv: string[]): Promise<void> {
     if (!only || only.includes(name)) await runStripCase(name, seconds ?? budget, published);
   console.log("Nesting, sheet mode");
   for (const c of SHEET_CASES) if (!only || only.includes(c.name)) await runSheetCase(c);
+  if (!only || only.includes("demo-job")) await runDemoWithChosenJoints(15);
 }
 
 if (process.argv[1] && import.meta.url === pathToFileURL(process.argv[1]).href) await main(process.argv.slice(2));

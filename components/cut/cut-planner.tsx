@@ -33,8 +33,10 @@ const searchSeconds = (typed: string) => {
 };
 
 export function CutPlanner({ revision, designName, projectName, library, initialForm, saved, approved }: Props) {
-  const { form, set, choice, settings } = usePlanForm(initialForm, library, projectName);
+  const { form, set, choice, settings, settingsOf } = usePlanForm(initialForm, library, projectName);
   const [seconds, setSeconds] = useState("15");
+  // Where the joints fall is the plan's to choose only while no cut stations are typed.
+  const [chooseJoints, setChooseJoints] = useState(true);
   const parts = useParts(revision.spec, settings);
   const nester = useNester();
   const save = useSavePlan(revision.id);
@@ -49,11 +51,24 @@ export function CutPlanner({ revision, designName, projectName, library, initial
   const [nestedKey, setNestedKey] = useState<string | null>(null);
   const stale = nester.state.phase === "done" && nestedKey !== settingsKey;
 
+  const canChooseJoints = run !== null && form.cuts.trim() === "";
+
   function startNest() {
     if (!settings) return;
     save.reset();
     setNestedKey(settingsKey);
-    nester.start(revision.spec, settings, searchSeconds(seconds));
+    const started = form;
+    nester.start(revision.spec, settings, searchSeconds(seconds), {
+      chooseJoints: canChooseJoints && chooseJoints,
+      // The chosen stations go into the cut stations field, so the saved plan (which the server
+      // rebuilds from the settings) is cut exactly where this nest was made.
+      onJoints: (joints) => {
+        if (!joints.changed) return;
+        const cuts = joints.cuts.map(String).join(", ");
+        set("cuts", cuts);
+        setNestedKey(JSON.stringify(settingsOf({ ...started, cuts })));
+      },
+    });
   }
 
   function saveNest(intent: SaveIntent) {
@@ -93,6 +108,7 @@ export function CutPlanner({ revision, designName, projectName, library, initial
           canNest={!!preview}
           onNest={startNest}
           onCancel={nester.cancel}
+          jointChoice={canChooseJoints ? { on: chooseJoints, set: setChooseJoints } : null}
           stale={stale}
           approved={approved}
           revisionNumber={revision.number}

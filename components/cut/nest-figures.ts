@@ -4,7 +4,7 @@ import { bounds } from "@/lib/geometry/box";
 import { placeRing } from "@/lib/geometry/place";
 import { ringArea } from "@/lib/geometry/ring";
 import type { SheetNestResult } from "@/lib/nest/types";
-import type { PartsPreview } from "./cut-worker";
+import type { JointChoiceReport, PartsPreview } from "./cut-worker";
 import type { SheetViewPart } from "./sheet-view";
 
 export const pct = (v: number) => `${(v * 100).toFixed(1)} %`;
@@ -77,4 +77,38 @@ export function nestEnding(nest: SheetNestResult): string {
     default:
       return nest.cancelled ? "stopped early: the best layout found so far" : "";
   }
+}
+
+const sheetsWord = (n: number) => `${n} ${n === 1 ? "sheet" : "sheets"}`;
+const stations = (cuts: number[]) => cuts.map((c) => String(Number(c.toFixed(1)))).join(", ");
+
+/** What the choice of joints found, in one plain sentence (two when it points to the cut stations field). */
+export function jointSentence(j: JointChoiceReport): string {
+  const choices = (n: number) => `${n} other ${n === 1 ? "choice" : "choices"}`;
+  const looked =
+    j.candidates === 0
+      ? " (no other choice keeps to the joint rules)"
+      : j.ended === "searched"
+        ? ` (${choices(j.candidates)} looked at, ${j.tried} nested)`
+        : ` (stopped early, after nesting ${j.tried} of ${choices(j.candidates)})`;
+  if (!j.changed) {
+    const usual = j.defaultCuts.length
+      ? `the usual ${j.defaultCuts.length === 1 ? "joint" : "joints"} at ${stations(j.defaultCuts)} mm`
+      : "the run in one piece";
+    if (j.tried === 0 && j.candidates > 0 && j.ended !== "searched")
+      return j.ended === "cancelled"
+        ? `The choice of joints was stopped before any other was nested: ${usual}, ${sheetsWord(j.defaultSheets)}.`
+        : `The search time ran out before any other joints were nested: ${usual}, ${sheetsWord(j.defaultSheets)}. Give the search more time to choose them.`;
+    return `No other joints ${j.ended === "searched" ? "nest" : "nested so far"} better than ${usual}: ${sheetsWord(j.defaultSheets)}${looked}.`;
+  }
+  const at = `${j.cuts.length === 1 ? "Joint" : "Joints"} at ${stations(j.cuts)} mm`;
+  const gain =
+    j.unplaced < j.defaultUnplaced
+      ? `${j.unplaced === 0 ? "every part placed" : `${j.unplaced} parts left out`}, where the usual joints leave ${j.defaultUnplaced} out (${sheetsWord(j.sheets)})`
+      : j.sheetsSaved > 0
+        ? `${sheetsWord(j.sheets)} instead of ${j.defaultSheets} (${sheetsWord(j.sheetsSaved)} saved)`
+        : j.segments < j.defaultSegments
+          ? `${sheetsWord(j.sheets)} as with the usual joints, in ${j.segments} segments instead of ${j.defaultSegments}`
+          : `${sheetsWord(j.sheets)} as with the usual joints, with more of the last sheet left whole (${pct(j.lastSheetUse)} used instead of ${pct(j.defaultLastSheetUse)})`;
+  return `${at}: ${gain}${j.ended === "searched" ? "" : looked}. ${j.cuts.length === 1 ? "It is" : "They are"} in the cut stations field now; empty it to choose again.`;
 }

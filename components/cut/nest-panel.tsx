@@ -1,14 +1,14 @@
 "use client";
 // A new cut plan: nest the parts on stock sheets (in a worker, with progress and cancel), look at
 // the sheets, and save the result as the revision's next cut plan.
-import { TextInput } from "@/components/ui/inputs";
+import { CheckInput, TextInput } from "@/components/ui/inputs";
 import { Button } from "@/components/ui/button";
 import { Notice } from "@/components/ui/notice";
 import { Panel } from "@/components/ui/panel";
 import { failureOf } from "@/components/api/request-json";
 import { cutPlanName } from "@/lib/cut-plan/name";
 import type { PartsPreview } from "./cut-worker";
-import { nestEnding, nestFigures, pct, sheetParts, usedShare } from "./nest-figures";
+import { jointSentence, nestEnding, nestFigures, pct, sheetParts, usedShare } from "./nest-figures";
 import { SaveButtons } from "./save-buttons";
 import { SheetView } from "./sheet-view";
 import type { NestState } from "./use-cut-worker";
@@ -24,6 +24,8 @@ interface Props {
   canNest: boolean;
   onNest: () => void;
   onCancel: () => void;
+  /** The check box "Choose the joints to save sheets": offered (not null) when the run has a track and no stations are typed. */
+  jointChoice: { on: boolean; set: (on: boolean) => void } | null;
   /** The settings have changed since the nest was made. */
   stale: boolean;
   approved: boolean;
@@ -39,6 +41,7 @@ export function NestPanel({
   canNest,
   onNest,
   onCancel,
+  jointChoice,
   stale,
   approved,
   revisionNumber,
@@ -68,6 +71,21 @@ export function NestPanel({
           </Button>
         ) : null}
       </div>
+      {jointChoice ? (
+        <div className="mt-3">
+          <CheckInput
+            id="nest-choose-joints"
+            label="Choose the joints to save sheets"
+            checked={jointChoice.on}
+            disabled={!!running}
+            onChange={jointChoice.set}
+          />
+          <p className="mt-1 text-xs text-ink-soft">
+            In the first half of the search time, other segment lengths in whole periods are tried, within the joint
+            rules and with at most two more joints; the stations that nest on the fewest sheets are kept.
+          </p>
+        </div>
+      ) : null}
       {running ? <NestProgressBar running={running} /> : null}
       {state.phase === "failed" ? <Notice tone="problem">{state.message}</Notice> : null}
       {state.phase === "done" ? (
@@ -99,9 +117,11 @@ function NestProgressBar({ running }: { running: Running }) {
         <div className="h-full bg-ink transition-[width]" style={{ width: `${(p?.fraction ?? 0) * 100}%` }} />
       </div>
       <p className="text-xs text-ink-soft">
-        {p
-          ? `${p.placed} of ${p.total} placed; best so far ${pct(p.bestUtilisation)}${p.message ? ` — ${p.message}` : ""}`
-          : "Starting…"}
+        {running.joints
+          ? `Choosing the joints: ${running.joints.tried} of ${running.joints.candidates} other choices nested${running.joints.bestSheets ? `; fewest so far ${running.joints.bestSheets} sheet(s)` : ""}`
+          : p
+            ? `${p.placed} of ${p.total} placed; best so far ${pct(p.bestUtilisation)}${p.message ? ` — ${p.message}` : ""}`
+            : "Starting…"}
       </p>
     </div>
   );
@@ -130,6 +150,11 @@ function NestResult({
         {usedSheets.length} sheet(s), {pct(overall)} of the stock used overall ({nestEnding(nest.nest)});{" "}
         {nest.nest.seconds.toFixed(1)} s.
       </p>
+      {nest.joints ? (
+        <p className="text-sm" data-testid="joint-choice">
+          {jointSentence(nest.joints)}
+        </p>
+      ) : null}
       {stale ? (
         <Notice tone="problem">The settings have changed since this nest: nest again before saving it.</Notice>
       ) : null}

@@ -5,7 +5,7 @@
 import { useCallback, useEffect, useState } from "react";
 import type { NestProgress, SheetNestResult } from "@/lib/nest/types";
 import { WorkerClient } from "@/components/worker/worker-client";
-import type { CutWorkerReply, CutWorkerRequest, PartsPreview } from "./cut-worker";
+import type { CutWorkerReply, CutWorkerRequest, JointChoiceReport, PartsPreview } from "./cut-worker";
 
 const newWorker = () => new Worker(new URL("./cut-worker.ts", import.meta.url), { type: "module" });
 
@@ -69,11 +69,27 @@ export function useParts(spec: unknown, settings: unknown, delayMs = 150): Parts
   return state;
 }
 
+type JointProgress = NonNullable<Extract<CutWorkerReply, { type: "progress" }>["joints"]>;
+
 export type NestState =
   | { phase: "idle" }
-  | { phase: "running"; progress?: NestProgress; startedAt: number; cancelling: boolean }
-  | { phase: "done"; nest: SheetNestResult; preview: PartsPreview }
+  | {
+      phase: "running";
+      progress?: NestProgress;
+      /** Set while the joints are being chosen. */
+      joints?: JointProgress;
+      startedAt: number;
+      cancelling: boolean;
+    }
+  | { phase: "done"; nest: SheetNestResult; preview: PartsPreview; joints?: JointChoiceReport }
   | { phase: "failed"; message: string; field?: string };
+
+export interface NestOptions {
+  /** Choose the cut stations first (the settings have none). */
+  chooseJoints?: boolean;
+  /** Called with the choice just before the finished nest is shown. */
+  onJoints?: (joints: JointChoiceReport) => void;
+}
 
 export function useNester() {
   const [state, setState] = useState<NestState>({ phase: "idle" });
@@ -82,15 +98,18 @@ export function useNester() {
   useEffect(() => () => client.dispose(), [client]);
 
   const start = useCallback(
-    (spec: unknown, settings: unknown, seconds: number) => {
+    (spec: unknown, settings: unknown, seconds: number, options: NestOptions = {}) => {
       setState({ phase: "running", startedAt: Date.now(), cancelling: false });
-      client.request({ type: "nest", spec, settings, seconds }, (event) => {
+      const chooseJoints = options.chooseJoints ?? false;
+      client.request({ type: "nest", spec, settings, seconds, chooseJoints }, (event) => {
         if (event.type === "failed") return setState({ phase: "failed", message: event.message });
         const reply = event.reply;
         if (reply.type === "progress")
-          setState((s) => (s.phase === "running" ? { ...s, progress: reply.progress } : s));
-        else if (reply.type === "nested") setState({ phase: "done", nest: reply.nest, preview: reply.preview });
-        else if (reply.type === "error") setState({ phase: "failed", message: reply.message, field: reply.field });
+          setState((s) => (s.phase === "running" ? { ...s, progress: reply.progress, joints: reply.joints } : s));
+        else if (reply.type === "nested") {
+          if (reply.joints) options.onJoints?.(reply.joints);
+          setState({ phase: "done", nest: reply.nest, preview: reply.preview, joints: reply.joints });
+        } else if (reply.type === "error") setState({ phase: "failed", message: reply.message, field: reply.field });
       });
     },
     [client],

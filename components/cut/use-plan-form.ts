@@ -1,6 +1,6 @@
 "use client";
 // The cut plan's settings as typed, and the settings they compose with the chosen library rows.
-import { useMemo, useState } from "react";
+import { useCallback, useMemo, useState } from "react";
 import { composeSettings, type LibraryChoice } from "@/lib/cut-plan/compose";
 import { formToChoice, type PlanForm } from "@/lib/cut-plan/form";
 
@@ -28,13 +28,19 @@ export function usePlanForm(initialForm: PlanForm, library: PlannerLibrary, proj
       return next;
     });
 
+  /** The settings a form composes with the chosen library rows (null while a row is missing). */
+  const settingsOf = useCallback(
+    (f: PlanForm) => {
+      const c = formToChoice(f);
+      const material = library.materials.find((m) => m.id === c.materialId);
+      const sheet = library.sheets.find((s) => s.id === c.stockSheetId);
+      const machine = library.machines.find((m) => m.id === c.machineId);
+      return material && sheet && machine ? composeSettings(c, { material, sheet, machine }, projectName) : null;
+    },
+    [library, projectName],
+  );
   const choice = useMemo(() => formToChoice(form), [form]);
-  const settings = useMemo(() => {
-    const material = library.materials.find((m) => m.id === choice.materialId);
-    const sheet = library.sheets.find((s) => s.id === choice.stockSheetId);
-    const machine = library.machines.find((m) => m.id === choice.machineId);
-    return material && sheet && machine ? composeSettings(choice, { material, sheet, machine }, projectName) : null;
-  }, [choice, library, projectName]);
+  const settings = useMemo(() => settingsOf(form), [form, settingsOf]);
 
-  return { form, set, choice, settings };
+  return { form, set, choice, settings, settingsOf };
 }

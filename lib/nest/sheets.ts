@@ -46,6 +46,8 @@ interface SheetRun {
   placedArea: number;
   cost: number;
   provedBest: boolean;
+  /** This search stopped on its iteration cap. */
+  outOfIterations: boolean;
   areaBound: number;
   firstLayout: number;
   noFitSeconds: number;
@@ -184,6 +186,7 @@ async function searchSheets(frame: Frame, items: NestItem[], area: number[], bud
     placedArea,
     cost: best ? best.cost : unplaced.length,
     provedBest: best ? provedBest(best.decoded) : unplaced.length === 0,
+    outOfIterations: budget.outOfIterations,
     areaBound,
     firstLayout,
     noFitSeconds: nfps.seconds,
@@ -221,7 +224,7 @@ export async function nestOnSheets(input: SheetNestInput): Promise<SheetNestResu
       outlines: r.outlines.filter((o) => items.some((it) => it.id === o.id)),
     };
   }
-  if (!run?.provedBest && !budget.aborted) {
+  if (!run || (!run.provedBest && !budget.aborted)) {
     const single = await searchSheets(frame, items, area, budget.phase(budget.seconds));
     if (!run || single.cost < run.cost) run = single;
   }
@@ -265,13 +268,7 @@ function resultOf(items: NestItem[], area: number[], frame: Frame, run: SheetRun
     unplaced,
     seconds: budget.elapsed(),
     cancelled: budget.aborted,
-    ended: budget.aborted
-      ? "cancelled"
-      : run.provedBest
-        ? "proved-best"
-        : budget.outOfIterations
-          ? "iterations"
-          : "time",
+    ended: budget.aborted ? "cancelled" : run.provedBest ? "proved-best" : run.outOfIterations ? "iterations" : "time",
     areaBound: run.areaBound,
     timings: { firstLayout: run.firstLayout, noFitPolygons: run.noFitSeconds },
     outlines: run.outlines,

@@ -40,12 +40,23 @@ describe("the demo job's cut plan", () => {
     await cut.fill("Run length on site (mm)", "6000");
     await cut.waitForRunSummary(/^17 periods/);
 
+    // No cut stations typed: the nest chooses the joints first (on by default).
+    expect(await cut.cutStations()).toBe("");
     await cut.nest(6);
     await page.getByTestId("nest-progress").waitFor();
     await page.getByTestId("nest-result").waitFor({ timeout: 60_000 });
     expect(await cut.nestSummary().innerText()).toMatch(/^\d+ sheet\(s\), \d+\.\d % of the stock used overall/);
     expect(await page.getByTestId("unplaced").count()).toBe(0);
     expect(await page.getByTestId("sheet-view").count()).toBeGreaterThan(0);
+    // The greedy cuts (6 + 6 + 5 periods) need two sheets; other whole-period lengths fit one
+    // (tests/unit/cut-plan/segment-lengths.test.ts). The chosen stations go into the field.
+    const joints = (await cut.jointChoice().innerText()).match(
+      /^Joints at ([\d., ]+) mm: 1 sheet instead of 2 \(1 sheet saved\)\./,
+    );
+    expect(joints, await cut.jointChoice().innerText()).not.toBeNull();
+    const stations = joints![1].split(", ");
+    expect(await cut.cutStations()).toBe(stations.join(", "));
+    expect(await page.getByTestId("sheet-view").count()).toBe(1);
     // Named by its number within the revision, never the database id.
     const saved = (await cut.save()).match(/^Saved as cut plan (\d+) of (R\d+)/);
     expect(saved).not.toBeNull();
@@ -63,6 +74,9 @@ describe("the demo job's cut plan", () => {
     const listing = execFileSync("unzip", ["-Z1", file], { encoding: "utf8" });
     for (const name of [/README\.txt/, /bom\.csv/, /sheet-1-mm\.dxf/, /sheet-1-preview\.png/])
       expect(listing).toMatch(name);
+    // The saved plan, rebuilt by the server from its settings, is cut at the chosen stations.
+    const readme = execFileSync("unzip", ["-p", file, "*README.txt"], { encoding: "utf8" });
+    expect(readme).toContain(`Cuts at:     ${stations.map((x) => `${x} mm`).join(", ")} from the run's start`);
     await context.close();
   });
 
@@ -71,6 +85,11 @@ describe("the demo job's cut plan", () => {
     await page.goto(cutPageUrl);
     const cut = new CutPlanPage(page);
     await cut.waitForRunSummary(/^17 periods/);
+    // The plan saved above reopens with its chosen stations, whose parts fit one sheet and so end the
+    // search at once. The usual cuts, without the choice, keep the nester searching for a cancel to stop.
+    await cut.fill("Cut stations along the run (mm)", "");
+    await cut.waitForRunSummary(/ in 3 segments /);
+    await cut.chooseJoints(false);
     await cut.nest(60);
     await page.getByTestId("nest-progress").waitFor();
     await page.waitForTimeout(1500);

@@ -43,6 +43,21 @@ export class CutPlanPage {
     return this.page.getByTestId("nest-summary");
   }
 
+  /** The sentence on where the joints were put, shown when the nest chose them. */
+  jointChoice() {
+    return this.page.getByTestId("joint-choice");
+  }
+
+  /** The check box that lets the nest choose the joints (offered while no cut stations are typed). */
+  async chooseJoints(on: boolean) {
+    await this.page.getByLabel("Choose the joints to save sheets", { exact: true }).setChecked(on);
+  }
+
+  /** The cut stations field as it reads now. */
+  cutStations() {
+    return this.page.getByLabel("Cut stations along the run (mm)", { exact: true }).inputValue();
+  }
+
   async save() {
     await this.page.getByRole("button", { name: "Save as this revision's cut plan" }).click();
     await this.page.getByTestId("save-message").waitFor();

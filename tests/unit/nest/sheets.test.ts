@@ -112,6 +112,21 @@ describe("nestOnSheets", () => {
     expect(expectValidSheets(items, result, 10, 5)).toBe(40);
   });
 
+  it("answers an already cancelled run with a complete first layout, and says so", async () => {
+    const items = [rect("A", 700, 700, 12), rect("B", 450, 120, 20, [0, 180])];
+    const controller = new AbortController();
+    controller.abort();
+    const result = await nestOnSheets({ items, sheet, margin: 10, spacing: 5, seconds: 60, signal: controller.signal });
+    expect(result.ended).toBe("cancelled");
+    expect(expectValidSheets(items, result, 10, 5)).toBe(32);
+  });
+
+  it("says it stopped on the iteration cap when it did", async () => {
+    const items = [rect("A", 700, 700, 12), rect("B", 450, 120, 20, [0, 180])];
+    const result = await nestOnSheets({ items, sheet, margin: 10, spacing: 5, seconds: 60, maxIterations: 20 });
+    expect(result.ended).toBe("iterations");
+  });
+
   it("returns a valid layout promptly when cancelled", async () => {
     // 700 mm squares go three to a sheet, so the area bound (3 sheets) is never reached: only the cancel stops it.
     const items = [rect("A", 700, 700, 12), rect("B", 450, 120, 20, [0, 180])];
