@@ -128,6 +128,23 @@ export const signInAttempts = mysqlTable(
   ],
 );
 
+/**
+ * Sessions ended by signing out. A session is a signed token the browser holds, so signing out
+ * records its id here: a copy of the token kept or replayed afterwards is refused (lib/server/dal.ts)
+ * and never renewed (auth.ts), whichever instance it reaches.
+ */
+export const endedSessions = mysqlTable(
+  "ended_sessions",
+  {
+    sessionId: varchar("session_id", { length: 64 }).primaryKey(),
+    userId: int("user_id")
+      .notNull()
+      .references(() => users.id, { onDelete: "cascade" }),
+    endedAt: timestamp("ended_at", { fsp: 3 }).notNull().defaultNow(),
+  },
+  (t) => [index("ended_sessions_user").on(t.userId)],
+);
+
 export const DESIGN_MODES = ["track-for-wheel", "wheel-for-track", "partner-wheel", "twin-wheels"] as const;
 export type DesignMode = (typeof DESIGN_MODES)[number];
 

@@ -1,5 +1,6 @@
 import { QueryProvider } from "@/components/api/query-provider";
 import { AppHeader } from "@/components/app-header";
+import { SessionKeeper } from "@/components/session-keeper";
 import { requirePageUser } from "@/lib/server/dal";
 
 export default async function AppLayout({ children }: { children: React.ReactNode }) {
@@ -8,6 +9,7 @@ export default async function AppLayout({ children }: { children: React.ReactNod
   return (
     <>
       <AppHeader user={user} />
+      <SessionKeeper />
       {/* Every client call to the API goes through react-query: one client for all signed-in pages. */}
       <QueryProvider>
         <main className="mx-auto flex max-w-6xl flex-col gap-6 px-4 py-6">{children}</main>

@@ -9,6 +9,7 @@ import { db } from "@/db";
 import { findDesign, findRevision } from "@/db/queries/designs";
 import type { CurrentUser } from "@/db/queries/current-user";
 import { findReview } from "@/db/queries/reviews";
+import { isSessionEnded } from "@/db/queries/sessions";
 import { projectMembers, projects, users, type MemberRole, type UserRole } from "@/db/schema";
 import { AppError, notFoundAs } from "./errors";
 
@@ -32,8 +33,11 @@ export const getCurrentUser = cache(async (): Promise<CurrentUser | null> => {
     .where(eq(users.id, id))
     .limit(1);
   if (!user || !user.active) return null;
-  // A session issued before the password last changed has ended.
-  if (user.sessionsFrom && !((session?.user?.issuedAt ?? 0) * 1000 >= user.sessionsFrom.getTime())) return null;
+  // A session signed in before the password last changed has ended.
+  if (user.sessionsFrom && !((session?.user?.signedInAt ?? 0) * 1000 >= user.sessionsFrom.getTime())) return null;
+  // So has one signed out, even if a copy of its token comes back.
+  const sessionId = session?.user?.sessionId;
+  if (sessionId && (await isSessionEnded(sessionId))) return null;
   return { id: user.id, email: user.email, name: user.name, role: user.role };
 });
 

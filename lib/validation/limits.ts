@@ -50,3 +50,8 @@ export const PAYMENT_SERVICE_TIMEOUT_MS = 10_000;
 /** The object store: connecting, and one whole request (a photo of up to PHOTO_MAX_BYTES). */
 export const OBJECT_STORE_CONNECT_TIMEOUT_MS = 3_000;
 export const OBJECT_STORE_REQUEST_TIMEOUT_MS = 20_000;
+
+/** A session lasts this long after its last renewal, seconds (auth.config.ts). */
+export const SESSION_MAX_AGE = 12 * 60 * 60;
+/** While someone works, the browser renews the session at most this often, seconds (components/session-keeper.tsx). */
+export const SESSION_UPDATE_AGE = 15 * 60;

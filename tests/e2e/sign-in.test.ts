@@ -72,6 +72,32 @@ describe("the JSON API without a valid session", () => {
     expect(res.status).toBe(401);
   });
 
+  it("renews the session while in use, and a signed-out session stays out even with a kept copy", async () => {
+    const { context, page } = await signedIn(browser, "fabricator@example.test");
+    const sessionCookie = async () => (await context.cookies()).find((c) => c.name.endsWith("authjs.session-token"))!;
+    const first = await sessionCookie();
+    // Auth.js's renewal, as components/session-keeper.tsx asks for it while someone works.
+    await new Promise((r) => setTimeout(r, 1100));
+    const renewed = await page.request.get(`${baseUrl}/api/auth/session`);
+    expect(renewed.status()).toBe(200);
+    expect((await renewed.json()).user?.email).toBe("fabricator@example.test");
+    const second = await sessionCookie();
+    expect(second.value).not.toBe(first.value);
+    expect(second.expires).toBeGreaterThan(first.expires);
+    const kept = `${second.name}=${second.value}`;
+    expect((await fetch(`${baseUrl}/api/projects`, { headers: { cookie: kept } })).status).toBe(200);
+
+    await page.goto(`${baseUrl}/projects`);
+    await page.getByRole("button", { name: "Sign out" }).click();
+    await page.waitForURL(/\/login/);
+    // The token kept from before the sign-out: refused, and never renewed.
+    expect((await fetch(`${baseUrl}/api/projects`, { headers: { cookie: kept } })).status).toBe(401);
+    const replay = await fetch(`${baseUrl}/api/auth/session`, { headers: { cookie: kept } });
+    expect(await replay.json()).toBeNull();
+    expect((await fetch(`${baseUrl}/api/projects`, { headers: { cookie: kept } })).status).toBe(401);
+    await context.close();
+  });
+
   it("answers 200 with the real cookie, and 401 once it is tampered with", async () => {
     const { context } = await signedIn(browser, "fabricator@example.test");
     const cookie = (await context.cookies()).find((c) => c.name.endsWith("authjs.session-token"));

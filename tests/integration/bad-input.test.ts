@@ -142,6 +142,31 @@ describe("route handlers answer bad requests with one error shape", () => {
     expect((await db.select({ n: count() }).from(projects))[0].n).toBe(before);
   });
 
+  it("a streamed body with no content-length stops at the limit, without reading the rest", async () => {
+    actAs(adminId);
+    const before = (await db.select({ n: count() }).from(projects))[0].n;
+    // An endless body, 16 KiB a chunk: the handler must stop reading soon after the 64 KiB limit.
+    let pulled = 0;
+    let cancelled = false;
+    const chunk = new TextEncoder().encode("x".repeat(16 * 1024));
+    const body = new ReadableStream<Uint8Array>({
+      pull(controller) {
+        pulled += chunk.byteLength;
+        controller.enqueue(chunk);
+      },
+      cancel() {
+        cancelled = true;
+      },
+    });
+    const request = new Request("http://t/x", { method: "POST", body, duplex: "half" } as RequestInit);
+    expect(request.headers.get("content-length")).toBeNull();
+    const res = await projectsRoute.POST(request, ctx({}));
+    expect(res.status).toBe(413);
+    expect(cancelled).toBe(true);
+    expect(pulled).toBeLessThan(1024 * 1024);
+    expect((await db.select({ n: count() }).from(projects))[0].n).toBe(before);
+  });
+
   it("an over-long project name names the field", async () => {
     actAs(adminId);
     const res = await projectsRoute.POST(

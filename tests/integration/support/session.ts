@@ -4,19 +4,31 @@
 // Each test file registers the mocks with:
 //   vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
 //   vi.mock("next/cache", async () => (await import("./support/session")).mockCache);
-const state = { userId: null as number | null, issuedAt: undefined as number | undefined };
+const state = {
+  userId: null as number | null,
+  signedInAt: undefined as number | undefined,
+  sessionId: undefined as string | undefined,
+};
 
-/** Calls from now on come from this user; `issuedAt` is the session token's "iat" (seconds), default a minute ago. */
-export function actAs(userId: number | null, issuedAt?: number) {
+/**
+ * Calls from now on come from this user; `signedInAt` is when the session signed in (seconds,
+ * default a minute ago) and `sessionId` the session's own id (none by default).
+ */
+export function actAs(userId: number | null, signedInAt?: number, sessionId?: string) {
   state.userId = userId;
-  state.issuedAt = issuedAt;
+  state.signedInAt = signedInAt;
+  state.sessionId = sessionId;
 }
 
 export const mockAuth = {
   auth: async () =>
     state.userId
       ? {
-          user: { id: String(state.userId), issuedAt: state.issuedAt ?? Math.floor(Date.now() / 1000) - 60 },
+          user: {
+            id: String(state.userId),
+            signedInAt: state.signedInAt ?? Math.floor(Date.now() / 1000) - 60,
+            sessionId: state.sessionId,
+          },
           expires: "2999-01-01T00:00:00.000Z",
         }
       : null,
