@@ -14,5 +14,6 @@ export default defineConfig([
     "build/**",
     "next-env.d.ts",
     "drizzle/**",
+    "backups/**",
   ]),
 ]);

@@ -49,7 +49,12 @@ async function main() {
   onInterrupt(() => waitForStopped());
 
   const server = await startMariaDb({ dataDir: s.dataDir, port: s.dbPort, fresh: true });
-  createAppDatabase(server, { database: s.database, user: s.dbUser, password: s.dbPassword });
+  createAppDatabase(server, {
+    database: s.database,
+    user: s.dbUser,
+    password: s.dbPassword,
+    scratchPrefix: `${s.database}_scratch_`,
+  });
   tsx("scripts/db/migrate.ts", env);
   await startObjectStore(env, { fresh: true });
   tsx("scripts/db/seed.ts", env);
@@ -93,7 +98,10 @@ async function main() {
   buildApp(env, dist);
   await startApp({ ...env, NEXT_DIST_DIR: dist }, s.appPort);
   log("browser tests in Chromium…");
-  run(vitest, ["run", "--config", "vitest.e2e.config.mts", ...filterArgs], { env });
+  // The build folder too, for the tests that start a second instance (tests/e2e/support/instance.ts).
+  run(vitest, ["run", "--config", "vitest.e2e.config.mts", ...filterArgs], {
+    env: { ...env, AXLEWRIGHT_TEST_DIST_DIR: dist },
+  });
 }
 
 let exitCode = 0;

@@ -236,10 +236,16 @@ export async function startMariaDb({ dataDir, port, fresh = false }) {
   };
 }
 
-/** The application's database and user, for both loopback spellings MariaDB distinguishes. */
-export function createAppDatabase(server, { database, user, password }) {
+/**
+ * The application's database and user, for both loopback spellings MariaDB distinguishes. With
+ * `scratchPrefix` (the test stack only) the user may also make and drop databases whose names start
+ * with it (the backup test restores into one).
+ */
+export function createAppDatabase(server, { database, user, password, scratchPrefix }) {
   const q = (s) => s.replace(/[^A-Za-z0-9_]/g, "");
   const pw = password.replace(/'/g, "''");
+  // In GRANT a database name's "_" is a wildcard: escaped, then "%" for any ending.
+  const scratch = scratchPrefix ? `${q(scratchPrefix).replace(/_/g, "\\_")}%` : null;
   server.sql(
     [
       `CREATE DATABASE IF NOT EXISTS \`${q(database)}\` CHARACTER SET utf8mb4 COLLATE utf8mb4_unicode_ci;`,
@@ -247,6 +253,7 @@ export function createAppDatabase(server, { database, user, password }) {
         `CREATE USER IF NOT EXISTS '${q(user)}'@'${host}' IDENTIFIED BY '${pw}';`,
         `ALTER USER '${q(user)}'@'${host}' IDENTIFIED BY '${pw}';`,
         `GRANT ALL PRIVILEGES ON \`${q(database)}\`.* TO '${q(user)}'@'${host}';`,
+        ...(scratch ? [`GRANT ALL PRIVILEGES ON \`${scratch}\`.* TO '${q(user)}'@'${host}';`] : []),
       ]),
       "FLUSH PRIVILEGES;",
     ].join("\n"),
@@ -289,7 +296,10 @@ export async function startObjectStore(env, { fresh = false } = {}) {
   if (fresh) rmSync(env.S3_DATA_DIR, { recursive: true, force: true });
   mkdirSync(env.S3_DATA_DIR, { recursive: true });
   if (!(await portIsFree(port))) fail(`port ${port} on 127.0.0.1 is taken (the local object store wants it).`);
-  startProcess("object store", process.execPath, [path.join(root, "scripts/fakes/object-store.mjs")], {
+  // s3rver makes ListObjectsV2's continuation tokens with DES, which OpenSSL 3 keeps in its legacy
+  // provider: without it, any listing longer than one page fails with an internal error.
+  const args = ["--openssl-legacy-provider", path.join(root, "scripts/fakes/object-store.mjs")];
+  startProcess("object store", process.execPath, args, {
     env,
     onUnexpectedExit: (code) => fail(`the local object store exited (code ${code})`),
   });
