@@ -18,7 +18,7 @@
 // than any candidate, and stays unless a candidate beats it. Pure TypeScript: the page runs it in
 // its worker, the tests in Node.
 import { buildCutParts, isCutError, nestItemsFor, type CutPlanResult, type CutSettings, type RunInfo } from "@/lib/cut";
-import { jointReach, planCuts, usableSize } from "@/lib/cut/segments";
+import { planCuts, segmentCutLength, usableSize } from "@/lib/cut/segments";
 import { bounds, boxHeight, boxWidth } from "@/lib/geometry/box";
 import { placer } from "@/lib/geometry/place";
 import { ringArea } from "@/lib/geometry/ring";
@@ -254,8 +254,7 @@ function levelEstimate(m: EstimateModel, run: RunInfo, s: CutSettings, c: Segmen
   const xs = [0, ...c.cuts, run.runLength];
   const lengths: number[] = [];
   xs.slice(1).forEach((x1, i) => {
-    const last = i === xs.length - 2;
-    const l = x1 - xs[i] + (last ? 0 : jointReach(s)) + s.machine.kerf;
+    const l = segmentCutLength(xs[i], x1, i === xs.length - 2, s);
     for (let q = 0; q < m.copiesPerSegment; q++) lengths.push(l + g);
   });
   const rows: number[] = [];

@@ -9,6 +9,7 @@ import type { Box } from "@/lib/geometry/box";
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import { clipper } from "@/lib/geometry/clipper";
 import { innerFitRectangle } from "./inner-fit";
+import { boxPath, shiftPath } from "./paths";
 import type { NoFitCache } from "./no-fit-cache";
 import { EXACT_FIT_STEPS, type ShapeSet } from "./shapes";
 
@@ -31,8 +32,43 @@ export function better(a: Position, b: Position | null): boolean {
 }
 
 /**
+ * The part of `region` (reference-point positions, within `box`) where `shape` overlaps none of
+ * `placed`: the region minus the union of the placed shapes' no-fit polygons (Bennell & Oliveira
+ * 2008, §6), only those whose box meets `box` taken. Empty when nothing is left.
+ */
+function clearOf(
+  lib: ClipperLib,
+  nfps: NoFitCache,
+  shape: number,
+  placed: readonly PlacedShape[],
+  region: clipper.Paths,
+  box: Box,
+): clipper.Paths {
+  const clip: clipper.Path[] = [];
+  for (const p of placed) {
+    const nfp = nfps.get(p.shape, shape);
+    if (
+      nfp.box.minX + p.x >= box.maxX ||
+      nfp.box.maxX + p.x <= box.minX ||
+      nfp.box.minY + p.y >= box.maxY ||
+      nfp.box.maxY + p.y <= box.minY
+    )
+      continue;
+    for (const path of nfp.paths) clip.push(shiftPath(path, p.x, p.y));
+  }
+  if (!clip.length) return region;
+  return lib.clipToPaths({
+    clipType: clipper.ClipType.Difference,
+    subjectInputs: region.map((data) => ({ data, closed: true })),
+    clipInputs: [{ data: clip }],
+    subjectFillType: clipper.PolyFillType.NonZero,
+    clipFillType: clipper.PolyFillType.NonZero,
+  });
+}
+
+/**
  * Reference-point positions where `shape` overlaps none of `placed`: the inner-fit rectangle minus
- * the union of the placed shapes' no-fit polygons (Bennell & Oliveira 2008, §6). Empty when none.
+ * the union of the placed shapes' no-fit polygons. Empty when none.
  */
 export function feasibleRegion(
   lib: ClipperLib,
@@ -41,32 +77,7 @@ export function feasibleRegion(
   placed: readonly PlacedShape[],
   ifp: Box,
 ): clipper.Paths {
-  const clip: clipper.Path[] = [];
-  for (const p of placed) {
-    const nfp = nfps.get(p.shape, shape);
-    if (
-      nfp.box.minX + p.x >= ifp.maxX ||
-      nfp.box.maxX + p.x <= ifp.minX ||
-      nfp.box.minY + p.y >= ifp.maxY ||
-      nfp.box.maxY + p.y <= ifp.minY
-    )
-      continue;
-    for (const path of nfp.paths) clip.push(path.map((q) => ({ x: q.x + p.x, y: q.y + p.y })));
-  }
-  const rect: clipper.Path = [
-    { x: ifp.minX, y: ifp.minY },
-    { x: ifp.maxX, y: ifp.minY },
-    { x: ifp.maxX, y: ifp.maxY },
-    { x: ifp.minX, y: ifp.maxY },
-  ];
-  if (!clip.length) return [rect];
-  return lib.clipToPaths({
-    clipType: clipper.ClipType.Difference,
-    subjectInputs: [{ data: rect, closed: true }],
-    clipInputs: [{ data: clip }],
-    subjectFillType: clipper.PolyFillType.NonZero,
-    clipFillType: clipper.PolyFillType.NonZero,
-  });
+  return clearOf(lib, nfps, shape, placed, [boxPath(ifp)], ifp);
 }
 
 export const clamp = (v: number, lo: number, hi: number) => (lo <= hi ? Math.min(Math.max(v, lo), hi) : v);
@@ -116,29 +127,15 @@ export class Bin {
       for (let k = 0; k < holes.length; k++) {
         const fit = this.nfps.holeFit(host.shape, k, shape);
         if (!fit.box) continue;
-        const moved = fit.paths.map((path) => path.map((q) => ({ x: q.x + host.x, y: q.y + host.y })));
+        const moved = fit.paths.map((path) => shiftPath(path, host.x, host.y));
+        const movedBox = {
+          minX: fit.box.minX + host.x,
+          maxX: fit.box.maxX + host.x,
+          minY: fit.box.minY + host.y,
+          maxY: fit.box.maxY + host.y,
+        };
         const others = this.placed.filter((_, i) => i !== h);
-        const clip: clipper.Path[] = [];
-        for (const p of others) {
-          const nfp = this.nfps.get(p.shape, shape);
-          if (
-            nfp.box.minX + p.x >= fit.box.maxX + host.x ||
-            nfp.box.maxX + p.x <= fit.box.minX + host.x ||
-            nfp.box.minY + p.y >= fit.box.maxY + host.y ||
-            nfp.box.maxY + p.y <= fit.box.minY + host.y
-          )
-            continue;
-          for (const path of nfp.paths) clip.push(path.map((q) => ({ x: q.x + p.x, y: q.y + p.y })));
-        }
-        const region = clip.length
-          ? this.lib.clipToPaths({
-              clipType: clipper.ClipType.Difference,
-              subjectInputs: moved.map((data) => ({ data, closed: true })),
-              clipInputs: [{ data: clip }],
-              subjectFillType: clipper.PolyFillType.NonZero,
-              clipFillType: clipper.PolyFillType.NonZero,
-            })
-          : moved;
+        const region = clearOf(this.lib, this.nfps, shape, others, moved, movedBox);
         for (const path of region)
           for (const q of path) out.push({ x: q.x, y: q.y, k1: q.x + box.minX, k2: q.y + box.minY });
       }

@@ -14,7 +14,7 @@ import { boundsOfXY } from "@/lib/geometry/box";
 import { clipper } from "@/lib/geometry/clipper";
 import type { Pt } from "@/lib/geometry/point";
 import { simplifyRing } from "@/lib/geometry/simplify";
-import { offsetPolygon } from "./offset";
+import { boxPath, offsetPolygon, pathPerimeter } from "./paths";
 
 export interface ContainingOutline {
   path: clipper.Path;
@@ -33,16 +33,6 @@ export interface OutlineBudget {
 const toPts = (path: clipper.ReadonlyPath): Pt[] => path.map((q) => [q.x, q.y]);
 const fromPts = (pts: readonly Pt[]): clipper.Path => pts.map(([x, y]) => ({ x: Math.round(x), y: Math.round(y) }));
 
-function perimeterOf(path: clipper.ReadonlyPath): number {
-  let s = 0;
-  for (let i = 0; i < path.length; i++) {
-    const a = path[i];
-    const b = path[(i + 1) % path.length];
-    s += Math.hypot(b.x - a.x, b.y - a.y);
-  }
-  return s;
-}
-
 /** Area of `inner` outside `outer` (0 when `outer` contains it). */
 export function uncoveredArea(lib: ClipperLib, inner: clipper.ReadonlyPath, outer: clipper.ReadonlyPath): number {
   const out = lib.clipToPaths({
@@ -60,13 +50,7 @@ export function uncoveredArea(lib: ClipperLib, inner: clipper.ReadonlyPath, oute
  * lies inside its box), and a part that fits a sheet or a strip exactly still fits as its outline.
  */
 function withinBox(lib: ClipperLib, grown: clipper.Path, original: clipper.ReadonlyPath): clipper.Path | null {
-  const b = boundsOfXY(original);
-  const rect: clipper.Path = [
-    { x: b.minX, y: b.minY },
-    { x: b.maxX, y: b.minY },
-    { x: b.maxX, y: b.maxY },
-    { x: b.minX, y: b.maxY },
-  ];
+  const rect = boxPath(boundsOfXY(original));
   const out = lib.clipToPaths({
     clipType: clipper.ClipType.Intersection,
     subjectInputs: [{ data: grown, closed: true }],
@@ -103,7 +87,7 @@ export function containingOutline(
 ): ContainingOutline {
   const original: ContainingOutline = { path: path.slice(), extra: 0, epsilon: 0 };
   if (path.length <= 8) return original;
-  const perimeter = perimeterOf(path);
+  const perimeter = pathPerimeter(path);
   const capped = budget.maxVertices !== undefined && path.length > budget.maxVertices;
   if (capped) {
     // Double ε until the vertex cap holds: the coarse fallback when a fine outline is too costly.

@@ -3,11 +3,12 @@
 // inner-fit polygon, here of a polygonal container): the ring between H and a frame around it is
 // cut into convex pieces (convex-parts.ts), each summed with −B's pieces, and their union taken from
 // the inner-fit rectangle of H's box.
-import { boundsOfXY } from "@/lib/geometry/box";
+import { boundsOfXY, inflate } from "@/lib/geometry/box";
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import { clipper } from "@/lib/geometry/clipper";
 import { convexParts, convexSum } from "./convex-parts";
 import { reflect } from "./minkowski";
+import { boxPath } from "./paths";
 
 /**
  * Reference-point positions of `moving` (counter-clockwise, at its own origin) that keep it inside
@@ -21,22 +22,12 @@ export function holeFit(lib: ClipperLib, hole: clipper.ReadonlyPath, moving: cli
   if (ifr.minX >= ifr.maxX || ifr.minY >= ifr.maxY) return [];
   // A frame wide enough that B, anywhere in that rectangle, never reaches past it.
   const pad = Math.max(m.maxX - m.minX, m.maxY - m.minY) + 2;
-  const frame: clipper.Path = [
-    { x: h.minX - pad, y: h.minY - pad },
-    { x: h.maxX + pad, y: h.minY - pad },
-    { x: h.maxX + pad, y: h.maxY + pad },
-    { x: h.minX - pad, y: h.maxY + pad },
-  ];
+  const frame = boxPath(inflate(h, pad));
   const outside = convexParts(frame, [hole]);
   const minus = convexParts(moving).map(reflect);
   const blocked: clipper.Path[] = [];
   for (const a of outside) for (const b of minus) blocked.push(convexSum(a, b));
-  const rect: clipper.Path = [
-    { x: ifr.minX, y: ifr.minY },
-    { x: ifr.maxX, y: ifr.minY },
-    { x: ifr.maxX, y: ifr.maxY },
-    { x: ifr.minX, y: ifr.maxY },
-  ];
+  const rect = boxPath(ifr);
   return lib.clipToPaths({
     clipType: clipper.ClipType.Difference,
     subjectInputs: [{ data: rect, closed: true }],

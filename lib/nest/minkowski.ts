@@ -11,9 +11,7 @@
 import type { ClipperLib } from "@/lib/geometry/clipper";
 import { clipper } from "@/lib/geometry/clipper";
 import { convexParts, convexSum } from "./convex-parts";
-
-const shift = (path: clipper.ReadonlyPath, dx: number, dy: number): clipper.Path =>
-  path.map((p) => ({ x: p.x + dx, y: p.y + dy }));
+import { shiftPath } from "./paths";
 
 /** Convex pieces of each path, computed once per path object. */
 const piecesOf = new WeakMap<clipper.ReadonlyPath, clipper.IntPoint[][]>();
@@ -68,7 +66,7 @@ function overlapArea(
   const out = lib.clipToPaths({
     clipType: clipper.ClipType.Intersection,
     subjectInputs: [{ data: fixed, closed: true }],
-    clipInputs: [{ data: shift(moving, dx, dy) }],
+    clipInputs: [{ data: shiftPath(moving, dx, dy) }],
     subjectFillType: clipper.PolyFillType.NonZero,
   });
   return out.reduce((s, p) => s + Math.abs(lib.area(p)), 0);

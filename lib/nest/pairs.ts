@@ -30,6 +30,7 @@ import { placeRing, placer, rotateRing, type Pose } from "@/lib/geometry/place";
 import type { Pt } from "@/lib/geometry/point";
 import { normaliseRing, ringArea, type Ring } from "@/lib/geometry/ring";
 import { noFitPolygon } from "./minkowski";
+import { offsetPaths, offsetPolygon, pathPerimeter, shiftPath } from "./paths";
 import { scaleForExtent } from "./scale";
 import type { NestItem, Placement } from "./types";
 
@@ -75,39 +76,6 @@ export interface Pairing {
   candidates: number;
 }
 
-/** Offset of closed integer paths (their union), mitred joins with limit 2 (as in lib/nest/shapes.ts). */
-function offsetPaths(lib: ClipperLib, paths: clipper.ReadonlyPath[], delta: number): clipper.Paths {
-  if (delta === 0) return paths.map((p) => p.slice());
-  return (
-    lib.offsetToPaths({
-      delta,
-      offsetInputs: paths.map((data) => ({
-        data,
-        joinType: clipper.JoinType.Miter,
-        endType: clipper.EndType.ClosedPolygon,
-      })),
-      miterLimit: 2,
-    }) ?? []
-  );
-}
-
-/** The outer ring of largest area. */
-function largestOuter(lib: ClipperLib, paths: clipper.Paths): clipper.Path | undefined {
-  let best: clipper.Path | undefined;
-  let bestArea = 0;
-  for (const p of paths) {
-    const a = lib.area(p);
-    if (a > bestArea) [best, bestArea] = [p, a];
-  }
-  return best;
-}
-
-function offsetOne(lib: ClipperLib, path: clipper.ReadonlyPath, delta: number): clipper.Path {
-  const out = largestOuter(lib, offsetPaths(lib, [path], delta));
-  if (!out) throw new Error("bestPairing: the offset removed the whole polygon");
-  return out;
-}
-
 const outers = (lib: ClipperLib, paths: clipper.Paths) => paths.filter((p) => lib.area(p) > 0);
 const netArea = (lib: ClipperLib, paths: clipper.Paths) => paths.reduce((s, p) => s + lib.area(p), 0);
 
@@ -125,9 +93,6 @@ function clip(
     clipFillType: clipper.PolyFillType.NonZero,
   });
 }
-
-const shiftPath = (path: clipper.ReadonlyPath, dx: number, dy: number): clipper.Path =>
-  path.map((p) => ({ x: p.x + dx, y: p.y + dy }));
 
 /** Area of the bounding box of boxes a and (b + t). */
 function jointArea(a: Box, b: Box, tx: number, ty: number): number {
@@ -176,11 +141,11 @@ export function bestPairing(lib: ClipperLib, ring: Ring, spacing: number, option
   const pub = toPath(usedB, scale);
   if (options.simplified) {
     const outside = netArea(lib, clip(lib, clipper.ClipType.Difference, [pa], [pu]));
-    if (outside > 2 * perimeterSteps(pa)) throw new Error("bestPairing: the simplified ring does not contain the part");
+    if (outside > 2 * pathPerimeter(pa)) throw new Error("bestPairing: the simplified ring does not contain the part");
   }
 
   // NFP of B (inflated) orbiting A (inflated): its boundary is where they touch.
-  const nfp = noFitPolygon(lib, offsetOne(lib, pu, half), offsetOne(lib, pub, half));
+  const nfp = noFitPolygon(lib, offsetPolygon(lib, pu, half), offsetPolygon(lib, pub, half));
   if (nfp.length === 0) throw new Error("bestPairing: empty no-fit polygon");
 
   const boxA = bounds(a);
@@ -224,8 +189,8 @@ export function bestPairing(lib: ClipperLib, ring: Ring, spacing: number, option
     clip(
       lib,
       clipper.ClipType.Intersection,
-      [offsetOne(lib, pa, inner)],
-      [shiftPath(offsetOne(lib, pb, inner), tStep.x, tStep.y)],
+      [offsetPolygon(lib, pa, inner)],
+      [shiftPath(offsetPolygon(lib, pb, inner), tStep.x, tStep.y)],
     ),
   );
   if (overlap > 0) throw new Error("bestPairing: the paired parts come nearer than the spacing");
@@ -234,7 +199,7 @@ export function bestPairing(lib: ClipperLib, ring: Ring, spacing: number, option
   // Check: the outline holds both parts.
   const parts = [pa, shiftPath(pb, tStep.x, tStep.y)];
   const outside = netArea(lib, clip(lib, clipper.ClipType.Difference, parts, [outline]));
-  if (outside > 2 * (perimeterSteps(parts[0]) + perimeterSteps(parts[1])))
+  if (outside > 2 * (pathPerimeter(parts[0]) + pathPerimeter(parts[1])))
     throw new Error("bestPairing: the pair outline does not contain both parts");
 
   const box: Box = {
@@ -262,15 +227,6 @@ export function bestPairing(lib: ClipperLib, ring: Ring, spacing: number, option
     partArea: 2 * ringArea(a),
     candidates,
   };
-}
-
-function perimeterSteps(path: clipper.ReadonlyPath): number {
-  let s = 0;
-  for (let i = 0; i < path.length; i++) {
-    const q = path[(i + 1) % path.length];
-    s += Math.hypot(q.x - path[i].x, q.y - path[i].y);
-  }
-  return s;
 }
 
 /**

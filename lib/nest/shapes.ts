@@ -13,7 +13,7 @@ import { clipper, toPath } from "@/lib/geometry/clipper";
 import { rotateRing } from "@/lib/geometry/place";
 import { ringArea } from "@/lib/geometry/ring";
 import { containingOutline } from "./containing-outline";
-import { offsetPolygon } from "./offset";
+import { offsetPolygon } from "./paths";
 import type { NestItem, OutlineReport } from "./types";
 
 export const EXACT_FIT_STEPS = 1;

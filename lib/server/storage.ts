@@ -2,28 +2,14 @@ import "server-only";
 // Object storage through @aws-sdk/client-s3: the local fake (scripts/fakes/object-store.mjs) in
 // development and tests, a hosted S3-compatible store in production (same variables). The bucket is
 // private: objects are only ever served through routes that check who is asking.
-import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
-import { OBJECT_STORE_CONNECT_TIMEOUT_MS, OBJECT_STORE_REQUEST_TIMEOUT_MS } from "@/lib/validation/limits";
+import { DeleteObjectCommand, GetObjectCommand, PutObjectCommand, type S3Client } from "@aws-sdk/client-s3";
+import { objectStoreClient } from "@/lib/storage/object-store-client";
 import { AppError } from "./errors";
 
 let client: S3Client | undefined;
 
 function s3(): S3Client {
-  client ??= new S3Client({
-    endpoint: process.env.S3_ENDPOINT,
-    region: process.env.S3_REGION ?? "us-east-1",
-    forcePathStyle: true,
-    credentials: {
-      accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "",
-      secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "",
-    },
-    // A store that does not answer is a clear failure after a short wait, not a hung upload.
-    maxAttempts: 2,
-    requestHandler: {
-      connectionTimeout: OBJECT_STORE_CONNECT_TIMEOUT_MS,
-      requestTimeout: OBJECT_STORE_REQUEST_TIMEOUT_MS,
-    },
-  });
+  client ??= objectStoreClient();
   return client;
 }
 

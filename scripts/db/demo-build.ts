@@ -5,7 +5,7 @@
 // upload (lib/photos/prepare.ts), and stored in the object store like any other. Idempotent: the
 // revision's plan and the log's photos are looked up first.
 import { randomUUID } from "node:crypto";
-import { PutObjectCommand, S3Client } from "@aws-sdk/client-s3";
+import { PutObjectCommand } from "@aws-sdk/client-s3";
 import { and, eq } from "drizzle-orm";
 import type { MySql2Database } from "drizzle-orm/mysql2";
 import sharp from "sharp";
@@ -16,6 +16,7 @@ import { cutPlanName } from "../../lib/cut-plan/name";
 import { summariseCutPlan } from "../../lib/cut-plan/summary";
 import { approvalReference } from "../../lib/review/reference";
 import { PHOTO_EXTENSION, preparePhoto } from "../../lib/photos/prepare";
+import { objectStoreClient } from "../../lib/storage/object-store-client";
 import { solve } from "../../lib/track";
 
 type Db = MySql2Database<typeof schema>;
@@ -30,17 +31,7 @@ export interface DemoBuild {
   log: { by: string; kind: schema.LogKind; text: string; parts: string[]; at: string; photo?: string }[];
 }
 
-function store(): S3Client {
-  return new S3Client({
-    endpoint: process.env.S3_ENDPOINT,
-    region: process.env.S3_REGION ?? "us-east-1",
-    forcePathStyle: true,
-    credentials: {
-      accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "",
-      secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "",
-    },
-  });
-}
+const store = () => objectStoreClient();
 
 /** An invented "site photo": a drawing of the scene it names, with the demo's caption. */
 function demoPicture(caption: string): string {

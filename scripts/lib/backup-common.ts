@@ -8,10 +8,10 @@ import { createHash } from "node:crypto";
 import { existsSync } from "node:fs";
 import path from "node:path";
 import { fileURLToPath } from "node:url";
-import { HeadBucketCommand, S3Client } from "@aws-sdk/client-s3";
+import { HeadBucketCommand, type S3Client } from "@aws-sdk/client-s3";
 import mysql from "mysql2/promise";
 import { z } from "zod";
-import { OBJECT_STORE_CONNECT_TIMEOUT_MS, OBJECT_STORE_REQUEST_TIMEOUT_MS } from "../../lib/validation/limits";
+import { objectStoreClient } from "../../lib/storage/object-store-client";
 import { demoSettings } from "./env.mjs";
 
 export const root = path.resolve(path.dirname(fileURLToPath(import.meta.url)), "../..");
@@ -101,17 +101,7 @@ export async function connect(t: Target, database?: string): Promise<mysql.Conne
 export function objectStore(t: Target): S3Client {
   // The SDK's notice about Node 20 (which package.json's engines allow) would break the one-line output.
   process.env.AWS_SDK_JS_NODE_VERSION_SUPPORT_WARNING_DISABLED ??= "true";
-  return new S3Client({
-    endpoint: t.store.endpoint,
-    region: t.store.region,
-    forcePathStyle: true,
-    credentials: { accessKeyId: t.store.accessKeyId, secretAccessKey: t.store.secretAccessKey },
-    maxAttempts: 2,
-    requestHandler: {
-      connectionTimeout: OBJECT_STORE_CONNECT_TIMEOUT_MS,
-      requestTimeout: OBJECT_STORE_REQUEST_TIMEOUT_MS,
-    },
-  });
+  return objectStoreClient(t.store);
 }
 
 /** Whether the bucket exists; a store that does not answer is a Failure naming its address. */

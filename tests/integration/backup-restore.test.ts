@@ -19,8 +19,8 @@ import {
   HeadBucketCommand,
   ListObjectsV2Command,
   PutObjectCommand,
-  S3Client,
 } from "@aws-sdk/client-s3";
+import { objectStoreClient } from "@/lib/storage/object-store-client";
 import type { RowDataPacket } from "mysql2/promise";
 import { afterAll, beforeAll, describe, expect, it } from "vitest";
 import { pool } from "@/db";
@@ -35,15 +35,7 @@ const TARGET_BUCKET = scratchBucket("restored");
 // The four triggers of drizzle/0001_designs_revisions.sql and drizzle/0003_reviews_sign_offs.sql.
 const TRIGGERS = ["revisions_no_delete", "revisions_no_update", "sign_offs_no_delete", "sign_offs_no_update"];
 
-const s3 = new S3Client({
-  endpoint: process.env.S3_ENDPOINT,
-  region: "us-east-1",
-  forcePathStyle: true,
-  credentials: {
-    accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "",
-    secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "",
-  },
-});
+const s3 = objectStoreClient();
 
 const temps: string[] = [];
 const temp = () => {

@@ -7,7 +7,8 @@ import { execFileSync } from "node:child_process";
 import { mkdtempSync, writeFileSync } from "node:fs";
 import { tmpdir } from "node:os";
 import { join } from "node:path";
-import { ListObjectsV2Command, S3Client } from "@aws-sdk/client-s3";
+import { ListObjectsV2Command } from "@aws-sdk/client-s3";
+import { objectStoreClient } from "@/lib/storage/object-store-client";
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import { count, eq } from "drizzle-orm";
 import sharp from "sharp";
@@ -37,15 +38,7 @@ let projectId = 0;
 let planId = 0;
 let planParts: string[] = [];
 let reference = "";
-const s3 = new S3Client({
-  endpoint: process.env.S3_ENDPOINT,
-  region: "us-east-1",
-  forcePathStyle: true,
-  credentials: {
-    accessKeyId: process.env.S3_ACCESS_KEY_ID ?? "",
-    secretAccessKey: process.env.S3_SECRET_ACCESS_KEY ?? "",
-  },
-});
+const s3 = objectStoreClient();
 
 const ctx = <P>(params: P) => ({ params: Promise.resolve(params) });
 const json = (method: string, body?: unknown) =>

@@ -10,25 +10,15 @@ import * as previewRoute from "@/app/api/revisions/[id]/preview/route";
 import { db, pool } from "@/db";
 import { revisions } from "@/db/schema";
 import { canonicalJson, specHash } from "@/lib/track";
-import { auditCount, makeProject, makeUser } from "./support/fixtures";
+import { CALLERS, makeCallers, projectManage, projectView, type Caller, type CallerIds } from "./support/callers";
+import { auditCount } from "./support/fixtures";
 import { actAs } from "./support/session";
 
 vi.mock("@/auth", async () => (await import("./support/session")).mockAuth);
 
 const SQUARE = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 4, side: 400 } };
 
-const CALLERS = [
-  "anonymous",
-  "admin",
-  "fabricator member",
-  "fabricator non-member",
-  "client member",
-  "client non-member",
-  "installer member",
-  "installer non-member",
-] as const;
-type Caller = (typeof CALLERS)[number];
-const ids = {} as Record<Exclude<Caller, "anonymous">, number>;
+let ids: CallerIds;
 let projectId = 0;
 let designId = 0;
 let revisionId = 0;
@@ -38,16 +28,7 @@ const req = (method: string, body?: unknown) =>
   new Request("http://t/api", { method, body: body === undefined ? undefined : JSON.stringify(body) });
 
 beforeAll(async () => {
-  ids.admin = (await makeUser("admin")).id;
-  for (const role of ["fabricator", "client", "installer"] as const) {
-    ids[`${role} member`] = (await makeUser(role, `${role}-member`)).id;
-    ids[`${role} non-member`] = (await makeUser(role, `${role}-outsider`)).id;
-  }
-  projectId = await makeProject("Design project", [
-    { userId: ids["fabricator member"], role: "fabricator" },
-    { userId: ids["client member"], role: "client" },
-    { userId: ids["installer member"], role: "installer" },
-  ]);
+  ({ ids, projectId } = await makeCallers("designs"));
   actAs(ids["fabricator member"]);
   const res = await designsRoute.POST(
     req("POST", { name: "Trike track", spec: SQUARE }),
@@ -62,26 +43,8 @@ afterAll(async () => {
   await pool.end();
 });
 
-const view: Record<Caller, number> = {
-  anonymous: 401,
-  admin: 200,
-  "fabricator member": 200,
-  "fabricator non-member": 404,
-  "client member": 200,
-  "client non-member": 404,
-  "installer member": 200,
-  "installer non-member": 404,
-};
-const edit = (ok: number): Record<Caller, number> => ({
-  anonymous: 401,
-  admin: ok,
-  "fabricator member": ok,
-  "fabricator non-member": 404,
-  "client member": 403,
-  "client non-member": 404,
-  "installer member": 403,
-  "installer non-member": 404,
-});
+const view = projectView(200);
+const edit = projectManage;
 const immutable: Record<Caller, number> = {
   ...view,
   admin: 409,
