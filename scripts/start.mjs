@@ -19,6 +19,7 @@ import {
   tsx,
   waitForStopped,
 } from "./lib/services.mjs";
+import { buildWorker } from "./build-worker.mjs";
 
 // `npm start -- --dev` serves with `next dev` (rebuilds on change) instead of a production build.
 const dev = process.argv.includes("--dev");
@@ -39,8 +40,11 @@ async function main() {
   tsx("scripts/db/seed.ts", s.env);
   await startMailSink(s.env);
   await startPaymentService(s.env);
-  if (dev) await startApp({ ...s.env, NEXT_DIST_DIR: ".next-dev" }, s.appPort, { dev: true });
-  else {
+  if (dev) {
+    await startApp({ ...s.env, NEXT_DIST_DIR: ".next-dev" }, s.appPort, { dev: true });
+    // The worker threads' bundle, rebuilt on every change while next dev runs (after it has set up .next-dev).
+    await buildWorker(".next-dev", { watch: true });
+  } else {
     buildApp(s.env, ".next");
     await startApp(s.env, s.appPort);
   }

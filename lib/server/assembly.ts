@@ -2,12 +2,15 @@ import "server-only";
 // The installer's assembly sheet on the server: who may open it (every member of the project —
 // unlike the cut files, which are the shop's), and its content from the stored cut plan.
 import { getProjectSummary, projectShop } from "@/db/queries/projects";
-import { buildAssemblySheet } from "@/lib/assembly/build";
-import type { AssemblySheet } from "@/lib/assembly/sheet";
+import type { Paper } from "@/lib/assembly/sheet";
 import type { CutPlanRow } from "@/db/queries/cut-plans";
-import { jobForPlan, requireStoredPlan } from "./cut-plans";
+import { RENDER_DEADLINE_MS } from "@/lib/validation/limits";
+import { jobContext, requireStoredPlan } from "./cut-plans";
 import { requireRevisionAccess, requireUser } from "./dal";
 import { AppError, notFoundAs } from "./errors";
+import { runTask } from "./pool";
+
+type SheetAccess = Awaited<ReturnType<typeof requireSheetAccess>>;
 
 /** The plan and the caller's access to its project: any member; 404 for the rest, as if it did not exist. */
 export async function requireSheetAccess(cutPlanId: number) {
@@ -28,29 +31,48 @@ export function bumpLimitParam(raw: string | null | undefined): number | undefin
   return v;
 }
 
-export async function assemblySheetFor(
-  plan: CutPlanRow,
-  access: Awaited<ReturnType<typeof requireSheetAccess>>,
-  opts: { inches?: boolean; bumpLimit?: number } = {},
-): Promise<AssemblySheet> {
-  const [job, project, shop] = await Promise.all([
-    jobForPlan(plan, access.revision, access.designName),
+export interface SheetOptions {
+  inches?: boolean;
+  bumpLimit?: number;
+}
+
+async function sheetInput(plan: CutPlanRow, access: SheetAccess, opts: SheetOptions) {
+  const [ctx, project, shop] = await Promise.all([
+    jobContext(plan, access.revision, access.designName),
     getProjectSummary(access.projectId),
     projectShop(access.projectId),
   ]);
-  return buildAssemblySheet({
-    job,
-    cutPlanId: plan.id,
-    cutPlanNumber: plan.number,
-    project: {
-      name: project?.name ?? "Project",
-      site: project?.site ?? "",
-      client: project?.clientOrganisation ?? null,
+  return {
+    ctx,
+    sheet: {
+      cutPlanId: plan.id,
+      cutPlanNumber: plan.number,
+      project: {
+        name: project?.name ?? "Project",
+        site: project?.site ?? "",
+        client: project?.clientOrganisation ?? null,
+      },
+      approval: ctx.approval,
+      shop,
+      date: new Date().toISOString(),
+      inches: opts.inches,
+      bumpLimit: opts.bumpLimit,
     },
-    approval: job.approval ?? null,
-    shop,
-    date: new Date(),
-    inches: opts.inches,
-    bumpLimit: opts.bumpLimit,
-  });
+  };
+}
+
+/** The sheet's content (the page draws it), made on the worker pool: its tolerance search is the slow part. */
+export async function assemblySheetFor(plan: CutPlanRow, access: SheetAccess, opts: SheetOptions = {}) {
+  return runTask("assemblySheet", await sheetInput(plan, access, opts), { deadlineMs: RENDER_DEADLINE_MS });
+}
+
+/** The sheet as a PDF on the chosen paper, made on the worker pool. */
+export async function assemblySheetPdfFor(
+  plan: CutPlanRow,
+  access: SheetAccess,
+  opts: SheetOptions & { paper: Paper },
+  signal?: AbortSignal,
+) {
+  const input = { ...(await sheetInput(plan, access, opts)), paper: opts.paper };
+  return runTask("assemblyPdf", input, { deadlineMs: RENDER_DEADLINE_MS, signal });
 }

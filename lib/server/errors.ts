@@ -8,6 +8,7 @@ import { CutError } from "@/lib/cut/errors";
 import { ImportFailure } from "@/lib/outline-import/common";
 import { NotBracketedError } from "@/lib/track/brent";
 import { EngineError } from "@/lib/track/errors";
+import { BUSY_RETRY_AFTER_S } from "@/lib/validation/limits";
 
 export type ErrorKind =
   | "bad_request"
@@ -22,6 +23,7 @@ export type ErrorKind =
   | "too_many"
   | "timeout"
   | "unavailable"
+  | "busy"
   | "internal";
 
 const STATUS: Record<ErrorKind, number> = {
@@ -37,6 +39,7 @@ const STATUS: Record<ErrorKind, number> = {
   too_many: 429,
   timeout: 408,
   unavailable: 503,
+  busy: 503,
   internal: 500,
 };
 
@@ -53,6 +56,7 @@ const DEFAULT_MESSAGE: Record<ErrorKind, string> = {
   too_many: "Too many requests; please wait and try again.",
   timeout: "The work took too long and was stopped.",
   unavailable: "A service the app needs did not answer. Nothing was changed.",
+  busy: "The server is busy with other people's work. Nothing was changed; please try again in a few seconds.",
   internal: "Something went wrong on our side. Nothing was changed.",
 };
 
@@ -78,6 +82,11 @@ export class AppError extends Error {
 
   get status(): number {
     return STATUS[this.kind];
+  }
+
+  /** Headers the answer carries: Retry-After when the server is busy (RFC 9110 §10.2.3). */
+  get headers(): Record<string, string> {
+    return this.kind === "busy" ? { "retry-after": String(BUSY_RETRY_AFTER_S) } : {};
   }
 
   toBody(): ErrorBody {

@@ -2,19 +2,18 @@ import "server-only";
 // Ticks on the assembly sheet: a part or a joint of the cut plan, installed (or not after all),
 // each written to the build log with the part ids it concerns.
 import { installState, insertTick } from "@/db/queries/build-log";
-import { jobForPlan } from "./cut-plans";
+import { SERVER_SOLVE_DEADLINE_MS } from "@/lib/validation/limits";
+import { jobContext } from "./cut-plans";
 import type { requireSheetAccess } from "./assembly";
 import { AppError } from "./errors";
+import { runTask } from "./pool";
 
 type SheetAccess = Awaited<ReturnType<typeof requireSheetAccess>>;
 
 /** What can be ticked on the plan's sheet: every part id, then every joint ("T01/T02"). */
 export async function tickItems(access: SheetAccess): Promise<string[]> {
-  const job = await jobForPlan(access.plan, access.revision, access.designName);
-  const joints = job.plan.run
-    ? job.plan.run.cuts.map((_, i) => `${job.plan.run!.segments[i].id}/${job.plan.run!.segments[i + 1].id}`)
-    : [];
-  return [...job.plan.parts.map((p) => p.id), ...joints];
+  const ctx = await jobContext(access.plan, access.revision, access.designName);
+  return runTask("tickItems", ctx, { deadlineMs: SERVER_SOLVE_DEADLINE_MS });
 }
 
 export async function ticksOf(access: SheetAccess) {

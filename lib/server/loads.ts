@@ -3,9 +3,10 @@ import "server-only";
 // the cut-plan page, the job README and the assembly sheet): the revision's own load settings (or the
 // library's defaults), the library's treads, and what a stored cut plan fixes about the track.
 import { listShopLibrary } from "@/db/queries/shop";
-import { checkLoads, type LoadsReport } from "@/lib/loads";
-import { loadsInputFor, settingsOrDefault, type CutFacts, type LibraryMaterial } from "@/lib/loads/settings";
-import type { SolveResult } from "@/lib/track";
+import type { LoadsReport } from "@/lib/loads";
+import type { CutFacts, LibraryMaterial } from "@/lib/loads/settings";
+import { SERVER_SOLVE_DEADLINE_MS } from "@/lib/validation/limits";
+import { runTask } from "./pool";
 
 export interface ServerLoads {
   report: LoadsReport;
@@ -17,13 +18,11 @@ export async function libraryMaterials(): Promise<LibraryMaterial[]> {
   return (await listShopLibrary({ activeOnly: true })).materials;
 }
 
-/** The check of a solved revision; `cut` when a stored cut plan fixes the board and the spans. */
+/** The check of a revision (solved on the worker pool); `cut` when a stored cut plan fixes the board and the spans. */
 export async function loadsForRevision(
   revision: { spec: unknown; loads?: unknown },
-  result: SolveResult,
   cut?: CutFacts,
 ): Promise<ServerLoads> {
-  const library = await libraryMaterials();
-  const { settings, stored } = settingsOrDefault(revision.loads ?? null, library);
-  return { report: checkLoads(loadsInputFor(revision.spec, settings, library, cut), result), stored };
+  const input = { spec: revision.spec, revisionLoads: revision.loads ?? null, library: await libraryMaterials(), cut };
+  return runTask("revisionLoads", input, { deadlineMs: SERVER_SOLVE_DEADLINE_MS });
 }

@@ -21,7 +21,6 @@ import {
 import type { EndTreatment, Revision } from "@/db/schema";
 import { parseCutSettings } from "@/lib/cut/settings";
 import { buildRun, hasTrack } from "@/lib/cut/run-length";
-import { animatedPreview } from "@/lib/drawing/animated-preview";
 import { formatMoney, toMinor } from "@/lib/money/currency";
 import { approvalReference } from "@/lib/review/reference";
 import { reviewStatus, showsRun } from "@/lib/review/review-state";
@@ -30,6 +29,8 @@ import type { Decision, NewReview } from "@/lib/validation/reviews";
 import { reviewDecidedMail, reviewRequestMail } from "./review-mail";
 import type { CurrentUser, ProjectAccess } from "./dal";
 import { solveStored } from "./designs";
+import { runTask } from "./pool";
+import { SERVER_SOLVE_DEADLINE_MS } from "@/lib/validation/limits";
 import { AppError, toAppError } from "./errors";
 import { sendMail } from "./mail";
 import { appUrl, clientAddress, userAgent } from "./request";
@@ -80,7 +81,7 @@ export async function requestReview(
       "unprocessable",
       "This project has no client member to review it: add the client to the project first.",
     );
-  const result = solveStored(revision.spec);
+  const result = await solveStored(revision.spec);
   const run = await chooseRun(revision, input, result);
   let deposit: { amountMinor: number; currency: string } | null = null;
   if (input.deposit) {
@@ -102,10 +103,18 @@ export async function requestReview(
   });
   const project = await getProjectSummary(projectId);
   // The picture is made once and attached to every client's message: the same engine result the review page rolls.
-  const preview = await animatedPreview(result).catch((error: unknown) => {
-    console.error("[axlewright] review preview not made:", error instanceof Error ? error.message : error);
-    return null;
-  });
+  const preview = await runTask(
+    "animatedPreview",
+    { spec: revision.spec },
+    { deadlineMs: SERVER_SOLVE_DEADLINE_MS },
+  ).then(
+    // A Buffer comes back from the thread as a plain Uint8Array; the mailer wants a Buffer.
+    (p) => ({ ...p, data: Buffer.from(p.data) }),
+    (error: unknown) => {
+      console.error("[axlewright] review preview not made:", error instanceof Error ? error.message : error);
+      return null;
+    },
+  );
   let mailed = 0;
   for (const client of clients) {
     const mail = reviewRequestMail({

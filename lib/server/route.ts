@@ -18,7 +18,7 @@ export function route<P extends Params = Params>(handler: Handler<P>) {
       return NextResponse.json(result ?? null);
     } catch (error) {
       const appError = toAppError(error);
-      return NextResponse.json(appError.toBody(), { status: appError.status });
+      return NextResponse.json(appError.toBody(), { status: appError.status, headers: appError.headers });
     }
   };
 }

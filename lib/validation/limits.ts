@@ -55,3 +55,19 @@ export const OBJECT_STORE_REQUEST_TIMEOUT_MS = 20_000;
 export const SESSION_MAX_AGE = 12 * 60 * 60;
 /** While someone works, the browser renews the session at most this often, seconds (components/session-keeper.tsx). */
 export const SESSION_UPDATE_AGE = 15 * 60;
+
+// The worker-thread pool that runs the server's solves and renders (lib/server/pool.ts). Each can be
+// set per instance in the environment (README, Deployment).
+
+/** Threads: AXLEWRIGHT_POOL_THREADS, else one per core. Waiting tasks per thread: AXLEWRIGHT_POOL_QUEUE_PER_THREAD. */
+export const POOL_QUEUE_PER_THREAD = 8;
+/** A full queue answers 503 with this Retry-After, seconds. */
+export const BUSY_RETRY_AFTER_S = 2;
+/** Past its deadline a task gets this long to stop by itself before its thread is ended, ms. */
+export const POOL_GRACE_MS = 1_000;
+/** A render or file build without a deadline of its own (a PDF, a ZIP), ms. */
+export const RENDER_DEADLINE_MS = 30_000;
+/** Solve results kept on the main thread, bytes (AXLEWRIGHT_SOLVE_CACHE_MB). */
+export const SOLVE_CACHE_BYTES = 64 * 1024 * 1024;
+/** Solves and built cut jobs kept on each worker thread, bytes. */
+export const WORKER_CACHE_BYTES = 64 * 1024 * 1024;

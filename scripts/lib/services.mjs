@@ -343,12 +343,14 @@ export function buildApp(env, distDir) {
   ];
   if (existsSync(buildId) && statSync(buildId).mtimeMs > newestMtime(sources)) {
     log(`the build in ${distDir} is up to date`);
-    return;
+  } else {
+    log(`building the app (next build → ${distDir})…`);
+    run(path.join(root, "node_modules/.bin/next"), ["build"], {
+      env: { ...env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: "1" },
+    });
   }
-  log(`building the app (next build → ${distDir})…`);
-  run(path.join(root, "node_modules/.bin/next"), ["build"], {
-    env: { ...env, NEXT_DIST_DIR: distDir, NEXT_TELEMETRY_DISABLED: "1" },
-  });
+  // The worker threads' bundle (a second or two): after next build, which empties distDir.
+  run(process.execPath, [path.join(root, "scripts/build-worker.mjs"), distDir], { env });
 }
 
 export async function startApp(env, port, { dev = false } = {}) {

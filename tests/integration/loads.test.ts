@@ -10,7 +10,6 @@ import { db, pool } from "@/db";
 import { revisions } from "@/db/schema";
 import { checkLoads } from "@/lib/loads";
 import { loadsForRevision } from "@/lib/server/loads";
-import { solve } from "@/lib/track";
 import { loadsInputSchema } from "@/lib/validation/loads";
 import { makeProject, makeUser } from "./support/fixtures";
 import { actAs } from "./support/session";
@@ -94,7 +93,7 @@ describe("load settings", () => {
     const { revision } = await (await revisionRoute.GET(req("GET"), ctx({ id: String(saved.revision.id) }))).json();
     expect(revision.loads).toMatchObject({ use: "ride-on", clearancesMm: { "wheel to fork": 12 } });
     const [row] = await db.select().from(revisions).where(eq(revisions.id, saved.revision.id));
-    const server = await loadsForRevision(row, solve(row.spec));
+    const server = await loadsForRevision(row);
     expect(server.stored).toBe(true);
     // The same figures as the module run here on the same input (the library's treads only feed the helper).
     const here = checkLoads(loadsInputSchema.parse({ ...RIDE, spec: SQUARE }));

@@ -1,8 +1,10 @@
 // POST /api/solve: the engine behind a size limit and a time limit, with the engine's own words
-// for bad specs.
+// for bad specs, on the worker pool, with results kept by spec.
 import { afterAll, beforeAll, describe, expect, it, vi } from "vitest";
 import * as solveRoute from "@/app/api/solve/route";
 import { pool } from "@/db";
+import { solveCacheStats } from "@/lib/server/designs";
+import { closePool } from "@/lib/server/pool";
 import { makeUser } from "./support/fixtures";
 import { actAs } from "./support/session";
 
@@ -16,6 +18,7 @@ beforeAll(async () => {
 });
 afterAll(async () => {
   await pool.end();
+  await closePool();
 });
 
 describe("POST /api/solve", () => {
@@ -42,6 +45,21 @@ describe("POST /api/solve", () => {
   it("refuses a spec that is not a spec", async () => {
     const res = await post(JSON.stringify({ mode: "fly" }));
     expect(res.status).toBe(400);
+  });
+
+  it("answers the same spec again from the cache, and a changed one afresh", async () => {
+    const spec = { mode: "track-for-wheel", units: "mm", wheel: { kind: "polygon", sides: 6, inradius: 123 } };
+    const first = await (await post(JSON.stringify(spec))).json();
+    const before = solveCacheStats();
+    // The same spec with its keys in another order is the same input.
+    const again = await post(
+      JSON.stringify({ wheel: { inradius: 123, sides: 6, kind: "polygon" }, units: "mm", mode: spec.mode }),
+    );
+    expect(await again.json()).toEqual(first);
+    expect(solveCacheStats().hits).toBe(before.hits + 1);
+    const other = await (await post(JSON.stringify({ ...spec, wheel: { ...spec.wheel, inradius: 124 } }))).json();
+    expect(solveCacheStats().misses).toBe(before.misses + 1);
+    expect(other.period).not.toBe(first.period);
   });
 
   it("refuses a body over the size limit before parsing it", async () => {

@@ -1,7 +1,6 @@
-import { assemblySheetPdf } from "@/lib/assembly/pdf";
 import { PAPER_SIZES, type Paper } from "@/lib/assembly/sheet";
 import { revisionBaseName } from "@/lib/cut";
-import { assemblySheetFor, bumpLimitParam, requireSheetAccess } from "@/lib/server/assembly";
+import { assemblySheetPdfFor, bumpLimitParam, requireSheetAccess } from "@/lib/server/assembly";
 import { AppError } from "@/lib/server/errors";
 import { idParam, route } from "@/lib/server/route";
 
@@ -13,11 +12,16 @@ export const GET = route<{ id: string }>(async (request, params) => {
   if (!(paper in PAPER_SIZES))
     throw new AppError("bad_request", 'The paper must be "a4" or "letter".', { paper: ["a4 or letter"] });
   const units = q.get("units");
-  const sheet = await assemblySheetFor(access.plan, access, {
-    inches: units === "in" ? true : units === "mm" ? false : undefined,
-    bumpLimit: bumpLimitParam(q.get("limit")),
-  });
-  const pdf = await assemblySheetPdf(sheet, { paper: paper as Paper });
+  const { sheet, pdf } = await assemblySheetPdfFor(
+    access.plan,
+    access,
+    {
+      inches: units === "in" ? true : units === "mm" ? false : undefined,
+      bumpLimit: bumpLimitParam(q.get("limit")),
+      paper: paper as Paper,
+    },
+    request.signal,
+  );
   const name = `${revisionBaseName(sheet.design.revision, sheet.project.name, sheet.design.name)}-assembly-${paper}.pdf`;
   return new Response(new Uint8Array(pdf), {
     headers: {

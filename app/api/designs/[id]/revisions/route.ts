@@ -13,6 +13,6 @@ export const GET = route<{ id: string }>(async (_request, params) => {
 export const POST = route<{ id: string }>(async (request, params) => {
   const access = await requireDesignAccess(idParam(params.id, "design"), "manage");
   const input = await jsonBody(request, newRevisionSchema, SPEC_BODY_LIMIT);
-  const revision = await saveRevision(access.user, access.design.id, access.projectId, input);
+  const revision = await saveRevision(access.user, access.design.id, access.projectId, input, request.signal);
   return created({ revision });
 });

@@ -21,6 +21,7 @@ export const POST = route<{ id: string }>(async (request, params) => {
     choice,
     nest,
     { purpose, reason },
+    request.signal,
   );
   return created({ cutPlan: stored });
 });

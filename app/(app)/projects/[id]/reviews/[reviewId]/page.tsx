@@ -22,7 +22,6 @@ import { reviewStatus } from "@/lib/review/review-state";
 import type { RevisionSummary } from "@/lib/revision-summary";
 import { requirePageUser, requireReviewAccess } from "@/lib/server/dal";
 import { loadsForRevision } from "@/lib/server/loads";
-import { solve } from "@/lib/track";
 import { AppError } from "@/lib/server/errors";
 
 export const metadata: Metadata = { title: "Review" };
@@ -61,7 +60,6 @@ export default async function ReviewPage({
   const composed = (plan?.settings as { composed?: unknown } | undefined)?.composed;
   const loads = await loadsForRevision(
     found.revision,
-    solve(found.revision.spec),
     composed ? cutFactsOfSettings(parseCutSettings(composed)) : undefined,
   );
   const cautions = loads.report.cautions.map(cautionParts);

@@ -8,8 +8,8 @@ import { revisionByNumber } from "@/db/queries/designs";
 import { requireDesignAccess, requirePageUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
 import { checkFigures } from "@/components/studio/view/check-figures";
-import { solve, type Pt, type SolveResult } from "@/lib/track";
-import { SERVER_SOLVE_DEADLINE_MS } from "@/lib/validation/limits";
+import type { Pt, SolveResult } from "@/lib/track";
+import { solveStored } from "@/lib/server/designs";
 
 export const metadata: Metadata = { title: "Compare revisions" };
 
@@ -84,7 +84,7 @@ export default async function ComparePage({
       </>
     );
   }
-  const results = rows.map((r) => solve(r!.spec, { deadlineMs: SERVER_SOLVE_DEADLINE_MS }));
+  const results = await Promise.all(rows.map((r) => solveStored(r!.spec)));
   const all = results.flatMap((r) => r.wheel.points.map(([x, y]) => [x, y] as Pt));
   const extent = Math.max(...all.map(([x, y]) => Math.hypot(x, y))) * 1.1;
   return (

@@ -13,14 +13,12 @@ import { getProjectSite, getProjectSummary } from "@/db/queries/projects";
 import { listShopLibrary } from "@/db/queries/shop";
 import { CautionList } from "@/components/review/caution-list";
 import { Panel } from "@/components/ui/panel";
-import { jobTextFiles, loadsOf } from "@/lib/cut/export/job";
 import { cautionParts } from "@/lib/loads";
 import { loadsForRevision } from "@/lib/server/loads";
-import { solve } from "@/lib/track";
 import type { CutSettings } from "@/lib/cut/settings";
 import type { PlanChoice } from "@/lib/cut-plan/compose";
 import { formFromSettings, startingChoice } from "@/lib/cut-plan/form";
-import { jobForPlan, type CutPlanSummary } from "@/lib/server/cut-plans";
+import { jobContext, planPageFacts, type CutPlanSummary } from "@/lib/server/cut-plans";
 import { requireDesignAccess, requirePageUser } from "@/lib/server/dal";
 import { AppError } from "@/lib/server/errors";
 
@@ -101,18 +99,17 @@ export default async function CutPlanPage({
       );
   let saved: SavedPlanView | null = null;
   // The load-path cautions as the files will state them: the saved plan's board and spans, else the revision's settings.
-  let loads = plan ? null : await loadsForRevision(revision, solve(revision.spec));
+  let loads = plan ? null : await loadsForRevision(revision);
   if (plan) {
-    const job = await jobForPlan(plan, revision, found.designName);
-    loads = { report: loadsOf(job), stored: !job.loadsFromDefaults };
-    const { files, previews } = jobTextFiles(job);
+    const facts = await planPageFacts(await jobContext(plan, revision, found.designName));
+    loads = facts.loads;
     saved = {
       id: plan.id,
       number: plan.number,
       createdAt: plan.createdAt,
       createdBy: plan.createdBy,
       summary: plan.summary as unknown as CutPlanSummary,
-      files: ["job.zip", ...files.map((f) => f.name), ...previews.map((p) => p.name)],
+      files: facts.files,
     };
   }
 
