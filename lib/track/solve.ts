@@ -6,7 +6,14 @@ import { EngineError } from "./errors";
 import { hasKinks, pairFigures, trackAndWheelFigures, twinContact, wheelAndRoadFigures, type Figures } from "./figures";
 import { partnerFor, solveCentreDistance } from "./partner";
 import { piecewise } from "./piecewise";
-import { checkPairRoll, checkTrackRoll, type Curve, type RollCheck } from "./rolling-check";
+import {
+  checkPairRoll,
+  checkTrackRoll,
+  type Curve,
+  type PairRollInput,
+  type RollCheck,
+  type TrackRollInput,
+} from "./rolling-check";
 import { MAX_OUTPUT_POINTS, sampleCurve, type Pt } from "./sampling";
 import { parseSpec, specHash, type DesignSpec } from "./spec";
 import { solveTrackForWheel } from "./track-for-wheel";
@@ -43,7 +50,11 @@ interface Stages {
   geometry: SolvedGeometry;
   options?(deadline: Deadline): SolveOption[];
   check(deadline: Deadline): CheckResult;
+  /** What the check's roll is given: the output curves (for the engine bench's baseline). */
+  rollInput(deadline: Deadline): RollInput;
 }
+
+export type RollInput = { kind: "track"; input: TrackRollInput } | { kind: "pair"; input: PairRollInput };
 
 const fmt = (v: number) => Number(v.toPrecision(4)).toString();
 
@@ -148,18 +159,19 @@ function trackForWheelMode(ctx: Ctx, base: Base): Stages {
     track: { points: trackS.pts },
     motion: trackS.u.map((t, i) => ({ x: trackS.pts[i][0], angle: t })),
   };
+  const rollInput = (deadline: Deadline): TrackRollInput => ({
+    wheel: polarCurve(wheel.r, T, tfw.breaks),
+    T,
+    // The track as the engine outputs it, parametrised by the wheel angle t.
+    track: { x: (t) => tfw.x.value(t), y: (t) => -wheel.r(t), V: T, breaks: tfw.breaks },
+    H: 0,
+    size: wheel.rMax,
+    probe: { kind: "track", wheelR: wheel.r },
+    deadline,
+  });
   const check = (deadline: Deadline): CheckResult => {
     deadline.checkNow();
-    const roll = checkTrackRoll({
-      wheel: polarCurve(wheel.r, T, tfw.breaks),
-      T,
-      // The track as the engine outputs it, parametrised by the wheel angle t.
-      track: { x: (t) => tfw.x.value(t), y: (t) => -wheel.r(t), V: T, breaks: tfw.breaks },
-      H: 0,
-      size: wheel.rMax,
-      probe: { kind: "track", wheelR: wheel.r },
-      deadline,
-    });
+    const roll = checkTrackRoll(rollInput(deadline));
     const hasCorners = wheel.corners.length > 0;
     const fig = wheelAndRoadFigures(piecewise(wheel.r, 0, T, tfw.breaks, 1), hasCorners);
     const c = makeCheck(
@@ -173,7 +185,7 @@ function trackForWheelMode(ctx: Ctx, base: Base): Stages {
     );
     return { check: c, warnings: warnings(c, fig, wheel.rMax, ctx.spec.units, hasCorners, false) };
   };
-  return { geometry, check };
+  return { geometry, check, rollInput: (d) => ({ kind: "track", input: rollInput(d) }) };
 }
 
 function makeCheck(
@@ -275,8 +287,7 @@ function wheelForTrackMode(ctx: Ctx, base: Base): Stages {
       axleHeight: hh,
       rMax: hh - track.yMin,
     }));
-  const check = (deadline: Deadline): CheckResult => {
-    const inner = track.breaksX.filter((x) => x > 0 && x < P);
+  const rollInput = (deadline: Deadline): TrackRollInput => {
     const tp = trackParam(track);
     // The whole wheel outline as one curve for the interference probe: v runs over k patterns.
     const wheelCurve = (v: number): Pt => {
@@ -285,7 +296,7 @@ function wheelForTrackMode(ctx: Ctx, base: Base): Stages {
     };
     const wheelBreaks: number[] = [];
     for (let j = 0; j < k; j++) for (const b of [0, ...tp.breaks]) wheelBreaks.push(j * tp.V + b);
-    const roll = checkTrackRoll({
+    return {
       wheel: curveOf((v) => wf.point(...tp.at(v)), tp.V, tp.breaks),
       T: TAU / k,
       track: curveOf(
@@ -306,7 +317,11 @@ function wheelForTrackMode(ctx: Ctx, base: Base): Stages {
         trackY: track.yAt,
       },
       deadline,
-    });
+    };
+  };
+  const check = (deadline: Deadline): CheckResult => {
+    const inner = track.breaksX.filter((x) => x > 0 && x < P);
+    const roll = checkTrackRoll(rollInput(deadline));
     const kinks = trackKinks(track);
     const fig = trackAndWheelFigures(piecewise(track.yAt, 0, P, inner, P), h, 1, kinks);
     const c = makeCheck(
@@ -317,7 +332,7 @@ function wheelForTrackMode(ctx: Ctx, base: Base): Stages {
     );
     return { check: c, warnings: warnings(c, fig, rMax, ctx.spec.units, kinks, false) };
   };
-  return { geometry, options, check };
+  return { geometry, options, check, rollInput: (d) => ({ kind: "track", input: rollInput(d) }) };
 }
 
 function partnerMode(ctx: Ctx, base: Base): Stages {
@@ -346,17 +361,18 @@ function partnerMode(ctx: Ctx, base: Base): Stages {
     }
     return out;
   };
+  const rollInput = (deadline: Deadline): PairRollInput => ({
+    driver: polarCurve(wheel.r, T1, breaks),
+    T1,
+    driverR: wheel.r,
+    partner: curveOf(pt.point, T1, breaks),
+    T2,
+    a,
+    size: a,
+    deadline,
+  });
   const check = (deadline: Deadline): CheckResult => {
-    const roll = checkPairRoll({
-      driver: polarCurve(wheel.r, T1, breaks),
-      T1,
-      driverR: wheel.r,
-      partner: curveOf(pt.point, T1, breaks),
-      T2,
-      a,
-      size: a,
-      deadline,
-    });
+    const roll = checkPairRoll(rollInput(deadline));
     const hasCorners = wheel.corners.length > 0;
     const fig = pairFigures(piecewise(wheel.r, 0, T1, breaks, 1), a, hasCorners);
     const c: Check = {
@@ -370,7 +386,7 @@ function partnerMode(ctx: Ctx, base: Base): Stages {
     };
     return { check: c, warnings: warnings(c, fig, a - wheel.rMin, ctx.spec.units, hasCorners, true) };
   };
-  return { geometry, options, check };
+  return { geometry, options, check, rollInput: (d) => ({ kind: "pair", input: rollInput(d) }) };
 }
 
 function twinMode(ctx: Ctx, base: Base): Stages {
@@ -419,10 +435,9 @@ function twinMode(ctx: Ctx, base: Base): Stages {
     }
     return out;
   };
-  const check = (deadline: Deadline): CheckResult => {
-    const sym = pointSymmetry(track, deadline);
+  const rollInput = (deadline: Deadline): PairRollInput => {
     const tp = trackParam(track);
-    const roll = checkPairRoll({
+    return {
       driver: curveOf((v) => top.point(...tp.at(v)), tp.V, tp.breaks),
       T1: T,
       driverR: top.r,
@@ -431,7 +446,11 @@ function twinMode(ctx: Ctx, base: Base): Stages {
       a,
       size: a,
       deadline,
-    });
+    };
+  };
+  const check = (deadline: Deadline): CheckResult => {
+    const sym = pointSymmetry(track, deadline);
+    const roll = checkPairRoll(rollInput(deadline));
     const inner = track.breaksX.filter((x) => x > 0 && x < P);
     const kinks = trackKinks(track);
     const g = piecewise(track.yAt, 0, P, inner, P);
@@ -468,7 +487,7 @@ function twinMode(ctx: Ctx, base: Base): Stages {
       });
     return { check: c, warnings: warn };
   };
-  return { geometry, options, check };
+  return { geometry, options, check, rollInput: (d) => ({ kind: "pair", input: rollInput(d) }) };
 }
 
 export interface SolveOptions {
@@ -511,6 +530,12 @@ export function solve(input: unknown, opts: SolveOptions = {}): SolvedGeometry |
     : stages.geometry;
   if (opts.check === false) return geometry;
   return { ...geometry, ...stages.check(deadline) };
+}
+
+/** The rolling check's input for a spec, the output curves as the check stage receives them (for the engine bench). */
+export function rollInputOf(input: unknown): RollInput {
+  const deadline = new Deadline();
+  return stagesOf(input, deadline).rollInput(deadline);
 }
 
 export interface SolveStages {
