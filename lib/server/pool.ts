@@ -14,7 +14,7 @@ import "sharp";
 import type { TaskInput, TaskName, TaskOutput } from "@/lib/work/tasks";
 import type { WorkerMessage, WorkerReply } from "@/lib/work/worker";
 import { receivedError, TaskCancelled } from "@/lib/work/errors";
-import { POOL_GRACE_MS, POOL_QUEUE_PER_THREAD } from "@/lib/validation/limits";
+import { POOL_GRACE_MS, POOL_NICE, POOL_QUEUE_PER_THREAD } from "@/lib/validation/limits";
 import { AppError, toAppError, type ErrorPlace } from "./errors";
 
 /**
@@ -32,9 +32,9 @@ const ENDED_MID_RUN: ReadonlySet<TaskName> = new Set([
   "assemblySheet",
 ]);
 
-const envInt = (name: string, fallback: number) => {
-  const v = Number(process.env[name]);
-  return Number.isInteger(v) && v > 0 ? v : fallback;
+const envInt = (name: string, fallback: number, least = 1) => {
+  const v = Number(process.env[name] || NaN);
+  return Number.isInteger(v) && v >= least ? v : fallback;
 };
 
 /** The worker bundle: AXLEWRIGHT_WORKER_FILE, else DIST/worker/pool-worker.cjs beside the app's build. */
@@ -66,7 +66,7 @@ function pool(): Piscina {
       maxThreads: threads,
       maxQueue: queue + threads,
       idleTimeout: 60_000,
-      niceIncrement: 5,
+      niceIncrement: Math.min(19, envInt("AXLEWRIGHT_POOL_NICE", POOL_NICE, 0)),
     });
     slot.__axlewrightPool = p;
     // Loading a thread's code takes a second or two: wait for it before any deadline starts counting.
@@ -153,7 +153,11 @@ async function runOnPool<K extends TaskName>(
     return reply.value as TaskOutput<K>;
   } catch (error) {
     if (error instanceof TaskCancelled || (error instanceof Error && error.name === "AbortError")) {
-      if (signal?.aborted) throw new AppError("bad_request", CANCELLED);
+      if (signal?.aborted) {
+        // One line per task dropped: the operator sees work given up for callers that went away.
+        console.info(`[axlewright] ${task} ended: its caller went away`);
+        throw new AppError("bad_request", CANCELLED);
+      }
       throw new AppError(
         "timeout",
         "The work took too long and was stopped. Try a coarser tolerance or a simpler shape.",

@@ -61,6 +61,11 @@ export const SESSION_UPDATE_AGE = 15 * 60;
 
 /** Threads: AXLEWRIGHT_POOL_THREADS, else one per core. Waiting tasks per thread: AXLEWRIGHT_POOL_QUEUE_PER_THREAD. */
 export const POOL_QUEUE_PER_THREAD = 8;
+/**
+ * How far the pool's threads are lowered in priority (Linux nice, 0–19; AXLEWRIGHT_POOL_NICE): the
+ * most, so pages, sign-ins and downloads on the event loop run first and the solves take the rest.
+ */
+export const POOL_NICE = 19;
 /** A full queue answers 503 with this Retry-After, seconds. */
 export const BUSY_RETRY_AFTER_S = 2;
 /** Past its deadline a task gets this long to stop by itself before its thread is ended, ms. */

@@ -1,7 +1,7 @@
 // A further app instance on the same database, object store and build as the one scripts/test.mjs
 // started: `next start` on a free loopback port, with the same environment (secrets included, so a
 // session signed by one instance is good on the other). It can be killed outright (SIGKILL) and
-// started again on its port.
+// started again on its port. What it prints is kept (the last 64 kB), for tests that read its log.
 import { spawn, type ChildProcess } from "node:child_process";
 import { createServer } from "node:net";
 import path from "node:path";
@@ -19,28 +19,49 @@ async function freePort(): Promise<number> {
   });
 }
 
+const KEPT_OUTPUT = 64 * 1024;
+
 export class AppInstance {
   private child: ChildProcess | null = null;
-  private constructor(readonly port: number) {}
+  private printed = "";
+  private constructor(
+    readonly port: number,
+    private readonly extraEnv: Record<string, string>,
+  ) {}
+
+  /** What the instance printed (standard output and error), the last 64 kB. */
+  get output(): string {
+    return this.printed;
+  }
 
   get url(): string {
     return `http://127.0.0.1:${this.port}`;
   }
 
-  static async start(): Promise<AppInstance> {
-    const instance = new AppInstance(await freePort());
+  /** Starts an instance; `env` adds to (or overrides) the main instance's environment. */
+  static async start(env: Record<string, string> = {}): Promise<AppInstance> {
+    const instance = new AppInstance(await freePort(), env);
     await instance.run();
     return instance;
   }
 
   /** Starts (again) on its port and waits for /api/health. */
   async run(): Promise<void> {
-    const env = { ...process.env, NEXT_DIST_DIR: process.env.AXLEWRIGHT_TEST_DIST_DIR ?? ".next-test" };
+    const env = {
+      ...process.env,
+      NEXT_DIST_DIR: process.env.AXLEWRIGHT_TEST_DIST_DIR ?? ".next-test",
+      ...this.extraEnv,
+    };
     this.child = spawn(
       process.execPath,
       [path.join(root, "node_modules/next/dist/bin/next"), "start", "-H", "127.0.0.1", "-p", String(this.port)],
-      { cwd: root, env, stdio: "ignore" },
+      { cwd: root, env, stdio: ["ignore", "pipe", "pipe"] },
     );
+    const keep = (chunk: Buffer) => {
+      this.printed = (this.printed + chunk.toString()).slice(-KEPT_OUTPUT);
+    };
+    this.child.stdout!.on("data", keep);
+    this.child.stderr!.on("data", keep);
     const deadline = Date.now() + 60_000;
     for (;;) {
       try {
