@@ -60,6 +60,15 @@ export function goldenMax(f: Fn, a: number, b: number, iters: number): { x: numb
   return { x: m.x, f: -m.f };
 }
 
+/** How far the point (x, y), seen from the axle, sits inside a body r(t) turned by `angle` (negative: outside). */
+function depthInBody(r: Fn, x: number, y: number, angle: number): number {
+  const c = Math.cos(angle);
+  const s = Math.sin(angle);
+  const bx = x * c - y * s;
+  const by = x * s + y * c;
+  return r(Math.atan2(by, bx) + Math.PI / 2) - Math.hypot(bx, by);
+}
+
 function chordDist(p: Pt, a: Pt, b: Pt): number {
   const ex = b[0] - a[0];
   const ey = b[1] - a[1];
@@ -300,11 +309,7 @@ export function plainTrackRoll(inp: {
       const dx = tx + k * P - pose.ax;
       const dy = ty - pose.ay;
       if (Math.abs(dx) > reach || Math.abs(dy) > reach) continue;
-      const c = Math.cos(pose.alpha);
-      const s = Math.sin(pose.alpha);
-      const bx = dx * c - dy * s;
-      const by = dx * s + dy * c;
-      best = Math.max(best, probe.wheelR(Math.atan2(by, bx) + Math.PI / 2) - Math.hypot(bx, by));
+      best = Math.max(best, depthInBody(probe.wheelR, dx, dy, pose.alpha));
     }
     return best;
   };
@@ -407,11 +412,7 @@ export function plainPairRoll(inp: {
       const wx = qx * Math.cos(a2) - qy * Math.sin(a2);
       const wy = -a + qx * Math.sin(a2) + qy * Math.cos(a2);
       if (Math.abs(wx) > reach || Math.abs(wy) > reach) continue;
-      const c1 = Math.cos(pose.a1);
-      const n1 = Math.sin(pose.a1);
-      const bx = wx * c1 - wy * n1;
-      const by = wx * n1 + wy * c1;
-      best = Math.max(best, inp.driverR(Math.atan2(by, bx) + Math.PI / 2) - Math.hypot(bx, by));
+      best = Math.max(best, depthInBody(inp.driverR, wx, wy, pose.a1));
     }
     return best;
   };
